@@ -1,0 +1,10 @@
+"""derive: derive, audit and generate finite element routines.
+
+Public contract (see README and DESIGN.md):
+  derive.element(name, variant="full", state="plane-stress") -> Element
+  derive.locking_ratio(name, variant, state) -> sympy expression in r, nu
+  derive.kernel(name, variant="full", state="plane-stress", lang="numpy") -> callable
+"""
+from __future__ import annotations
+
+__version__ = "0.1.0"
