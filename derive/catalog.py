@@ -1,0 +1,136 @@
+"""Element and variant registry: the single source of element, variant and state names.
+
+Elements are described by data only (reference domain, nodes, monomial basis, rules);
+their shape functions come from :func:`derive.shapes.from_nodes` like a user-defined
+element's.  Variants name a builder in ``derive.formulations``.
+"""
+from __future__ import annotations
+
+import importlib
+from dataclasses import dataclass
+from functools import lru_cache
+
+import sympy as sp
+
+from . import shapes as shapes_mod
+from .errors import InputError
+from .material import STATES
+from .symbols import eta, xi
+
+R_ = sp.Rational
+
+
+@dataclass(frozen=True)
+class ElementInfo:
+    """Catalogue entry: what the element is made of and how it is integrated."""
+
+    name: str
+    description: str
+    domain: str
+    nodes: tuple
+    basis: tuple
+    full_rule: str
+    reduced_rule: str
+    variants: tuple[str, ...]
+    source: str = ""
+
+    @property
+    def n_nodes(self) -> int:
+        return len(self.nodes)
+
+    @property
+    def ndof(self) -> int:
+        return 2 * len(self.nodes)
+
+    def rule_name(self, which: str) -> str:
+        """Resolve "full" / "reduced" to this element's rule name; other names pass through."""
+        if which == "full":
+            return self.full_rule
+        if which == "reduced":
+            return self.reduced_rule
+        return which
+
+
+@dataclass(frozen=True)
+class VariantInfo:
+    name: str
+    description: str
+    builder: str  # "module:function" inside derive.formulations
+    source: str = ""
+
+
+_SQ = ((-1, -1), (1, -1), (1, 1), (-1, 1))
+_SQ_MID = ((0, -1), (1, 0), (0, 1), (-1, 0))
+_TRI = ((0, 0), (1, 0), (0, 1))
+_TRI_MID = ((R_(1, 2), 0), (R_(1, 2), R_(1, 2)), (0, R_(1, 2)))
+
+ELEMENTS: dict[str, ElementInfo] = {}
+VARIANTS: dict[str, VariantInfo] = {}
+
+
+def register_element(info: ElementInfo) -> None:
+    ELEMENTS[info.name] = info
+
+
+def register_variant(info: VariantInfo) -> None:
+    VARIANTS[info.name] = info
+
+
+for _v in (
+    VariantInfo("full", "displacement element, full integration", "displacement:full"),
+    VariantInfo("reduced", "uniformly reduced integration", "displacement:reduced"),
+):
+    register_variant(_v)
+
+register_element(ElementInfo(
+    "T3", "3-node linear triangle (constant strain)", "triangle", _TRI,
+    (sp.Integer(1), xi, eta), "triangle-d1", "triangle-d1", ("full",)))
+register_element(ElementInfo(
+    "T6", "6-node quadratic triangle (linear strain)", "triangle", _TRI + _TRI_MID,
+    (sp.Integer(1), xi, eta, xi ** 2, xi * eta, eta ** 2), "triangle-d2", "triangle-d1", ("full", "reduced")))
+register_element(ElementInfo(
+    "Q4", "4-node bilinear quadrilateral", "square", _SQ,
+    (sp.Integer(1), xi, eta, xi * eta), "gauss-2x2", "gauss-1x1", ("full", "reduced")))
+register_element(ElementInfo(
+    "Q8", "8-node serendipity quadrilateral", "square", _SQ + _SQ_MID,
+    (sp.Integer(1), xi, eta, xi ** 2, xi * eta, eta ** 2, xi ** 2 * eta, xi * eta ** 2),
+    "gauss-3x3", "gauss-2x2", ("full", "reduced")))
+register_element(ElementInfo(
+    "Q9", "9-node Lagrange quadrilateral", "square", _SQ + _SQ_MID + ((0, 0),),
+    (sp.Integer(1), xi, eta, xi ** 2, xi * eta, eta ** 2, xi ** 2 * eta, xi * eta ** 2, xi ** 2 * eta ** 2),
+    "gauss-3x3", "gauss-2x2", ("full", "reduced")))
+
+
+def element_info(name: str) -> ElementInfo:
+    key = name.strip().upper() if isinstance(name, str) else name
+    if key not in ELEMENTS:
+        raise InputError(f"unknown element {name!r}; allowed: {', '.join(ELEMENTS)} (or a spec file with --spec)")
+    return ELEMENTS[key]
+
+
+def check_variant(info: ElementInfo, variant: str) -> VariantInfo:
+    if variant not in VARIANTS:
+        raise InputError(f"unknown variant {variant!r}; allowed: {', '.join(VARIANTS)}")
+    if variant not in info.variants:
+        raise InputError(f"variant {variant!r} does not apply to {info.name}; {info.name} has: {', '.join(info.variants)}")
+    return VARIANTS[variant]
+
+
+def check_state(state: str) -> str:
+    if state not in STATES:
+        raise InputError(f"unknown state {state!r}; allowed: {', '.join(STATES)}")
+    return state
+
+
+@lru_cache(maxsize=None)
+def shape_set(name: str) -> shapes_mod.ShapeSet:
+    info = element_info(name)
+    return shapes_mod.from_nodes(info.name, info.domain, info.nodes, info.basis)
+
+
+def formulation(info: ElementInfo, variant: str, state: str):
+    """Build the variant's :class:`~derive.formulations.base.Formulation` for this element."""
+    v = check_variant(info, variant)
+    module, func = v.builder.split(":")
+    mod = importlib.import_module(f"derive.formulations.{module}")
+    return getattr(mod, func)(info, state)

@@ -1,0 +1,75 @@
+"""Command-line front end: parse arguments, call the library, print.  No mechanics here.
+
+Each command lives in ``derive/commands/<name>_cmd.py`` with ``NAME``, ``HELP``,
+``EXAMPLE``, ``add_arguments(parser)`` and ``run(args) -> exit status``; add a new
+command by adding its module name to ``COMMANDS``.
+
+Exit status: 0 success; 1 a check ran and failed; 2 bad input; 3 internal error.
+"""
+from __future__ import annotations
+
+import argparse
+import importlib
+import sys
+
+from . import __version__
+from .errors import DeriveError
+from .output import CAUTION
+
+COMMANDS = ("list", "shapes", "stiffness", "locking", "chart", "kernel", "modes", "patch", "bench", "check",
+            "perf", "demo")
+
+
+def _load(name: str):
+    try:
+        return importlib.import_module(f"derive.commands.{name}_cmd")
+    except ModuleNotFoundError as exc:
+        if exc.name == f"derive.commands.{name}_cmd":
+            return None
+        raise
+
+
+def build_parser() -> argparse.ArgumentParser:
+    parser = argparse.ArgumentParser(
+        prog="derive",
+        description="Derive, audit and generate finite element routines: shape functions, Jacobians, "
+                    "B matrices, stiffness, locking, kernels and verification.",
+        epilog="example:\n  derive stiffness Q4 --geometry rectangle\n\n" + CAUTION,
+        formatter_class=argparse.RawDescriptionHelpFormatter)
+    parser.add_argument("--version", action="version", version=f"derive {__version__}")
+    sub = parser.add_subparsers(dest="command", metavar="COMMAND")
+    for name in COMMANDS:
+        mod = _load(name)
+        if mod is None:
+            continue
+        p = sub.add_parser(mod.NAME, help=mod.HELP, description=mod.HELP,
+                           epilog=mod.EXAMPLE + "\n\n" + CAUTION, formatter_class=argparse.RawDescriptionHelpFormatter)
+        mod.add_arguments(p)
+        p.set_defaults(_run=mod.run)
+    return parser
+
+
+def main(argv: list[str] | None = None) -> int:
+    parser = build_parser()
+    args = parser.parse_args(argv)
+    if not getattr(args, "command", None):
+        parser.print_help()
+        return 2
+    try:
+        return int(args._run(args) or 0)
+    except DeriveError as exc:
+        print(f"derive {args.command}: error: {exc}", file=sys.stderr)
+        return 2
+    except KeyboardInterrupt:
+        print(f"derive {args.command}: interrupted", file=sys.stderr)
+        return 130
+    except BrokenPipeError:
+        return 0
+    except Exception as exc:  # never a traceback for the user; say what failed in one line
+        print(f"derive {args.command}: internal error: {type(exc).__name__}: {exc} "
+              "(please report it with the command line)", file=sys.stderr)
+        return 3
+
+
+def entry() -> None:
+    sys.exit(main())

@@ -1,0 +1,58 @@
+"""Helpers shared by the command modules: element resolution, output options, printing."""
+from __future__ import annotations
+
+import argparse
+import sys
+from pathlib import Path
+
+from .. import catalog
+from ..element import Element, element, from_spec
+from ..errors import InputError
+from ..material import STATES
+from ..output import CAUTION, FORMATS, emit_json
+
+
+class HelpFormatter(argparse.RawDescriptionHelpFormatter):
+    pass
+
+
+def add_element_args(p: argparse.ArgumentParser, variant: bool = True, state: bool = True) -> None:
+    p.add_argument("element", help="catalogue name (" + ", ".join(catalog.ELEMENTS) + ") or a spec .toml file")
+    if variant:
+        p.add_argument("--variant", default="full", help="formulation variant (default: full); see `derive list`")
+    if state:
+        p.add_argument("--state", default="plane-stress", help="plane-stress (default), plane-strain, axisymmetric")
+
+
+def add_output_args(p: argparse.ArgumentParser, formats: bool = True) -> None:
+    if formats:
+        p.add_argument("--format", choices=FORMATS, default="text", help="output format (default: text)")
+    p.add_argument("--json", action="store_true", help="machine-readable JSON output (alias of --format json)")
+
+
+def output_format(args) -> str:
+    if getattr(args, "json", False):
+        return "json"
+    return getattr(args, "format", "text")
+
+
+def resolve_element(name: str, variant: str = "full", state: str = "plane-stress") -> Element:
+    """Catalogue name, or a path to a spec file (``.toml``)."""
+    if state not in STATES:
+        raise InputError(f"unknown state {state!r}; allowed: {', '.join(STATES)}")
+    path = Path(name)
+    if name.lower().endswith(".toml") or (path.exists() and path.is_file()):
+        from ..spec import SPEC_DIR, load_spec
+        if not path.exists() and (SPEC_DIR / path.name).exists():
+            path = SPEC_DIR / path.name
+        info, shapes = load_spec(path)
+        return from_spec(info, shapes, variant, state)
+    return element(name, variant, state)
+
+
+def print_json(obj) -> None:
+    sys.stdout.write(emit_json(obj) + "\n")
+
+
+def caution_line() -> str:
+    return CAUTION

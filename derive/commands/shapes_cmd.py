@@ -1,0 +1,60 @@
+"""`derive shapes ELEMENT`: shape functions, their checks, and the isoparametric map."""
+from __future__ import annotations
+
+import sympy as sp
+
+from ..output import display, matrix_latex
+from ..symbols import eta, xi
+from .common import add_element_args, add_output_args, output_format, print_json, resolve_element
+
+NAME = "shapes"
+HELP = "shape functions with partition-of-unity, Kronecker-delta and completeness checks"
+EXAMPLE = ("examples:\n  derive shapes Q8\n  derive shapes T6 --format latex\n"
+           "  derive shapes q12-cubic-serendipity.toml --json\n"
+           "  derive shapes Q4 --geometry parallelogram   # adds the map, J, det J")
+
+
+def add_arguments(p) -> None:
+    add_element_args(p, variant=False, state=False)
+    p.add_argument("--geometry", choices=("rectangle", "parallelogram", "general"),
+                   help="also print the isoparametric map, Jacobian and det J for this geometry")
+    add_output_args(p)
+
+
+def run(args) -> int:
+    el = resolve_element(args.element)
+    sh = el.shapes
+    checks = sh.checks()
+    fmt = output_format(args)
+    data = {"element": el.name, "domain": sh.domain, "nodes": [[str(u), str(v)] for u, v in sh.nodes],
+            "basis": [str(m) for m in sh.basis], "shape_functions": [str(f) for f in sh.functions],
+            "checks": checks}
+    imap = None
+    if args.geometry:
+        imap = el.map(args.geometry)
+        data["map"] = {"geometry": args.geometry, "x": str(imap.x), "y": str(imap.y),
+                       "jacobian": [[str(display(v)) for v in row] for row in imap.jacobian.tolist()],
+                       "det_jacobian": str(display(imap.det))}
+    if fmt == "json":
+        print_json(data)
+        return 0
+    if fmt == "latex":
+        for i, f in enumerate(sh.functions, start=1):
+            print(f"N_{{{i}}} = {sp.latex(f)} \\\\")
+        if imap is not None:
+            print(matrix_latex(imap.jacobian.applyfunc(display), "J"))
+            print(f"\\det J = {sp.latex(display(imap.det))}")
+        return 0
+    print(f"{el.name}: {el.info.description} on the {sh.domain} reference domain")
+    print("basis: {" + ", ".join(map(str, sh.basis)) + "}")
+    for i, (f, (u, v)) in enumerate(zip(sh.functions, sh.nodes), start=1):
+        print(f"N{i} (node at xi={u}, eta={v}) = {f}")
+    print("checks:")
+    print(f"  partition of unity (sum N_i = 1): {'yes' if checks['partition_of_unity'] else 'NO'}")
+    print(f"  Kronecker delta at the nodes:     {'yes' if checks['kronecker_delta'] else 'NO'}")
+    print(f"  completeness degree:              {checks['completeness']}")
+    if imap is not None:
+        print(f"map ({args.geometry}): x = {imap.x}, y = {imap.y}")
+        print(f"J = {imap.jacobian.applyfunc(display).tolist()}")
+        print(f"det J = {display(imap.det)}")
+    return 0

@@ -1,0 +1,89 @@
+"""`derive stiffness ELEMENT`: closed-form or rule-evaluated stiffness, B and D matrices."""
+from __future__ import annotations
+
+import numpy as np
+import sympy as sp
+
+from ..errors import InputError
+from ..material import D as D_matrix
+from ..output import (check_unknown, display, matrix_latex, matrix_text, numeric_text, parse_number, parse_set,
+                      to_float_matrix)
+from ..symbols import E, nu, t
+from .common import add_element_args, add_output_args, caution_line, output_format, print_json, resolve_element
+
+NAME = "stiffness"
+HELP = "element stiffness K (or B, D), closed form or as the element's rule computes it"
+EXAMPLE = ("examples:\n"
+           "  derive stiffness Q4 --geometry rectangle\n"
+           "  derive stiffness Q4 --geometry rectangle --set a=2,b=0.5,E=210e9,nu=0.3,t=0.01\n"
+           "  derive stiffness T3 --nodes \"0,0 2,0 0,1\" --set E=1,nu=1/4,t=1 --json\n"
+           "  derive stiffness Q8 --geometry parallelogram --state plane-strain --format latex\n"
+           "  derive stiffness Q4 --what B --geometry rectangle")
+
+
+def add_arguments(p) -> None:
+    add_element_args(p)
+    p.add_argument("--geometry", default="rectangle", choices=("rectangle", "parallelogram", "general"),
+                   help="rectangle 2a x 2b (default), parallelogram (a, b, skew c), general (x1, y1, ...)")
+    p.add_argument("--nodes", help='numeric nodal coordinates "x1,y1 x2,y2 ..." (overrides --geometry)')
+    p.add_argument("--rule", default="element",
+                   help="element (each term with its own rule, default), exact, or a rule such as gauss-3x3")
+    p.add_argument("--what", default="K", choices=("K", "B", "D"), help="matrix to print (default K)")
+    p.add_argument("--set", dest="values", help="numeric values, e.g. a=2,b=0.5,E=210e9,nu=0.3,t=0.01")
+    add_output_args(p)
+
+
+def parse_nodes(text: str) -> list[list[sp.Rational]]:
+    rows = []
+    for k, item in enumerate(text.split(), start=1):
+        parts = item.split(",")
+        if len(parts) != 2:
+            raise InputError(f"--nodes: node {k} ({item!r}) must be x,y with no spaces inside, e.g. \"0,0 2,0 0,1\"")
+        rows.append([parse_number(parts[0], f"--nodes node {k} x"), parse_number(parts[1], f"--nodes node {k} y")])
+    if not rows:
+        raise InputError("--nodes is empty; give \"x1,y1 x2,y2 ...\"")
+    return rows
+
+
+def run(args) -> int:
+    el = resolve_element(args.element, args.variant, args.state)
+    values = parse_set(args.values)
+    geometry = parse_nodes(args.nodes) if args.nodes else args.geometry
+    mat = {k: values.get(s) for k, s in (("E", E), ("nu", nu), ("t", t))}
+    if args.what == "D":
+        M = D_matrix(el.state, mat["E"] if mat["E"] is not None else E, mat["nu"] if mat["nu"] is not None else nu)
+        label = "D"
+    elif args.what == "B":
+        M = el.B(geometry)
+        label = "B"
+    else:
+        M = el.stiffness(geometry, rule=args.rule, E=mat["E"], nu=mat["nu"], t=mat["t"])
+        label = "K"
+    rest = {s: v for s, v in values.items() if s not in (E, nu, t)}
+    check_unknown(values, M.free_symbols | {E, nu, t}, f"{label} of {el.name}")
+    if rest:
+        M = M.subs(rest)
+    numeric = not (M.free_symbols - {sp.Symbol("xi"), sp.Symbol("eta")}) and args.what != "B"
+    fmt = output_format(args)
+    header = {"element": el.name, "variant": el.variant, "state": el.state,
+              "geometry": "nodes" if args.nodes else args.geometry, "rule": args.rule, "matrix": label,
+              "dof_order": "interleaved u1, v1, u2, v2, ...", "shape": [M.rows, M.cols]}
+    if numeric:
+        A = to_float_matrix(M)
+        if fmt == "json":
+            print_json({**header, "numeric": True, "values": A.tolist(), "caution": caution_line()})
+        else:
+            print(f"# {label} of {el.name} ({el.variant}, {el.state}), numeric")
+            print(numeric_text(A))
+        return 0
+    if fmt == "json":
+        print_json({**header, "numeric": False, "entries": [[str(v) for v in row] for row in M.tolist()],
+                    "symbols": sorted(s.name for s in M.free_symbols), "caution": caution_line()})
+    elif fmt == "latex":
+        print(matrix_latex(M, label))
+    else:
+        print(f"# {label} of {el.name} ({el.variant}, {el.state}), geometry {header['geometry']}, rule {args.rule}")
+        print("# DOFs interleaved u1, v1, u2, v2, ...; symmetric, upper triangle shown")
+        print("# index-base: 0")
+        print(matrix_text(M, label, symmetric=(label != "B")))
+    return 0

@@ -1,0 +1,134 @@
+"""The Element object of the public contract: ``derive.element(name, variant, state)``."""
+from __future__ import annotations
+
+from dataclasses import dataclass, field
+from functools import cached_property, lru_cache
+
+import numpy as np
+import sympy as sp
+
+from . import catalog, quadrature
+from .catalog import ElementInfo
+from .errors import InputError
+from .formulations.base import Formulation, Point
+from .geometry import Geometry, IsoMap, make_geometry, validity_report
+from .material import check_material
+from .shapes import ShapeSet
+from .stiffness import (NotPolynomial, condense_exact, condense_symbolic, exact_blocks, numeric_stiffness,
+                        point_blocks)
+from .symbols import E as E_sym
+from .symbols import eta, nu as nu_sym, t as t_sym, xi
+
+RULE_CHOICES = ("element", "exact")
+
+
+@dataclass(frozen=True)
+class Element:
+    """One element, one variant, one state: shape functions, map, B and stiffness."""
+
+    info: ElementInfo
+    variant: str
+    state: str
+    shapes: ShapeSet = field(compare=False)
+
+    @property
+    def name(self) -> str:
+        return self.info.name
+
+    @property
+    def shape_functions(self) -> tuple[sp.Expr, ...]:
+        return self.shapes.functions
+
+    @cached_property
+    def formulation(self) -> Formulation:
+        return catalog.formulation(self.info, self.variant, self.state)
+
+    @property
+    def ndof(self) -> int:
+        return self.info.ndof
+
+    def map(self, geometry="rectangle") -> IsoMap:
+        """Isoparametric map for a geometry kind name or numeric (n, 2) nodes."""
+        geom = make_geometry(self.shapes, geometry, axisymmetric=self.state == "axisymmetric")
+        return IsoMap(self.shapes, geom)
+
+    def B(self, geometry="rectangle") -> sp.Matrix:
+        """Standard displacement B(xi, eta) for the geometry (entries cancelled)."""
+        imap = self.map(geometry)
+        B = Point(imap, self.state, xi, eta).B
+        return B.applyfunc(sp.cancel) if imap.is_affine else B
+
+    def validity(self, nodes) -> dict:
+        """Validity report (det J over the element and at the full rule's points)."""
+        imap = self.map(nodes)
+        return validity_report(imap, quadrature.rule(self.info.full_rule).points)
+
+    def _rule_for(self, rule: str):
+        if rule == "exact":
+            return lambda term: None
+        if rule == "element":
+            return lambda term: self.info.rule_name(term.rule)
+        quadrature.rule(rule)  # validates the name
+        return lambda term: rule
+
+    def stiffness(self, geometry="rectangle", rule: str = "element", E=None, nu=None, t=None) -> sp.Matrix:
+        """Element stiffness as a sympy Matrix.
+
+        ``rule``: "element" (each term with the formulation's own rule, the default),
+        "exact" (every integral exact over the reference domain: affine geometry only), or
+        a rule name such as "gauss-3x3" that replaces every term's rule.  Material values
+        default to the symbols E, nu, t.  Numeric nodes on non-affine shapes are evaluated
+        at 30-digit Float rule points.
+        """
+        check_material(self.state, E, nu)
+        material = {"E": E_sym if E is None else sp.nsimplify(E, rational=True),
+                    "nu": nu_sym if nu is None else sp.nsimplify(nu, rational=True),
+                    "t": t_sym if t is None else sp.nsimplify(t, rational=True)}
+        imap = self.map(geometry)
+        if imap.geometry.numeric:
+            validity_report(imap, quadrature.rule(self.info.full_rule).points)
+        rule_for = self._rule_for(rule)
+        form = self.formulation
+        if imap.is_affine and self.state != "axisymmetric":
+            try:
+                blocks = exact_blocks(form, imap, self.state, material, rule_for)
+                return condense_exact(blocks, self.ndof, form.n_internal)
+            except NotPolynomial:
+                pass
+        if rule == "exact":
+            raise InputError("exact integration needs a polynomial integrand (rectangle, parallelogram or "
+                             "straight-sided triangle in a plane state); use --rule element or a Gauss rule")
+        if imap.geometry.kind == "general" and form.n_internal:
+            raise InputError(f"{self.name} {self.variant} on general symbolic geometry needs a symbolic condensation "
+                             "that is too large to be useful; give numeric nodes or use the generated kernel")
+        if imap.geometry.numeric:
+            imap = _float_points_map(imap)
+        blocks = point_blocks(form, imap, self.state, material, lambda term: rule_for(term))
+        K = condense_symbolic(blocks, self.ndof, form.n_internal)
+        return K
+
+    def numeric_stiffness(self, xy, E: float, nu: float, t: float = 1.0) -> np.ndarray:
+        """Float64 stiffness for one element (nodes, 2) or a batch (n, nodes, 2)."""
+        if self.info.name not in catalog.ELEMENTS:
+            raise InputError("numeric batches are available for catalogue elements only")
+        return numeric_stiffness(self.info.name, self.variant, self.state, xy, E, nu, t)
+
+
+def _float_points_map(imap: IsoMap) -> IsoMap:
+    return imap  # numeric exact coordinates stay exact; points route handles radicals lazily
+
+
+@lru_cache(maxsize=None)
+def element(name: str, variant: str = "full", state: str = "plane-stress") -> Element:
+    """Catalogue element by name (T3, T6, Q4, Q8, Q9), variant and state."""
+    info = catalog.element_info(name)
+    catalog.check_variant(info, variant)
+    catalog.check_state(state)
+    return Element(info, variant, state, catalog.shape_set(info.name))
+
+
+def from_spec(info: ElementInfo, shapes: ShapeSet, variant: str = "full", state: str = "plane-stress") -> Element:
+    """Element for a user-defined spec (see :mod:`derive.spec`)."""
+    catalog.check_variant(info, variant)
+    catalog.check_state(state)
+    return Element(info, variant, state, shapes)

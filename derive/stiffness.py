@@ -1,0 +1,250 @@
+"""Integration of a formulation's terms and static condensation.
+
+Three routes, one formulation structure (:mod:`derive.formulations.base`):
+
+* ``exact`` polynomial route: on affine geometry (rectangle, parallelogram, straight
+  triangles) every integrand is a polynomial in xi, eta.  Operator entries are turned into
+  sparse polynomials over the field Q(parameters) and integrated term by term from a
+  moment table: the exact monomial integrals of the reference domain (closed form), or
+  the rule's own moments sum_g w_g xi_g^p eta_g^q ("as the element's rule computes it",
+  which is how reduced and selective rules are evaluated exactly).  No sympy.integrate,
+  no simplify: the field arithmetic keeps every entry a cancelled rational function.
+* ``points`` route: any geometry, symbolic or numeric; sum over the rule's points of
+  w L^T M R detJ thick, unsimplified (general symbolic geometry, axisymmetric).
+* ``numeric`` route (:func:`numeric_stiffness`): the per-point operator matrices for
+  general symbolic coordinates are lambdified once per (element, variant, state) and
+  evaluated in float64 for a batch of elements, then condensed with numpy.
+"""
+from __future__ import annotations
+
+from functools import lru_cache
+
+import numpy as np
+import sympy as sp
+from sympy.polys.domains import QQ
+from sympy.polys.matrices import DomainMatrix
+from sympy.polys.rings import ring
+
+from . import quadrature, reference
+from .errors import InputError
+from .formulations.base import Formulation, Point, Term
+from .geometry import IsoMap
+from .symbols import eta, xi
+
+
+# ---------------------------------------------------------------------------------------------
+# moment tables
+
+@lru_cache(maxsize=None)
+def rule_moment(rule_name: str, p: int, q: int) -> sp.Expr:
+    """sum_g w_g xi_g^p eta_g^q for a named rule, exact (radicals cancelled)."""
+    rl = quadrature.rule(rule_name)
+    s = sum(w * px ** p * py ** q for (px, py), w in zip(rl.points, rl.weights))
+    s = sp.nsimplify(sp.radsimp(sp.expand(s)))
+    return s
+
+
+def _moments(domain: str, rule_name: str | None):
+    if rule_name is None:
+        return lambda p, q: reference.monomial_integral(domain, p, q)
+    return lambda p, q: rule_moment(rule_name, p, q)
+
+
+# ---------------------------------------------------------------------------------------------
+# exact polynomial route
+
+class NotPolynomial(Exception):
+    """An integrand is not a polynomial in xi, eta: the exact route does not apply."""
+
+
+def _field(exprs) -> object:
+    syms = set()
+    for e in exprs:
+        syms |= getattr(e, "free_symbols", set())
+    syms -= {xi, eta}
+    syms = sorted(syms, key=lambda s: s.name)
+    return QQ.frac_field(*syms) if syms else QQ
+
+
+def _evaluate_terms(form: Formulation, imap: IsoMap, state: str, material: dict):
+    """Evaluate L, M, R and the weight factor of every term at the symbolic point."""
+    pt = Point(imap, state, xi, eta, **material)
+    out = []
+    for term in form.terms:
+        L = term.left(pt)
+        M = term.middle(pt)
+        Rm = L if term.symmetric and term.right is term.left else term.right(pt)
+        g = pt.detJ * pt.thick * term.factor
+        out.append((term, L, M, Rm, g))
+    return out
+
+
+def exact_blocks(form: Formulation, imap: IsoMap, state: str, material: dict, rule_for) -> dict:
+    """Blocks as DomainMatrix over one field, by the exact polynomial route.
+
+    ``rule_for(term)`` returns a rule name, or None for exact integration over the domain.
+    Raises :class:`NotPolynomial` when an integrand is not polynomial.
+    """
+    evaluated = _evaluate_terms(form, imap, state, material)
+    everything = []
+    for term, L, M, Rm, g in evaluated:
+        if M.free_symbols & {xi, eta}:
+            raise NotPolynomial("material matrix varies over the element")
+        everything += list(L) + list(M) + list(Rm) + [g]
+    F = _field(everything)
+    Rg, X, Y = ring([xi, eta], F)
+
+    def conv(e):
+        try:
+            return Rg.from_expr(sp.expand(e)) if e != 0 else Rg.zero
+        except Exception as exc:  # sympy raises several types for non-polynomials
+            raise NotPolynomial(str(e)) from exc
+
+    blocks: dict[str, DomainMatrix] = {}
+    for term, L, M, Rm, g in evaluated:
+        moments = _moments(imap.shapes.domain, rule_for(term))
+        mom_cache: dict = {}
+
+        def integral(poly):
+            total = F.zero
+            for (pp, qq), coeff in poly.terms():
+                key = (pp, qq)
+                if key not in mom_cache:
+                    mom_cache[key] = F.convert(moments(pp, qq))
+                mk = mom_cache[key]
+                if mk:
+                    total += coeff * mk
+            return total
+
+        gp = conv(g)
+        Lp = {(k, i): conv(L[k, i]) for k in range(L.rows) for i in range(L.cols) if L[k, i] != 0}
+        Rp = {(l, j): conv(Rm[l, j]) * gp for l in range(Rm.rows) for j in range(Rm.cols) if Rm[l, j] != 0}
+        Mf = {(k, l): F.from_sympy(M[k, l]) for k in range(M.rows) for l in range(M.cols) if M[k, l] != 0}
+        rows, cols = L.cols, Rm.cols
+        out = [[F.zero] * cols for _ in range(rows)]
+        for (k, i), lp in Lp.items():
+            for (l, j), rp in Rp.items():
+                if term.symmetric and j < i:
+                    continue
+                mkl = Mf.get((k, l))
+                if mkl is None:
+                    continue
+                out[i][j] += mkl * integral(lp * rp)
+        if term.symmetric:
+            for i in range(rows):
+                for j in range(i):
+                    out[i][j] = out[j][i]
+        if term.factor != 1:
+            pass  # factor already inside g
+        dm = DomainMatrix(out, (rows, cols), F)
+        blocks[term.block] = blocks[term.block] + dm if term.block in blocks else dm
+    return blocks
+
+
+def condense_exact(blocks: dict, ndof: int, n_internal: int) -> sp.Matrix:
+    """K = K_uu - K_ua K_aa^-1 K_ua^T in exact field arithmetic, returned as a sympy Matrix."""
+    F = next(iter(blocks.values())).domain
+    Kuu = blocks.get("uu", DomainMatrix.zeros((ndof, ndof), F))
+    if n_internal:
+        Kua, Kaa = blocks["ua"], blocks["aa"]
+        X = Kaa.lu_solve(Kua.transpose())
+        Kuu = Kuu - Kua * X
+    return Kuu.to_Matrix()
+
+
+# ---------------------------------------------------------------------------------------------
+# point route
+
+def point_blocks(form: Formulation, imap: IsoMap, state: str, material: dict, rule_for_name) -> dict:
+    """Blocks as sympy matrices by summing over each term's rule points (any geometry)."""
+    blocks: dict[str, sp.Matrix] = {}
+    points_cache: dict = {}
+    for term in form.terms:
+        rl = quadrature.rule(rule_for_name(term))
+        acc = None
+        for (px, py), w in zip(rl.points, rl.weights):
+            key = (px, py)
+            if key not in points_cache:
+                points_cache[key] = Point(imap, state, px, py, **material)
+            pt = points_cache[key]
+            L = term.left(pt)
+            M = term.middle(pt)
+            Rm = L if term.symmetric and term.right is term.left else term.right(pt)
+            contrib = (L.T * M * Rm) * (w * pt.detJ * pt.thick * term.factor)
+            acc = contrib if acc is None else acc + contrib
+        blocks[term.block] = acc if term.block not in blocks else blocks[term.block] + acc
+    return blocks
+
+
+def condense_symbolic(blocks: dict, ndof: int, n_internal: int) -> sp.Matrix:
+    Kuu = blocks.get("uu", sp.zeros(ndof, ndof))
+    if n_internal:
+        Kua, Kaa = blocks["ua"], blocks["aa"]
+        Kuu = Kuu - Kua * Kaa.LUsolve(Kua.T)
+    return Kuu
+
+
+# ---------------------------------------------------------------------------------------------
+# numeric route
+
+@lru_cache(maxsize=None)
+def _numeric_plan(element_key: tuple):
+    """Lambdified per-point operator matrices for general symbolic geometry (cached)."""
+    from .element import element as make_element  # local import: element.py imports this module
+    name, variant, state = element_key
+    el = make_element(name, variant, state)
+    imap = el.map("general")
+    from .symbols import E, nu, t
+    xs, ys = imap.geometry.xs, imap.geometry.ys
+    args = list(xs) + list(ys) + [E, nu, t]
+    plan = []
+    for term in el.formulation.terms:
+        rl = quadrature.rule(el.info.rule_name(term.rule))
+        pts_np, w_np = rl.numeric()
+        funcs = []
+        for (px, py) in rl.points:
+            pxf, pyf = sp.Float(px.evalf(30), 30), sp.Float(py.evalf(30), 30)
+            pt = Point(imap, state, pxf, pyf)
+            L = term.left(pt)
+            M = term.middle(pt)
+            Rm = L if term.symmetric and term.right is term.left else term.right(pt)
+            scale = pt.detJ * pt.thick * term.factor
+            flat = list(L) + list(M) + list(Rm) + [scale]
+            f = sp.lambdify(args, flat, "numpy", cse=True)
+            funcs.append((f, L.shape, M.shape, Rm.shape))
+        plan.append((term.block, funcs, w_np))
+    return el.info.ndof, el.formulation.n_internal, plan
+
+
+def numeric_stiffness(name: str, variant: str, state: str, xy, E: float, nu: float, t: float = 1.0) -> np.ndarray:
+    """Float64 stiffness of one element (xy: (nodes, 2)) or a batch (xy: (n, nodes, 2)).
+
+    Evaluates the same formulation terms as the symbolic routes, point by point, then
+    condenses internal unknowns with numpy.  A reference implementation, not a fast kernel.
+    """
+    from .material import check_material
+    check_material(state, E, nu)
+    xy = np.asarray(xy, dtype=float)
+    single = xy.ndim == 2
+    if single:
+        xy = xy[None]
+    ndof, n_int, plan = _numeric_plan((name, variant, state))
+    n = xy.shape[0]
+    args = [xy[:, i, 0] for i in range(xy.shape[1])] + [xy[:, i, 1] for i in range(xy.shape[1])] + [E, nu, t]
+    blocks: dict[str, np.ndarray] = {}
+    for block, funcs, weights in plan:
+        for (f, ls, ms, rs), w in zip(funcs, weights):
+            vals = [np.broadcast_to(np.asarray(v, dtype=float), (n,)) for v in f(*args)]
+            k1, k2, k3 = ls[0] * ls[1], ms[0] * ms[1], rs[0] * rs[1]
+            L = np.stack(vals[:k1], axis=1).reshape(n, *ls)
+            M = np.stack(vals[k1:k1 + k2], axis=1).reshape(n, *ms)
+            Rm = np.stack(vals[k1 + k2:k1 + k2 + k3], axis=1).reshape(n, *rs)
+            scale = vals[-1]
+            contrib = np.einsum("nki,nkl,nlj->nij", L, M, Rm) * (w * scale)[:, None, None]
+            blocks[block] = blocks[block] + contrib if block in blocks else contrib
+    K = blocks.get("uu", np.zeros((n, ndof, ndof)))
+    if n_int:
+        Kua, Kaa = blocks["ua"], blocks["aa"]
+        K = K - Kua @ np.linalg.solve(Kaa, np.transpose(Kua, (0, 2, 1)))
+    return K[0] if single else K
+
