@@ -1,0 +1,133 @@
+"""Independent textbook finite element routines for the tests (numpy only).
+
+Written from the textbook definitions, not from derive: hand-typed shape functions,
+Gauss points from numpy.polynomial.legendre.leggauss (reference library), the 3-point
+triangle rule with points (1/6, 1/6), (2/3, 1/6), (1/6, 2/3) and weights 1/6 (Strang &
+Fix (1973), from memory), and K = sum_g w_g B^T D B det J t.
+"""
+from __future__ import annotations
+
+import numpy as np
+
+
+def D_matrix(state: str, E: float, nu: float) -> np.ndarray:
+    if state == "plane-stress":
+        return E / (1 - nu ** 2) * np.array([[1, nu, 0], [nu, 1, 0], [0, 0, (1 - nu) / 2]])
+    if state == "plane-strain":
+        f = E / ((1 + nu) * (1 - 2 * nu))
+        return f * np.array([[1 - nu, nu, 0], [nu, 1 - nu, 0], [0, 0, (1 - 2 * nu) / 2]])
+    f = E / ((1 + nu) * (1 - 2 * nu))
+    return f * np.array([[1 - nu, nu, nu, 0], [nu, 1 - nu, nu, 0], [nu, nu, 1 - nu, 0], [0, 0, 0, (1 - 2 * nu) / 2]])
+
+
+def shape(name: str, s: float, t: float):
+    """(N, dN/ds, dN/dt) of the textbook element at reference point (s, t)."""
+    if name == "Q4":
+        sn = np.array([-1, 1, 1, -1.0]); tn = np.array([-1, -1, 1, 1.0])
+        N = (1 + sn * s) * (1 + tn * t) / 4
+        return N, sn * (1 + tn * t) / 4, tn * (1 + sn * s) / 4
+    if name == "Q8":
+        sn = np.array([-1, 1, 1, -1.0]); tn = np.array([-1, -1, 1, 1.0])
+        N = np.zeros(8); ds = np.zeros(8); dt = np.zeros(8)
+        N[:4] = (1 + sn * s) * (1 + tn * t) * (sn * s + tn * t - 1) / 4
+        ds[:4] = sn * (1 + tn * t) * (2 * sn * s + tn * t) / 4
+        dt[:4] = tn * (1 + sn * s) * (sn * s + 2 * tn * t) / 4
+        # mid-side nodes 5 (0,-1), 6 (1,0), 7 (0,1), 8 (-1,0)
+        N[4] = (1 - s * s) * (1 - t) / 2; ds[4] = -s * (1 - t); dt[4] = -(1 - s * s) / 2
+        N[5] = (1 + s) * (1 - t * t) / 2; ds[5] = (1 - t * t) / 2; dt[5] = -t * (1 + s)
+        N[6] = (1 - s * s) * (1 + t) / 2; ds[6] = -s * (1 + t); dt[6] = (1 - s * s) / 2
+        N[7] = (1 - s) * (1 - t * t) / 2; ds[7] = -(1 - t * t) / 2; dt[7] = -t * (1 - s)
+        return N, ds, dt
+    if name == "Q9":
+        def l(x):  # 1-D quadratic Lagrange at -1, 0, 1 and derivatives
+            return np.array([x * (x - 1) / 2, 1 - x * x, x * (x + 1) / 2]), np.array([x - 0.5, -2 * x, x + 0.5])
+        ls, dls = l(s); lt, dlt = l(t)
+        idx = [(0, 0), (2, 0), (2, 2), (0, 2), (1, 0), (2, 1), (1, 2), (0, 1), (1, 1)]
+        N = np.array([ls[i] * lt[j] for i, j in idx])
+        return N, np.array([dls[i] * lt[j] for i, j in idx]), np.array([ls[i] * dlt[j] for i, j in idx])
+    if name == "T3":
+        return np.array([1 - s - t, s, t]), np.array([-1.0, 1, 0]), np.array([-1.0, 0, 1])
+    if name == "T6":
+        L1, L2, L3 = 1 - s - t, s, t
+        N = np.array([L1 * (2 * L1 - 1), L2 * (2 * L2 - 1), L3 * (2 * L3 - 1), 4 * L1 * L2, 4 * L2 * L3, 4 * L3 * L1])
+        ds = np.array([-(4 * L1 - 1), 4 * L2 - 1, 0, 4 * (L1 - L2), 4 * L3, -4 * L3])
+        dt = np.array([-(4 * L1 - 1), 0, 4 * L3 - 1, -4 * L2, 4 * L2, 4 * (L1 - L3)])
+        return N, ds, dt
+    raise KeyError(name)
+
+
+def rule(name: str, full: bool = True):
+    """(points, weights) of the element's textbook rule."""
+    if name in ("Q4", "Q8", "Q9"):
+        n = {"Q4": 2, "Q8": 3, "Q9": 3}[name] - (0 if full else 1)
+        g, w = np.polynomial.legendre.leggauss(n)
+        pts = [(x, y) for y in g for x in g]
+        wts = [wx * wy for wy in w for wx in w]
+        return pts, wts
+    if name == "T3" or (name == "T6" and not full):
+        return [(1 / 3, 1 / 3)], [0.5]
+    return [(1 / 6, 1 / 6), (2 / 3, 1 / 6), (1 / 6, 2 / 3)], [1 / 6] * 3
+
+
+def stiffness(name: str, xy: np.ndarray, E: float, nu: float, t: float, state: str = "plane-stress",
+              full: bool = True) -> np.ndarray:
+    """Textbook K = sum_g w B^T D B det J t (axisymmetric: t replaced by 2 pi r)."""
+    D = D_matrix(state, E, nu)
+    n = xy.shape[0]
+    K = np.zeros((2 * n, 2 * n))
+    for (s, q), w in zip(*rule(name, full)):
+        N, ds, dt = shape(name, s, q)
+        J = np.array([[ds @ xy[:, 0], ds @ xy[:, 1]], [dt @ xy[:, 0], dt @ xy[:, 1]]])
+        detJ = np.linalg.det(J)
+        dxy = np.linalg.solve(J, np.vstack([ds, dt]))
+        if state == "axisymmetric":
+            r = N @ xy[:, 0]
+            B = np.zeros((4, 2 * n))
+            B[0, 0::2] = dxy[0]; B[1, 1::2] = dxy[1]; B[2, 0::2] = N / r
+            B[3, 0::2] = dxy[1]; B[3, 1::2] = dxy[0]
+            thick = 2 * np.pi * r
+        else:
+            B = np.zeros((3, 2 * n))
+            B[0, 0::2] = dxy[0]; B[1, 1::2] = dxy[1]; B[2, 0::2] = dxy[1]; B[2, 1::2] = dxy[0]
+            thick = t
+        K += w * detJ * thick * B.T @ D @ B
+    return K
+
+
+REF_NODES = {
+    "Q4": [(-1, -1), (1, -1), (1, 1), (-1, 1)],
+    "Q8": [(-1, -1), (1, -1), (1, 1), (-1, 1), (0, -1), (1, 0), (0, 1), (-1, 0)],
+    "Q9": [(-1, -1), (1, -1), (1, 1), (-1, 1), (0, -1), (1, 0), (0, 1), (-1, 0), (0, 0)],
+    "T3": [(0, 0), (1, 0), (0, 1)],
+    "T6": [(0, 0), (1, 0), (0, 1), (0.5, 0), (0.5, 0.5), (0, 0.5)],
+}
+
+
+def random_element(name: str, rng: np.random.Generator, distortion: float = 0.2) -> np.ndarray:
+    """A valid distorted element: corners perturbed, mid-side nodes near the edge midpoints.
+
+    The reference nodes are scaled to a 2 x 1.5 element, rotated and shifted; each node
+    moves by up to ``distortion`` times the element size.  Validity (det J > 0 at a grid)
+    is enforced by rejection.
+    """
+    ref = np.array(REF_NODES[name], dtype=float)
+    while True:
+        xy = ref * np.array([1.0, 0.75]) + rng.uniform(-distortion, distortion, ref.shape) * 0.5
+        ang = rng.uniform(0, 2 * np.pi)
+        Rm = np.array([[np.cos(ang), -np.sin(ang)], [np.sin(ang), np.cos(ang)]])
+        xy = xy @ Rm.T * rng.uniform(0.5, 3.0) + rng.uniform(-5, 5, 2)
+        if _valid(name, xy):
+            return xy
+
+
+def _valid(name: str, xy: np.ndarray) -> bool:
+    grid = np.linspace(-1, 1, 9) if name[0] == "Q" else np.linspace(0, 1, 9)
+    for s in grid:
+        for q in grid:
+            if name[0] == "T" and s + q > 1:
+                continue
+            N, ds, dt = shape(name, s, q)
+            J = np.array([[ds @ xy[:, 0], ds @ xy[:, 1]], [dt @ xy[:, 0], dt @ xy[:, 1]]])
+            if np.linalg.det(J) <= 0:
+                return False
+    return True
