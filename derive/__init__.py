@@ -7,4 +7,6 @@ Public contract (see README and DESIGN.md):
 """
 from __future__ import annotations
 
+from .element import Element, element
+
 __version__ = "0.1.0"
