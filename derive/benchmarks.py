@@ -1,0 +1,524 @@
+"""Benchmark problems with published or closed-form answers, on meshes of any catalogue element.
+
+Problems (the data are in the constants below; notes/verification.md states the meshes):
+  * ``cantilever``: the straight cantilever of MacNeal & Harder (1985): length 6, depth 0.2,
+    thickness 0.1, E = 1e7, nu = 0.3, 6 elements along the length (``refine`` subdivides
+    each), root clamped, unit tip shear (reference 0.1081) or unit tip extension
+    (reference 3.0e-5), spread over the tip edge as a uniform traction lumped consistently.
+    Meshes ``rectangular``, ``trapezoidal`` and ``parallelogram`` (45-degree distortions).
+  * ``membrane``: the tapered panel of Cook (1974), clamped at x = 0, total shear load 1
+    spread uniformly over the edge x = 48; vertical displacement at the top corner (48, 60)
+    and at the mid-point of the loaded edge (48, 52); refinement study with Richardson
+    extrapolation.
+  * ``cylinder``: thick-walled cylinder under internal pressure, plane strain, quarter model
+    with symmetry supports; radial displacement at the bore against the Lame solution.
+  * ``locking-mesh``: cantilever tip deflection over Timoshenko beam theory (shear factor
+    5/6) against element aspect ratio for 1, 2 and 4 elements through the depth.
+"""
+from __future__ import annotations
+
+import io
+import math
+from pathlib import Path
+
+import numpy as np
+
+from . import catalog
+from . import mesh as M
+from .errors import InputError
+from .output import Progress, write_atomic
+
+PROBLEMS = ("cantilever", "membrane", "cylinder", "locking-mesh")
+CANTILEVER_MESHES = ("rectangular", "trapezoidal", "parallelogram")
+
+CANTILEVER = {"length": 6.0, "depth": 0.2, "t": 0.1, "E": 1.0e7, "nu": 0.30, "nx": 6,
+              # MacNeal & Harder (1985), from memory
+              "reference": {"shear": 0.1081, "extension": 3.0e-5}}
+COOK = {"corners": ((0.0, 0.0), (48.0, 44.0), (48.0, 60.0), (0.0, 44.0)), "E": 1.0, "nu": 1.0 / 3.0, "t": 1.0,
+        "load": 1.0, "corner": (48.0, 60.0), "mid": (48.0, 52.0),
+        # Cook (1974) / often-quoted converged mid-edge value, from memory
+        "quoted_mid": 23.96}
+# converged values established in this project by the Q9 study to 256 x 256 with Richardson
+# extrapolation (derive bench membrane --element Q9 --refine 8; see notes/verification.md)
+COOK_CONVERGED = {"corner": None, "mid": None}
+CYLINDER = {"inner": 3.0, "outer": 9.0, "E": 1000.0, "p": 1.0, "t": 1.0,
+            "nus": (0.3, 0.49, 0.499, 0.4999)}
+
+
+# ---------------------------------------------------------------------------------------------
+# closed forms
+
+def beam_tip_deflection(P: float = 1.0, L: float = 6.0, h: float = 0.2, t: float = 0.1, E: float = 1e7,
+                        nu: float = 0.3, kappa: float = 5.0 / 6.0) -> float:
+    """Cantilever tip deflection P L^3 / (3 E I) + P L / (kappa G A) (Timoshenko beam theory)."""
+    I = t * h ** 3 / 12.0
+    G = E / (2.0 * (1.0 + nu))
+    return P * L ** 3 / (3.0 * E * I) + P * L / (kappa * G * t * h)
+
+
+def bar_extension(P: float = 1.0, L: float = 6.0, h: float = 0.2, t: float = 0.1, E: float = 1e7) -> float:
+    return P * L / (E * h * t)
+
+
+def lame_bore(p: float, a: float, b: float, E: float, nu: float) -> float:
+    """Radial displacement at r = a of a thick cylinder under internal pressure p, plane strain (Lame)."""
+    return (1.0 + nu) * p * a ** 2 / (E * (b ** 2 - a ** 2)) * ((1.0 - 2.0 * nu) * a + b ** 2 / a)
+
+
+def richardson(values, ratio: float = 2.0) -> dict:
+    """Richardson extrapolation from the last three values of a sequence refined by ``ratio``.
+
+    Observed order p = log((v2 - v1) / (v3 - v2)) / log(ratio); extrapolated
+    v3 + (v3 - v2) / (ratio^p - 1).  Returns also the two-level estimate with p fixed
+    by the caller when the observed order is not usable.
+    """
+    v = [float(x) for x in values]
+    if len(v) < 3:
+        raise InputError("Richardson extrapolation needs at least three refinement levels")
+    v1, v2, v3 = v[-3:]
+    d1, d2 = v2 - v1, v3 - v2
+    if d1 == 0 or d2 == 0 or d1 * d2 < 0:
+        return {"order": None, "value": v3, "note": "not monotone; no extrapolation"}
+    p = math.log(d1 / d2) / math.log(ratio)
+    return {"order": p, "value": v3 + d2 / (ratio ** p - 1.0), "note": ""}
+
+
+def slope(h, err) -> float | None:
+    """Least-squares slope of log(err) against log(h) (the convergence rate)."""
+    h, err = np.asarray(h, float), np.abs(np.asarray(err, float))
+    keep = err > 0
+    if keep.sum() < 2:
+        return None
+    return float(np.polyfit(np.log(h[keep]), np.log(err[keep]), 1)[0])
+
+
+# ---------------------------------------------------------------------------------------------
+# meshes
+
+def cantilever_mesh(element: str, kind: str = "rectangular", refine: int = 1, nx: int | None = None,
+                    ny: int | None = None, length: float | None = None, depth: float | None = None) -> M.Mesh:
+    """Cantilever mesh: ``nx`` x ``ny`` cells (default 6 x 1) times ``refine`` in each direction.
+
+    Corner x positions of the coarse cells (x along the length, depth 0.2, cells of length 1):
+      rectangular:   bottom = top = i;
+      trapezoidal:   interior lines i = 1..5 alternately inclined +/-45 degrees:
+                     odd i bottom i - d/2, top i + d/2; even i bottom i + d/2, top i - d/2;
+                     the root (i = 0) and tip (i = 6) vertical;
+      parallelogram: every line across the depth, ends included, inclined at 45 degrees:
+                     bottom i - d/2, top i + d/2 (so the centre line runs from 0 to 6).
+    """
+    if kind not in CANTILEVER_MESHES:
+        raise InputError(f"unknown cantilever mesh {kind!r}; allowed: {', '.join(CANTILEVER_MESHES)}")
+    L = CANTILEVER["length"] if length is None else length
+    h = CANTILEVER["depth"] if depth is None else depth
+    nx = CANTILEVER["nx"] if nx is None else nx
+    ny = 1 if ny is None else ny
+    refine = M._count(refine, "refine")
+    dx = L / nx
+    xb = np.arange(nx + 1) * dx
+    xt = xb.copy()
+    if kind != "rectangular" and (nx != 6 or ny != 1):
+        raise InputError("the distorted cantilever meshes are defined on the 6 x 1 coarse mesh; use --refine")
+    off = h / 2.0
+    if kind == "trapezoidal":
+        for i in range(1, nx):
+            sgn = 1.0 if i % 2 == 1 else -1.0
+            xb[i] -= sgn * off
+            xt[i] += sgn * off
+    elif kind == "parallelogram":
+        xb -= off
+        xt += off
+    # coarse corner grid (nx+1, ny+1) then refine bilinearly inside each coarse cell
+    fx, fy = nx * refine, ny * refine
+    X = np.empty((fx + 1, fy + 1))
+    Y = np.empty((fx + 1, fy + 1))
+    for I in range(fx + 1):
+        i, r = divmod(I, refine)
+        if i == nx:
+            i, r = nx - 1, refine
+        u = r / refine
+        for Jj in range(fy + 1):
+            v = Jj / fy
+            x0 = (1 - u) * xb[i] + u * xb[i + 1]
+            x1 = (1 - u) * xt[i] + u * xt[i + 1]
+            X[I, Jj] = (1 - v) * x0 + v * x1
+            Y[I, Jj] = v * h
+    return M.from_corner_grid(element, X, Y, label=f"{kind} {fx} x {fy}")
+
+
+def membrane_mesh(element: str, n: int) -> M.Mesh:
+    return M.structured(element, n, n, COOK["corners"], label=f"{n} x {n}")
+
+
+def cylinder_mesh(element: str, n_r: int, n_theta: int | None = None) -> M.Mesh:
+    """Quarter of the annulus (s radial, t hoop); nodes on the arcs."""
+    n_theta = n_r if n_theta is None else n_theta
+    return M.structured(element, n_r, n_theta, M.polar(CYLINDER["inner"], CYLINDER["outer"]),
+                        label=f"{n_r} x {n_theta}")
+
+
+# ---------------------------------------------------------------------------------------------
+# single runs
+
+def _element(element: str, variant: str, state: str):
+    from .element import element as make_element
+    return make_element(element, variant, state)
+
+
+def run_cantilever(element: str, variant: str = "full", kind: str = "rectangular", load: str = "shear",
+                   refine: int = 1, provider=None, nx=None, ny=None) -> dict:
+    _element(element, variant, "plane-stress")
+    if load not in ("shear", "extension"):
+        raise InputError(f"unknown cantilever load {load!r}; allowed: shear, extension")
+    c = CANTILEVER
+    mesh = cantilever_mesh(element, kind, refine, nx, ny)
+    total = (0.0, 1.0) if load == "shear" else (1.0, 0.0)
+    f = M.uniform_edge_force(mesh, "right", total, "plane-stress", c["t"])
+    fixed = M.fix(mesh, "left", "uv")
+    sol = M.analyse(mesh, f, fixed, variant, "plane-stress", c["E"], c["nu"], c["t"], provider)
+    tip = np.nonzero(mesh.side("right"))[0]
+    comp = 1 if load == "shear" else 0
+    value = float(sol.U[tip, comp].mean())
+    ref = c["reference"][load]
+    return {"problem": "cantilever", "element": mesh.element, "variant": variant, "mesh": kind, "load": load,
+            "refine": refine, "cells": mesh.label, "value": value, "reference": ref, "normalized": value / ref,
+            "_solution": sol}
+
+
+def run_membrane(element: str, variant: str = "full", n: int = 16, provider=None) -> dict:
+    _element(element, variant, "plane-stress")
+    c = COOK
+    mesh = membrane_mesh(element, n)
+    f = M.uniform_edge_force(mesh, "right", (0.0, c["load"]), "plane-stress", c["t"])
+    fixed = M.fix(mesh, "left", "uv")
+    sol = M.analyse(mesh, f, fixed, variant, "plane-stress", c["E"], c["nu"], c["t"], provider)
+    corner = sol.displacement_at(*c["corner"])[1]
+    mid = sol.displacement_at(*c["mid"])[1]
+    ref = COOK_CONVERGED["mid"] or c["quoted_mid"]
+    return {"problem": "membrane", "element": mesh.element, "variant": variant, "mesh": f"{n} x {n}", "n": n,
+            "value": mid, "corner": corner, "mid": mid, "reference": ref, "normalized": mid / ref,
+            "reference_corner": COOK_CONVERGED["corner"], "_solution": sol}
+
+
+def run_cylinder(element: str, variant: str = "full", n: int = 8, nu: float = 0.4999, provider=None,
+                 n_theta: int | None = None) -> dict:
+    _element(element, variant, "plane-strain")
+    c = CYLINDER
+    mesh = cylinder_mesh(element, n, n_theta)
+    f = M.pressure_load(mesh, "left", c["p"], "plane-strain", c["t"])
+    fixed = {**M.fix(mesh, "bottom", "v"), **M.fix(mesh, "top", "u")}
+    sol = M.analyse(mesh, f, fixed, variant, "plane-strain", c["E"], nu, c["t"], provider)
+    bore = np.nonzero(mesh.side("left"))[0]
+    P = mesh.nodes[bore]
+    ur = (sol.U[bore, 0] * P[:, 0] + sol.U[bore, 1] * P[:, 1]) / np.hypot(P[:, 0], P[:, 1])
+    value = float(ur.mean())
+    ref = lame_bore(c["p"], c["inner"], c["outer"], c["E"], nu)
+    return {"problem": "cylinder", "element": mesh.element, "variant": variant, "mesh": mesh.label, "n": n, "nu": nu,
+            "value": value, "reference": ref, "normalized": value / ref, "error": value / ref - 1.0,
+            "_solution": sol}
+
+
+# ---------------------------------------------------------------------------------------------
+# studies
+
+def _progress(total, label, show):
+    return Progress(total, label, enabled=show)
+
+
+def cantilever_study(element: str, variant: str = "full", meshes=CANTILEVER_MESHES, loads=("shear", "extension"),
+                     refine: int = 1, show_progress=False) -> dict:
+    rows = []
+    pr = _progress(len(meshes) * len(loads), "cantilever", show_progress)
+    for kind in meshes:
+        for load in loads:
+            pr.step(f"{kind} {load}")
+            r = run_cantilever(element, variant, kind, load, refine)
+            r.pop("_solution")
+            rows.append(r)
+    pr.close()
+    lines = [f"cantilever (MacNeal & Harder 1985): {element} {variant}, 6 x 1 cells x refine {refine}; "
+             "value = mean tip displacement along the load"]
+    for r in rows:
+        lines.append(f"{r['mesh']:<13} {r['load']:<9} value {r['value']:.6g}  reference {r['reference']:.6g}  "
+                     f"normalized {r['normalized']:.4f}")
+    return {"problem": "cantilever", "element": element, "variant": variant, "results": rows, "lines": lines,
+            **_headline(rows[0])}
+
+
+def _headline(row: dict) -> dict:
+    return {k: row[k] for k in ("mesh", "value", "reference", "normalized")}
+
+
+def membrane_study(element: str, variant: str = "full", levels=(2, 4, 8, 16, 32), show_progress=False) -> dict:
+    levels = [M._count(n, "membrane mesh") for n in levels]
+    rows = []
+    pr = _progress(len(levels), "membrane", show_progress)
+    for n in levels:
+        pr.step(f"{n} x {n}")
+        r = run_membrane(element, variant, n)
+        r.pop("_solution")
+        rows.append(r)
+    pr.close()
+    out = {"problem": "membrane", "element": element, "variant": variant, "results": rows}
+    geometric = all(b == 2 * a for a, b in zip(levels, levels[1:]))
+    extrap = {}
+    if len(rows) >= 3 and geometric:
+        for key in ("corner", "mid"):
+            extrap[key] = richardson([r[key] for r in rows])
+    out["extrapolated"] = extrap
+    refs = {k: (COOK_CONVERGED[k] if COOK_CONVERGED[k] is not None else (extrap.get(k) or {}).get("value"))
+            for k in ("corner", "mid")}
+    out["converged_reference"] = refs
+    h = [1.0 / n for n in levels]
+    rates = {}
+    for key in ("corner", "mid"):
+        if refs[key] is not None:
+            for r in rows:
+                r[f"error_{key}"] = r[key] - refs[key]
+            rates[key] = slope(h, [r[f"error_{key}"] for r in rows])
+    out["rates"] = rates
+    lines = [f"membrane (Cook 1974): {element} {variant}; v at the top corner (48, 60) and at the loaded edge's "
+             "mid-point (48, 52)", f"{'mesh':>9} {'v corner':>11} {'v mid-edge':>11}"]
+    for r in rows:
+        lines.append(f"{r['mesh']:>9} {r['corner']:11.5f} {r['mid']:11.5f}")
+    for key, e in extrap.items():
+        if e["order"] is not None:
+            lines.append(f"Richardson ({key}, last three levels): {e['value']:.4f}, observed order {e['order']:.2f}")
+        else:
+            lines.append(f"Richardson ({key}): {e['note']}")
+    for key, s in rates.items():
+        if s is not None:
+            lines.append(f"convergence rate ({key}): error ~ h^{s:.2f} against {refs[key]:.4f}")
+    lines.append(f"often-quoted converged value (mid-edge, from memory): {COOK['quoted_mid']}")
+    out["lines"] = lines
+    out.update(_headline(rows[-1]))
+    return out
+
+
+def cylinder_study(element: str, variant: str = "full", levels=(2, 4, 8, 16), nus=CYLINDER["nus"],
+                   show_progress=False) -> dict:
+    levels = [M._count(n, "cylinder mesh") for n in levels]
+    rows = []
+    pr = _progress(len(levels) * len(nus), "cylinder", show_progress)
+    for nu in nus:
+        for n in levels:
+            pr.step(f"nu {nu} {n} x {n}")
+            r = run_cylinder(element, variant, n, nu)
+            r.pop("_solution")
+            rows.append(r)
+    pr.close()
+    rates = {}
+    for nu in nus:
+        sub = [r for r in rows if r["nu"] == nu]
+        rates[str(nu)] = slope([1.0 / r["n"] for r in sub], [r["error"] for r in sub])
+    lines = [f"cylinder (Lame, plane strain, inner {CYLINDER['inner']:g}, outer {CYLINDER['outer']:g}, "
+             f"E {CYLINDER['E']:g}, p {CYLINDER['p']:g}): {element} {variant}; radial displacement at the bore / Lame",
+             f"{'nu':>7} " + " ".join(f"{str(n) + ' x ' + str(n):>10}" for n in levels) + "   rate"]
+    for nu in nus:
+        sub = [r for r in rows if r["nu"] == nu]
+        rate = rates[str(nu)]
+        lines.append(f"{nu:>7} " + " ".join(f"{r['normalized']:10.4f}" for r in sub) +
+                     (f"   h^{rate:.2f}" if rate is not None else ""))
+    return {"problem": "cylinder", "element": element, "variant": variant, "results": rows, "rates": rates,
+            "lines": lines, **_headline(rows[-1])}
+
+
+LOCKING_ASPECTS = (1, 2, 3, 5, 10, 15, 30)
+
+
+def locking_mesh_study(element: str, variant: str = "full", depths=(1, 2, 4), aspects=LOCKING_ASPECTS,
+                       accuracy: float = 0.95, show_progress=False) -> dict:
+    """Tip deflection / Timoshenko beam theory against element aspect ratio (length / depth of an element)."""
+    c = CANTILEVER
+    slender = c["length"] / c["depth"]
+    ref = beam_tip_deflection(1.0, c["length"], c["depth"], c["t"], c["E"], c["nu"])
+    rows = []
+    pr = _progress(len(depths) * len(aspects), "locking-mesh", show_progress)
+    for ny in depths:
+        ny = M._count(ny, "elements through the depth")
+        for ar in aspects:
+            nx = slender * ny / ar
+            if abs(nx - round(nx)) > 1e-9 or round(nx) < 1:
+                raise InputError(f"aspect ratio {ar} with {ny} elements through the depth does not give a whole "
+                                 f"number of elements along the length (L/h = {slender:g})")
+            nx = int(round(nx))
+            pr.step(f"{ny} deep, aspect {ar}")
+            r = run_cantilever(element, variant, "rectangular", "shear", 1, nx=nx, ny=ny)
+            r.pop("_solution")
+            rows.append({"problem": "locking-mesh", "element": r["element"], "variant": variant,
+                         "mesh": f"{nx} x {ny}", "depth_elements": ny, "aspect": ar, "value": r["value"],
+                         "reference": ref, "normalized": r["value"] / ref})
+    pr.close()
+    needed = {}
+    for ny in depths:
+        ok = [r["aspect"] for r in rows if r["depth_elements"] == ny and r["normalized"] >= accuracy]
+        needed[str(ny)] = max(ok) if ok else None
+    lines = [f"locking-mesh: cantilever L {c['length']:g}, depth {c['depth']:g}, {element} {variant}; "
+             f"tip deflection / Timoshenko beam theory ({ref:.6g})",
+             f"{'aspect':>7} " + " ".join(f"{str(ny) + ' deep':>9}" for ny in depths)]
+    for ar in aspects:
+        vals = [next(r for r in rows if r["depth_elements"] == ny and r["aspect"] == ar)["normalized"] for ny in depths]
+        lines.append(f"{ar:>7} " + " ".join(f"{v:9.4f}" for v in vals))
+    for ny in depths:
+        a = needed[str(ny)]
+        lines.append(f"{ny} through the depth: largest aspect ratio reaching {accuracy:g} of beam theory: "
+                     + (f"{a}" if a is not None else "none of those tried"))
+    return {"problem": "locking-mesh", "element": element, "variant": variant, "results": rows, "accuracy": accuracy,
+            "largest_aspect_for_accuracy": needed, "lines": lines, **_headline(rows[-1])}
+
+
+# ---------------------------------------------------------------------------------------------
+# plots and tables
+
+def _figure():
+    import matplotlib
+    matplotlib.use("Agg")
+    import matplotlib.pyplot as plt
+    return plt
+
+
+def _save(fig, path) -> Path:
+    plt = _figure()
+    buf = io.BytesIO()
+    fmt = Path(path).suffix.lstrip(".").lower() or "png"
+    fig.savefig(buf, format=fmt, dpi=120, bbox_inches="tight")
+    plt.close(fig)
+    return write_atomic(path, buf.getvalue())
+
+
+def plot_study(study: dict, path) -> Path:
+    """Chart of a study: membrane/cylinder convergence (value and log-log error), cantilever bars,
+    locking-mesh normalized deflection against aspect ratio."""
+    plt = _figure()
+    prob = study["problem"]
+    title = f"{prob}: {study['element']} {study['variant']}"
+    if prob == "membrane":
+        fig, (a1, a2) = plt.subplots(1, 2, figsize=(10, 4))
+        ns = [r["n"] for r in study["results"]]
+        for key, lab in (("corner", "top corner (48, 60)"), ("mid", "mid-edge (48, 52)")):
+            a1.plot(ns, [r[key] for r in study["results"]], "o-", label=lab)
+            ref = study["converged_reference"].get(key)
+            if ref is not None:
+                a1.axhline(ref, ls=":", lw=0.8, color="grey")
+                errs = [abs(r[key] - ref) for r in study["results"]]
+                a2.loglog([1.0 / n for n in ns], [max(e, 1e-16) for e in errs], "o-",
+                          label=f"{lab}, slope {study['rates'].get(key) or float('nan'):.2f}")
+        a1.set_xscale("log", base=2)
+        a1.set_xlabel("elements per side")
+        a1.set_ylabel("vertical displacement")
+        a1.legend()
+        a2.set_xlabel("h (1 / elements per side)")
+        a2.set_ylabel("|v - converged|")
+        a2.legend()
+        fig.suptitle(title)
+    elif prob == "cylinder":
+        fig, (a1, a2) = plt.subplots(1, 2, figsize=(10, 4))
+        nus = sorted({r["nu"] for r in study["results"]})
+        for nu in nus:
+            sub = [r for r in study["results"] if r["nu"] == nu]
+            a1.plot([r["n"] for r in sub], [r["normalized"] for r in sub], "o-", label=f"nu = {nu}")
+            a2.loglog([1.0 / r["n"] for r in sub], [max(abs(r["error"]), 1e-16) for r in sub], "o-",
+                      label=f"nu = {nu}, slope {study['rates'].get(str(nu)) or float('nan'):.2f}")
+        a1.axhline(1.0, ls=":", color="grey")
+        a1.set_xscale("log", base=2)
+        a1.set_xlabel("elements per side (radial = hoop)")
+        a1.set_ylabel("bore displacement / Lame")
+        a1.legend()
+        a2.set_xlabel("h (1 / elements per side)")
+        a2.set_ylabel("|relative error|")
+        a2.legend()
+        fig.suptitle(title)
+    elif prob == "locking-mesh":
+        fig, ax = plt.subplots(figsize=(6, 4))
+        for ny in sorted({r["depth_elements"] for r in study["results"]}):
+            sub = [r for r in study["results"] if r["depth_elements"] == ny]
+            ax.semilogx([r["aspect"] for r in sub], [r["normalized"] for r in sub], "o-", label=f"{ny} through depth")
+        ax.axhline(1.0, ls=":", color="grey")
+        ax.axhline(study["accuracy"], ls="--", lw=0.8, color="grey")
+        ax.set_xlabel("element aspect ratio (length / depth)")
+        ax.set_ylabel("tip deflection / Timoshenko theory")
+        ax.set_title(title)
+        ax.legend()
+    else:
+        fig, ax = plt.subplots(figsize=(6, 4))
+        labels = [f"{r['mesh']}\n{r['load']}" for r in study["results"]]
+        ax.bar(range(len(labels)), [r["normalized"] for r in study["results"]])
+        ax.axhline(1.0, ls=":", color="grey")
+        ax.set_xticks(range(len(labels)))
+        ax.set_xticklabels(labels, fontsize=8)
+        ax.set_ylabel("value / reference")
+        ax.set_title(title)
+    return _save(fig, path)
+
+
+def table_text(study: dict) -> str:
+    """Markdown table of a study's rows."""
+    rows = study["results"]
+    keys = [k for k in rows[0] if not k.startswith("_") and k not in ("problem", "element", "variant")]
+    out = ["| " + " | ".join(keys) + " |", "|" + "---|" * len(keys)]
+    for r in rows:
+        out.append("| " + " | ".join(_fmt(r.get(k)) for k in keys) + " |")
+    return "\n".join(out) + "\n"
+
+
+def _fmt(v) -> str:
+    if isinstance(v, float):
+        return f"{v:.6g}"
+    return "" if v is None else str(v)
+
+
+# ---------------------------------------------------------------------------------------------
+# demo section: the transfer beam
+
+def demo_section(outdir: Path) -> dict:
+    """Transfer beam TB-3 (invented): mesh study of the midspan deflection and patch tests."""
+    from .demo import SCENARIO
+    from .patch import patch_test
+    outdir = Path(outdir)
+    L, h, t, E, nu = (SCENARIO["span_m"], SCENARIO["depth_m"], SCENARIO["thickness_m"], SCENARIO["E_Pa"],
+                      SCENARIO["nu"])
+    q = 400e3  # N/m on the top face (invented design load)
+    I = t * h ** 3 / 12
+    G = E / (2 * (1 + nu))
+    beam = 5 * q * L ** 4 / (384 * E * I) + q * L ** 2 / (8 * (5 / 6) * G * t * h)
+    lines, files, rows = [], [], []
+    cands = [("Q4", "full"), ("Q8", "full"), ("Q8", "reduced")]
+    for extra in ("incompatible-centred", "eas4"):
+        if "Q4" in catalog.ELEMENTS and extra in catalog.ELEMENTS["Q4"].variants:
+            cands.insert(1, ("Q4", extra))
+    meshes = ((6, 1), (12, 2), (24, 4))
+    last = None
+    for el, var in cands:
+        for nx, ny in meshes:
+            m = M.structured(el, nx, ny, ((0, 0), (L, 0), (L, h), (0, h)))
+            f = M.edge_load(m, "top", (0.0, -q / t), "plane-stress", t)
+            left = m.node_at(0.0, 0.0)
+            right = m.node_at(L, 0.0)
+            fixed = {2 * left: 0.0, 2 * left + 1: 0.0, 2 * right + 1: 0.0}
+            sol = M.analyse(m, f, fixed, var, "plane-stress", E, nu, t)
+            v = -sol.displacement_at(L / 2, h / 2)[1]
+            rows.append((el, var, f"{nx} x {ny}", v))
+            if (el, var) == ("Q8", "full"):
+                last = sol
+    lines.append(f"simply supported span {L} m, uniform load {q / 1e3:g} kN/m on the top face; midspan deflection at "
+                 f"mid-depth; beam theory with shear (factor 5/6): {beam * 1e3:.4f} mm")
+    for el, var, ms, v in rows:
+        lines.append(f"{el} {var:<21} {ms:>7}: {v * 1e3:.4f} mm ({v / beam:.3f} of beam theory)")
+    plt = _figure()
+    fig, ax = plt.subplots(figsize=(6, 4))
+    for el, var in cands:
+        sub = [r for r in rows if r[0] == el and r[1] == var]
+        ax.plot([int(r[2].split()[0]) for r in sub], [r[3] * 1e3 for r in sub], "o-", label=f"{el} {var}")
+    ax.axhline(beam * 1e3, ls=":", color="grey", label="beam theory (with shear)")
+    ax.set_xlabel("elements along the span")
+    ax.set_ylabel("midspan deflection (mm)")
+    ax.set_title("TB-3 mesh study")
+    ax.legend(fontsize=8)
+    files.append(_save(fig, outdir / "tb3-mesh-study.png").name)
+    if last is not None:
+        files.append(M.write_vtu(outdir / "tb3-q8-24x4.vtu", last, scale=200.0).name)
+    for el, var in cands:
+        res = patch_test(el, var)
+        lines.append(f"patch test {el} {var}: {'passed' if res['passed'] else 'FAILED'} "
+                     f"(max relative error {res['max_error']:.1e})")
+    return {"title": "Mesh study and patch tests", "lines": lines, "files": files}

@@ -1,0 +1,991 @@
+"""Meshes of catalogue elements: generation, sparse assembly, loads, supports, solve, stresses, VTK export.
+
+What is here
+  * :class:`Mesh`: nodal coordinates (N, 2), connectivity (n_elements, nodes per element) in
+    the element's own node order (corners counter-clockwise, then mid-side, then interior),
+    and, for structured meshes, each node's parametric position (s, t) in [0, 1]^2 so that
+    the sides "left" (s = 0), "right" (s = 1), "bottom" (t = 0) and "top" (t = 1) can be
+    named.  Built by :func:`structured` (a mapping of the unit square: bilinear patch,
+    polar sector or any vectorised callable; mid-side nodes follow the mapping, so they lie
+    on curved boundaries), :func:`from_corner_grid` (a grid of corner points with straight
+    element edges and mid-side nodes at the edge midpoints), :func:`from_corners` (any
+    corner mesh lifted to the element, e.g. a hand-drawn patch) or :func:`hand` (all nodes
+    given).  Triangles split every cell of a structured grid along its rising diagonal.
+  * :func:`assemble`: global stiffness in ``scipy.sparse`` CSR from a batch of element
+    matrices.  The element-matrix provider is a parameter, ``provider(xy, E, nu, t)`` with
+    ``xy`` of shape (n, nodes, 2) returning (n, ndof, ndof); :func:`element_provider` picks
+    the generated C kernel (``derive.kernel(..., lang="c")``) when it exists and falls back
+    to the lambdified reference ``Element.numeric_stiffness`` otherwise.
+  * consistent edge loads (:func:`edge_load`, :func:`uniform_edge_force`,
+    :func:`pressure_load`): the traction integrated against the element's own shape
+    functions along each loaded edge with a Gauss rule, per unit area times the thickness
+    t (plane states) or 2 pi r (axisymmetric, full ring), consistent with the stiffness.
+  * supports (:func:`fix`), :func:`solve` (elimination of prescribed DOFs, sparse LU),
+    stresses at the rule's points (:meth:`Solution.point_stresses`) and averaged at the
+    nodes (:meth:`Solution.nodal_stresses`), and VTK XML ``.vtu`` export of the deformed
+    mesh (:func:`write_vtu`).
+
+Stresses are D B u from the compatible strain field of the element's nodal displacements,
+evaluated at the element's full rule points (or a rule you name).  For variants with
+internal unknowns (incompatible modes, enhanced strains, hybrid stresses) that is the
+compatible part of the strain only; the nodal displacements are the element's own.
+"""
+from __future__ import annotations
+
+import math
+import time
+import xml.sax.saxutils as _xml
+from dataclasses import dataclass, field
+from functools import lru_cache
+from typing import Callable, Sequence
+
+import numpy as np
+import scipy.sparse as sps
+import scipy.sparse.linalg as spla
+import sympy as sp
+
+from . import catalog, quadrature
+from .errors import GeometryError, InputError
+from .material import D as D_matrix
+from .material import check_material
+from .output import write_atomic
+from .symbols import eta, xi
+
+SIDES = ("left", "right", "bottom", "top")
+Provider = Callable[[np.ndarray, float, float, float], np.ndarray]
+
+# keys for de-duplicating nodes: cell-local coordinates are multiples of 1/_KEY (2520 = lcm(1..10))
+_KEY = 2520
+
+
+# ---------------------------------------------------------------------------------------------
+# reference element data (numeric)
+
+@dataclass(frozen=True)
+class RefElement:
+    """Numeric view of a catalogue element's reference shape functions and edges."""
+
+    name: str
+    domain: str
+    nodes: np.ndarray            # (nn, 2) reference coordinates
+    n_corners: int
+    edges: tuple                 # per edge: (start (2,), end (2,), node indices ordered along the edge)
+    full_rule: str
+    _N: Callable = field(repr=False, compare=False)
+    _dxi: Callable = field(repr=False, compare=False)
+    _deta: Callable = field(repr=False, compare=False)
+
+    @property
+    def n_nodes(self) -> int:
+        return self.nodes.shape[0]
+
+    def N(self, pts: np.ndarray) -> np.ndarray:
+        """Shape functions at reference points (np, 2) -> (np, nn)."""
+        pts = np.atleast_2d(np.asarray(pts, dtype=float))
+        return _evaluate(self._N, pts, self.n_nodes)
+
+    def dN(self, pts: np.ndarray) -> np.ndarray:
+        """Reference derivatives at points (np, 2) -> (np, 2, nn) ([d/dxi, d/deta])."""
+        pts = np.atleast_2d(np.asarray(pts, dtype=float))
+        return np.stack([_evaluate(self._dxi, pts, self.n_nodes), _evaluate(self._deta, pts, self.n_nodes)], axis=1)
+
+
+def _evaluate(f, pts, nn):
+    vals = f(pts[:, 0], pts[:, 1])
+    return np.stack([np.broadcast_to(np.asarray(v, dtype=float), (pts.shape[0],)) for v in vals], axis=1)
+
+
+@lru_cache(maxsize=None)
+def ref_element(name: str) -> RefElement:
+    info = catalog.element_info(name)
+    sh = catalog.shape_set(info.name)
+    nodes = np.array([[float(p), float(q)] for p, q in sh.nodes])
+    if info.domain == "square":
+        corners = [(-1, -1), (1, -1), (1, 1), (-1, 1)]
+    else:
+        corners = [(0, 0), (1, 0), (0, 1)]
+    nc = len(corners)
+    edges = []
+    for k in range(nc):
+        A, B = sp.Matrix(corners[k]), sp.Matrix(corners[(k + 1) % nc])
+        on = []
+        for i, (p, q) in enumerate(sh.nodes):
+            P = sp.Matrix([p, q])
+            d, e = B - A, P - A
+            if d[0] * e[1] - d[1] * e[0] == 0:
+                s = (e.dot(d)) / d.dot(d)
+                if 0 <= s <= 1:
+                    on.append((s, i))
+        on.sort()
+        edges.append((np.array(corners[k], float), np.array(corners[(k + 1) % nc], float),
+                      tuple(i for _, i in on)))
+    N = sp.lambdify((xi, eta), list(sh.functions), "numpy")
+    dxi = sp.lambdify((xi, eta), list(sh.derivatives[0]), "numpy")
+    deta = sp.lambdify((xi, eta), list(sh.derivatives[1]), "numpy")
+    return RefElement(info.name, info.domain, nodes, nc, tuple(edges), info.full_rule, N, dxi, deta)
+
+
+def rule_points(name: str) -> tuple[np.ndarray, np.ndarray]:
+    """Float points and weights of a named quadrature rule."""
+    return quadrature.rule(name).numeric()
+
+
+# ---------------------------------------------------------------------------------------------
+# mesh
+
+@dataclass
+class Mesh:
+    """Nodes (N, 2), connectivity (n_elements, nodes per element) of one catalogue element.
+
+    ``param`` holds each node's parametric position in the unit square for structured
+    meshes (None for hand-specified ones); ``label`` is free text for reports.
+    """
+
+    element: str
+    nodes: np.ndarray
+    conn: np.ndarray
+    param: np.ndarray | None = None
+    label: str = ""
+
+    def __post_init__(self):
+        self.element = catalog.element_info(self.element).name
+        self.nodes = np.ascontiguousarray(np.asarray(self.nodes, dtype=float))
+        self.conn = np.ascontiguousarray(np.asarray(self.conn, dtype=np.int64))
+        ref = ref_element(self.element)
+        if self.nodes.ndim != 2 or self.nodes.shape[1] != 2:
+            raise InputError(f"mesh nodes must be an (N, 2) array; got shape {self.nodes.shape}")
+        if not np.all(np.isfinite(self.nodes)):
+            raise InputError("mesh nodes must be finite numbers (found NaN or infinity)")
+        if self.conn.ndim != 2 or self.conn.shape[1] != ref.n_nodes:
+            raise InputError(f"{self.element} connectivity needs {ref.n_nodes} node numbers per element; "
+                             f"got shape {self.conn.shape}")
+        if self.conn.size and (self.conn.min() < 0 or self.conn.max() >= len(self.nodes)):
+            raise InputError(f"connectivity refers to node {int(self.conn.max())} but the mesh has "
+                             f"{len(self.nodes)} nodes (numbered from 0)")
+        if self.conn.shape[0] == 0:
+            raise InputError("mesh has no elements")
+
+    @property
+    def ref(self) -> RefElement:
+        return ref_element(self.element)
+
+    @property
+    def n_nodes(self) -> int:
+        return self.nodes.shape[0]
+
+    @property
+    def n_elements(self) -> int:
+        return self.conn.shape[0]
+
+    @property
+    def ndof(self) -> int:
+        return 2 * self.n_nodes
+
+    def element_coords(self) -> np.ndarray:
+        """(n_elements, nodes per element, 2) nodal coordinates."""
+        return self.nodes[self.conn]
+
+    def element_dofs(self) -> np.ndarray:
+        """(n_elements, ndof per element) global DOF numbers, interleaved u, v per node."""
+        c = self.conn
+        return np.stack([2 * c, 2 * c + 1], axis=2).reshape(c.shape[0], -1)
+
+    def side(self, name: str, tol: float = 1e-9) -> np.ndarray:
+        """Boolean node mask of a named side of a structured mesh."""
+        if self.param is None:
+            raise InputError("named sides exist on structured meshes only; select nodes by coordinates instead")
+        s, t = self.param[:, 0], self.param[:, 1]
+        masks = {"left": np.abs(s) < tol, "right": np.abs(s - 1) < tol,
+                 "bottom": np.abs(t) < tol, "top": np.abs(t - 1) < tol}
+        if name not in masks:
+            raise InputError(f"unknown side {name!r}; allowed: {', '.join(SIDES)}")
+        return masks[name]
+
+    def nodes_where(self, predicate: Callable[[np.ndarray, np.ndarray], np.ndarray]) -> np.ndarray:
+        """Boolean node mask from a vectorised predicate of (x, y)."""
+        return np.asarray(predicate(self.nodes[:, 0], self.nodes[:, 1]), dtype=bool)
+
+    def nearest(self, x: float, y: float) -> int:
+        """Index of the node nearest to (x, y)."""
+        return int(np.argmin(np.hypot(self.nodes[:, 0] - x, self.nodes[:, 1] - y)))
+
+    def node_at(self, x: float, y: float, tol: float = 1e-8) -> int:
+        """Index of the node at (x, y); InputError if there is none."""
+        k = self.nearest(x, y)
+        scale = max(np.ptp(self.nodes[:, 0]), np.ptp(self.nodes[:, 1]), 1.0)
+        if math.hypot(self.nodes[k, 0] - x, self.nodes[k, 1] - y) > tol * scale:
+            raise InputError(f"no mesh node at ({x:g}, {y:g}); nearest is node {k} at "
+                             f"({self.nodes[k, 0]:g}, {self.nodes[k, 1]:g})")
+        return k
+
+    def check(self, rule: str | None = None) -> dict:
+        """det J at the rule points and at the nodes of every element; GeometryError if not positive."""
+        ref = self.ref
+        rule = rule or ref.full_rule
+        pts, _ = rule_points(rule)
+        xy = self.element_coords()
+        for where, P in (("quadrature point", pts), ("node", ref.nodes)):
+            dN = ref.dN(P)
+            J = np.einsum("pan,enk->epak", dN, xy)
+            det = J[..., 0, 0] * J[..., 1, 1] - J[..., 0, 1] * J[..., 1, 0]
+            e, p = np.unravel_index(np.argmin(det), det.shape)
+            if det[e, p] <= 0:
+                raise GeometryError(f"mesh element {e} ({self.element}): det J = {det[e, p]:.6g} <= 0 at {where} "
+                                    f"{p + 1}; check the node order (counter-clockwise) and the distortion")
+        return {"elements": self.n_elements, "nodes": self.n_nodes}
+
+
+def _lift(element: str, cell_param: np.ndarray, cell_ref_tri: bool):
+    """Cell-local (u, v) in [0, 1]^2 of every element node, for a square cell or its two triangles."""
+    ref = ref_element(element)
+    P = ref.nodes
+    if ref.domain == "square":
+        return [np.stack([(P[:, 0] + 1) / 2, (P[:, 1] + 1) / 2], axis=1)]
+    p, q = P[:, 0], P[:, 1]
+    return [np.stack([p + q, q], axis=1), np.stack([p, p + q], axis=1)]
+
+
+def _generate(element: str, nx: int, ny: int, position, label: str) -> Mesh:
+    """Shared structured generator: ``position(i, j, u, v) -> (x, y)`` for cell (i, j) and local (u, v)."""
+    nx, ny = _count(nx, "nx"), _count(ny, "ny")
+    ref = ref_element(element)
+    locals_ = _lift(element, None, ref.domain == "triangle")
+    I, J = np.meshgrid(np.arange(nx), np.arange(ny), indexing="ij")
+    I, J = I.ravel(), J.ravel()  # cells, s-major
+    all_keys, all_xy, all_param, conns = [], [], [], []
+    for loc in locals_:
+        u = loc[None, :, 0]
+        v = loc[None, :, 1]
+        ks = I[:, None] * _KEY + np.rint(u * _KEY).astype(np.int64)
+        kt = J[:, None] * _KEY + np.rint(v * _KEY).astype(np.int64)
+        x, y = position(I[:, None], J[:, None], np.broadcast_to(u, ks.shape), np.broadcast_to(v, ks.shape))
+        all_keys.append(kt * (nx * _KEY + 1) + ks)
+        all_xy.append(np.stack([np.broadcast_to(x, ks.shape), np.broadcast_to(y, ks.shape)], axis=2))
+        all_param.append(np.stack([ks / (nx * _KEY), kt / (ny * _KEY)], axis=2))
+    # interleave the two triangles of a cell so that element numbering follows the cells
+    keys = np.stack(all_keys, axis=1).reshape(-1, ref.n_nodes)
+    xy = np.stack(all_xy, axis=1).reshape(-1, ref.n_nodes, 2)
+    par = np.stack(all_param, axis=1).reshape(-1, ref.n_nodes, 2)
+    uniq, first, inverse = np.unique(keys.ravel(), return_index=True, return_inverse=True)
+    nodes = xy.reshape(-1, 2)[first]
+    param = par.reshape(-1, 2)[first]
+    conn = inverse.reshape(keys.shape)
+    return Mesh(element, nodes, conn, param, label)
+
+
+def _count(n, what):
+    try:
+        if isinstance(n, bool):
+            raise TypeError
+        v = int(n)
+        if v != n:
+            raise TypeError
+    except (TypeError, ValueError):
+        raise InputError(f"{what} must be a whole number of elements, got {n!r}") from None
+    if v < 1 or v > 4096:
+        raise InputError(f"{what} must be between 1 and 4096 elements, got {v}")
+    return v
+
+
+def structured(element: str, nx: int, ny: int, mapping, label: str = "") -> Mesh:
+    """Structured nx x ny mesh of a mapping of the unit square.
+
+    ``mapping(s, t) -> (x, y)`` is vectorised over arrays; every node (corner, mid-side,
+    interior) is placed at the mapping of its parametric position, so nodes follow curved
+    boundaries.  ``mapping`` may also be four corner points (a bilinear quadrilateral,
+    counter-clockwise from the corner at s = t = 0).
+    """
+    if not callable(mapping):
+        mapping = bilinear(mapping)
+
+    def position(i, j, u, v):
+        return mapping((i + u) / nx, (j + v) / ny)
+
+    return _generate(element, nx, ny, position, label)
+
+
+def from_corner_grid(element: str, X: np.ndarray, Y: np.ndarray, label: str = "") -> Mesh:
+    """Mesh from a grid of element corners X[i, j], Y[i, j] (shape (nx+1, ny+1)).
+
+    Element edges are straight: mid-side and interior nodes are placed by the bilinear
+    map of each cell's four corners (mid-side nodes at the edge midpoints).
+    """
+    X, Y = np.asarray(X, float), np.asarray(Y, float)
+    if X.shape != Y.shape or X.ndim != 2 or min(X.shape) < 2:
+        raise InputError(f"corner grids X, Y must have the same (nx+1, ny+1) shape with nx, ny >= 1; "
+                         f"got {X.shape} and {Y.shape}")
+    nx, ny = X.shape[0] - 1, X.shape[1] - 1
+
+    def position(i, j, u, v):
+        w00, w10, w11, w01 = (1 - u) * (1 - v), u * (1 - v), u * v, (1 - u) * v
+        x = w00 * X[i, j] + w10 * X[i + 1, j] + w11 * X[i + 1, j + 1] + w01 * X[i, j + 1]
+        y = w00 * Y[i, j] + w10 * Y[i + 1, j] + w11 * Y[i + 1, j + 1] + w01 * Y[i, j + 1]
+        return x, y
+
+    return _generate(element, nx, ny, position, label)
+
+
+def from_corners(element: str, corner_nodes, corner_conn, label: str = "") -> Mesh:
+    """Lift a corner mesh (Q4-like quadrilaterals or T3-like triangles) to ``element``.
+
+    Each element's extra nodes are placed by the linear (triangle) or bilinear
+    (quadrilateral) map of its corners: straight edges, mid-side nodes at the midpoints;
+    coincident nodes of neighbouring elements are merged.
+    """
+    ref = ref_element(element)
+    cn = np.asarray(corner_nodes, float)
+    cc = np.asarray(corner_conn, np.int64)
+    if cc.ndim != 2 or cc.shape[1] != ref.n_corners:
+        raise InputError(f"{element} needs {ref.n_corners} corner numbers per element; got shape {cc.shape}")
+    if cn.ndim != 2 or cn.shape[1] != 2:
+        raise InputError(f"corner nodes must be an (N, 2) array; got shape {cn.shape}")
+    if cc.min() < 0 or cc.max() >= len(cn):
+        raise InputError(f"corner connectivity refers to node {int(cc.max())} but there are {len(cn)} nodes")
+    C = cn[cc]  # (ne, nc, 2)
+    P = ref.nodes
+    if ref.domain == "square":
+        p, q = P[:, 0], P[:, 1]
+        W = np.stack([(1 - p) * (1 - q), (1 + p) * (1 - q), (1 + p) * (1 + q), (1 - p) * (1 + q)], axis=1) / 4
+    else:
+        p, q = P[:, 0], P[:, 1]
+        W = np.stack([1 - p - q, p, q], axis=1)
+    xy = np.einsum("nc,eck->enk", W, C)  # (ne, nn, 2)
+    scale = max(np.ptp(cn[:, 0]), np.ptp(cn[:, 1]), 1e-300)
+    keys = np.rint(xy.reshape(-1, 2) / scale * 1e9).astype(np.int64)
+    # keep corner numbering first (as given), then the new nodes
+    uniq, first, inverse = np.unique(keys, axis=0, return_index=True, return_inverse=True)
+    inverse = inverse.ravel()
+    order = np.argsort(first, kind="stable")
+    rank = np.empty_like(order)
+    rank[order] = np.arange(len(order))
+    nodes = xy.reshape(-1, 2)[first[order]]
+    conn = rank[inverse].reshape(xy.shape[0], ref.n_nodes)
+    # renumber so the given corner nodes keep their numbers
+    corner_of = {}
+    for e in range(cc.shape[0]):
+        for k in range(ref.n_corners):
+            corner_of[int(conn[e, k])] = int(cc[e, k])
+    n_c = len(cn)
+    new = np.full(len(nodes), -1, np.int64)
+    for m, c0 in corner_of.items():
+        new[m] = c0
+    rest = np.where(new < 0)[0]
+    new[rest] = n_c + np.arange(len(rest))
+    out_nodes = np.empty((n_c + len(rest), 2))
+    out_nodes[:n_c] = cn
+    out_nodes[new[rest]] = nodes[rest]
+    return Mesh(element, out_nodes, new[conn], None, label)
+
+
+def hand(element: str, nodes, conn, label: str = "") -> Mesh:
+    """A hand-specified mesh (all nodes of every element given), checked for valid geometry."""
+    m = Mesh(element, nodes, conn, None, label)
+    m.check()
+    return m
+
+
+def bilinear(corners) -> Callable:
+    """Mapping of the unit square onto a quadrilateral with corners c0 (s=t=0), c1 (s=1), c2, c3 (t=1)."""
+    c = np.asarray(corners, float)
+    if c.shape != (4, 2):
+        raise InputError(f"a bilinear patch needs 4 corner points; got shape {c.shape}")
+
+    def f(s, t):
+        w = ((1 - s) * (1 - t), s * (1 - t), s * t, (1 - s) * t)
+        return (sum(wk * c[k, 0] for k, wk in enumerate(w)), sum(wk * c[k, 1] for k, wk in enumerate(w)))
+
+    return f
+
+
+def polar(r_inner: float, r_outer: float, theta0: float = 0.0, theta1: float = math.pi / 2,
+          grading: float = 1.0) -> Callable:
+    """Mapping of the unit square onto an annular sector: s radial (inner -> outer), t angular.
+
+    ``grading`` > 1 concentrates elements towards the inner radius (geometric spacing of s).
+    """
+    if not 0 < r_inner < r_outer:
+        raise InputError(f"annulus radii must satisfy 0 < inner < outer; got {r_inner}, {r_outer}")
+
+    def f(s, t):
+        ss = s if grading == 1.0 else (grading ** s - 1) / (grading - 1)
+        r = r_inner + (r_outer - r_inner) * ss
+        th = theta0 + (theta1 - theta0) * t
+        return r * np.cos(th), r * np.sin(th)
+
+    return f
+
+
+# ---------------------------------------------------------------------------------------------
+# element matrices
+
+def element_provider(element: str, variant: str = "full", state: str = "plane-stress",
+                     prefer: Sequence[str] = ("c", "numpy")) -> tuple[Provider, str]:
+    """Element-matrix provider for a mesh, and a label saying which route it is.
+
+    Tries the generated kernels ``derive.kernel(element, variant, state, lang)`` in the
+    order of ``prefer``; falls back to the lambdified reference ``numeric_stiffness``.
+    """
+    import derive
+    from .element import element as make_element
+    el = make_element(element, variant, state)  # validates names
+    kernel = getattr(derive, "kernel", None)
+    if kernel is not None:
+        for lang in prefer:
+            try:
+                k = kernel(el.name, variant, state, lang=lang)
+            except Exception:  # a kernel that is not generated / not compilable here: try the next route
+                continue
+            return k, f"kernel-{lang}"
+
+    def reference(xy, E, nu, t):
+        return el.numeric_stiffness(xy, E, nu, t)
+
+    return reference, "reference"
+
+
+def gauss_provider(element: str, state: str = "plane-stress", rule: str | None = None) -> Provider:
+    """Plain displacement stiffness int B^T D B thick dA by Gauss quadrature in numpy.
+
+    Written only from the textbook definition (shape-function derivatives, Jacobian,
+    B, D, weights); an independent route for plain displacement elements and the NumPy
+    baseline of the mesh benchmark.
+    """
+    ref = ref_element(element)
+    pts, wts = rule_points(rule or ref.full_rule)
+
+    def k(xy, E, nu, t=1.0):
+        xy = np.asarray(xy, float)
+        single = xy.ndim == 2
+        if single:
+            xy = xy[None]
+        B, detJ, r = b_matrices(element, state, xy, pts)
+        Dm = _D(state, E, nu)
+        thick = 2 * np.pi * r if state == "axisymmetric" else np.full_like(detJ, t)
+        w = wts[None, :] * detJ * thick
+        DB = np.matmul(Dm, B) * w[..., None, None]            # (ne, np, nstrain, ndof)
+        K = np.matmul(np.swapaxes(B, 2, 3), DB).sum(axis=1)
+        return K[0] if single else K
+
+    return k
+
+
+@lru_cache(maxsize=64)
+def _D_cached(state: str, E: float, nu: float) -> np.ndarray:
+    return np.array(D_matrix(state, sp.Float(E, 17), nu).evalf(17).tolist(), dtype=float)
+
+
+def _D(state: str, E: float, nu: float) -> np.ndarray:
+    check_material(state, E, nu)
+    return _D_cached(state, float(E), float(nu))
+
+
+def b_matrices(element: str, state: str, xy: np.ndarray, pts: np.ndarray):
+    """B at reference points for a batch: returns B (ne, np, nstrain, ndof), det J (ne, np), radius (ne, np)."""
+    ref = ref_element(element)
+    N = ref.N(pts)                       # (np, nn)
+    dN = ref.dN(pts)                     # (np, 2, nn)
+    J = np.einsum("pan,enk->epak", dN, xy)   # J[a, k] = d x_k / d ref_a
+    det = J[..., 0, 0] * J[..., 1, 1] - J[..., 0, 1] * J[..., 1, 0]
+    inv = np.empty_like(J)
+    inv[..., 0, 0] = J[..., 1, 1] / det
+    inv[..., 0, 1] = -J[..., 0, 1] / det
+    inv[..., 1, 0] = -J[..., 1, 0] / det
+    inv[..., 1, 1] = J[..., 0, 0] / det
+    dNx = np.einsum("epka,pan->epkn", inv, dN)  # (ne, np, 2, nn): [d/dx, d/dy]
+    ne, npt, nn = xy.shape[0], pts.shape[0], ref.n_nodes
+    r = np.einsum("pn,en->ep", N, xy[..., 0])
+    if state == "axisymmetric":
+        B = np.zeros((ne, npt, 4, 2 * nn))
+        B[:, :, 0, 0::2] = dNx[:, :, 0]
+        B[:, :, 1, 1::2] = dNx[:, :, 1]
+        B[:, :, 2, 0::2] = N[None] / r[..., None]
+        B[:, :, 3, 0::2] = dNx[:, :, 1]
+        B[:, :, 3, 1::2] = dNx[:, :, 0]
+    else:
+        B = np.zeros((ne, npt, 3, 2 * nn))
+        B[:, :, 0, 0::2] = dNx[:, :, 0]
+        B[:, :, 1, 1::2] = dNx[:, :, 1]
+        B[:, :, 2, 0::2] = dNx[:, :, 1]
+        B[:, :, 2, 1::2] = dNx[:, :, 0]
+    return B, det, r
+
+
+# ---------------------------------------------------------------------------------------------
+# assembly
+
+@dataclass
+class Assembly:
+    K: sps.csr_matrix
+    route: str
+    element_seconds: float
+    scatter_seconds: float
+
+
+def assemble(mesh: Mesh, variant: str = "full", state: str = "plane-stress", E: float = 1.0, nu: float = 0.3,
+             t: float = 1.0, provider: Provider | None = None, chunk: int = 32768) -> Assembly:
+    """Global stiffness (CSR, ndof x ndof) of the mesh; element matrices from ``provider``."""
+    check_material(state, E, nu)
+    if not (isinstance(t, (int, float)) and math.isfinite(t) and t > 0):
+        raise InputError(f"thickness t = {t} is not allowed; t must be a finite number > 0")
+    route = "given"
+    if provider is None:
+        provider, route = element_provider(mesh.element, variant, state)
+    xy = mesh.element_coords()
+    ne = mesh.n_elements
+    t0 = time.perf_counter()
+    parts = [np.asarray(provider(xy[i:i + chunk], E, nu, t), dtype=float) for i in range(0, ne, chunk)]
+    Ke = parts[0] if len(parts) == 1 else np.concatenate(parts)
+    t1 = time.perf_counter()
+    nd = Ke.shape[1]
+    dofs = mesh.element_dofs()
+    if Ke.shape != (ne, dofs.shape[1], dofs.shape[1]):
+        raise InputError(f"element-matrix provider returned shape {Ke.shape}; expected {(ne, nd, nd)}")
+    rows = np.repeat(dofs, nd, axis=1).ravel()
+    cols = np.tile(dofs, (1, nd)).ravel()
+    K = sps.csr_matrix((Ke.ravel(), (rows, cols)), shape=(mesh.ndof, mesh.ndof))
+    K.sum_duplicates()
+    t2 = time.perf_counter()
+    return Assembly(K, route, t1 - t0, t2 - t1)
+
+
+# ---------------------------------------------------------------------------------------------
+# loads
+
+def _gauss_1d(n: int):
+    x, w = np.polynomial.legendre.leggauss(n)
+    return x, w
+
+
+def loaded_edges(mesh: Mesh, mask: np.ndarray) -> list[tuple[int, int]]:
+    """(element, edge) pairs whose nodes all lie in the node mask."""
+    ref = mesh.ref
+    mask = np.asarray(mask, bool)
+    out = []
+    for k, (_, _, idx) in enumerate(ref.edges):
+        on = np.all(mask[mesh.conn[:, list(idx)]], axis=1)
+        out += [(int(e), k) for e in np.nonzero(on)[0]]
+    return out
+
+
+def _resolve_mask(mesh: Mesh, where) -> np.ndarray:
+    if isinstance(where, str):
+        return mesh.side(where)
+    if callable(where):
+        return mesh.nodes_where(where)
+    m = np.asarray(where)
+    if m.dtype == bool:
+        if m.shape != (mesh.n_nodes,):
+            raise InputError(f"node mask must have one entry per node ({mesh.n_nodes}); got {m.shape}")
+        return m
+    mask = np.zeros(mesh.n_nodes, bool)
+    mask[m.astype(np.int64)] = True
+    return mask
+
+
+def edge_load(mesh: Mesh, where, traction, state: str = "plane-stress", t: float = 1.0,
+              n_gauss: int | None = None) -> np.ndarray:
+    """Consistent nodal forces of a traction (force per unit area) on the edges in ``where``.
+
+    ``traction`` is a pair (tx, ty) or a vectorised callable ``(x, y, nx, ny) -> (tx, ty)``
+    (n = outward unit normal of the edge); forces are int N_i traction thick ds, thick = t
+    (plane states) or 2 pi r (axisymmetric).
+    """
+    ref = mesh.ref
+    mask = _resolve_mask(mesh, where)
+    edges = loaded_edges(mesh, mask)
+    if not edges:
+        raise InputError("no element edge lies entirely on the loaded boundary; check the side or node selection")
+    ng = n_gauss or (max(len(ref.edges[0][2]), 2) + 1)
+    gx, gw = _gauss_1d(ng)
+    f = np.zeros(mesh.ndof)
+    by_edge: dict[int, list[int]] = {}
+    for e, k in edges:
+        by_edge.setdefault(k, []).append(e)
+    for k, elems in by_edge.items():
+        A, Bp, _ = ref.edges[k]
+        s01 = (gx + 1) / 2
+        P = A[None] + s01[:, None] * (Bp - A)[None]              # reference points on the edge
+        dref = (Bp - A) / 2                                      # d(ref)/d(gauss coordinate)
+        N = ref.N(P)                                             # (ng, nn)
+        dN = ref.dN(P)                                           # (ng, 2, nn)
+        xy = mesh.nodes[mesh.conn[elems]]                        # (m, nn, 2)
+        pos = np.einsum("gn,enk->egk", N, xy)
+        J = np.einsum("gan,enk->egak", dN, xy)                   # d x_k / d ref_a
+        tang = np.einsum("a,egak->egk", dref, J)                 # dx/dgauss
+        ds = np.linalg.norm(tang, axis=2)
+        normal = np.stack([tang[..., 1], -tang[..., 0]], axis=2) / ds[..., None]  # outward for CCW elements
+        if callable(traction):
+            tx, ty = traction(pos[..., 0], pos[..., 1], normal[..., 0], normal[..., 1])
+        else:
+            tx, ty = traction
+        tr = np.stack([np.broadcast_to(tx, ds.shape), np.broadcast_to(ty, ds.shape)], axis=2)
+        thick = 2 * np.pi * pos[..., 0] if state == "axisymmetric" else t
+        w = gw[None] * ds * thick
+        fe = np.einsum("eg,gn,egk->enk", w, N, tr)              # (m, nn, 2)
+        dofs = mesh.element_dofs()[elems].reshape(len(elems), -1, 2)
+        np.add.at(f, dofs.ravel(), fe.ravel())
+    return f
+
+
+def edge_length(mesh: Mesh, where) -> float:
+    """Length of the boundary in ``where`` measured along the element edges."""
+    f = edge_load(mesh, where, (1.0, 0.0), "plane-stress", 1.0)
+    return float(f[0::2].sum())
+
+
+def uniform_edge_force(mesh: Mesh, where, total: tuple[float, float], state: str = "plane-stress",
+                       t: float = 1.0) -> np.ndarray:
+    """A uniform traction on the edges in ``where`` whose resultant is ``total`` (Fx, Fy)."""
+    if state == "axisymmetric":
+        raise InputError("uniform_edge_force is for plane states; give a traction with edge_load instead")
+    L = edge_length(mesh, where)
+    return edge_load(mesh, where, (total[0] / (L * t), total[1] / (L * t)), state, t)
+
+
+def pressure_load(mesh: Mesh, where, p: float, state: str = "plane-stress", t: float = 1.0) -> np.ndarray:
+    """A pressure p (positive pushes into the body) on the edges in ``where``."""
+    return edge_load(mesh, where, lambda x, y, nx, ny: (-p * nx, -p * ny), state, t)
+
+
+# ---------------------------------------------------------------------------------------------
+# supports and solve
+
+class MechanismError(InputError):
+    """The supported stiffness is singular: a zero-energy mode that spreads through the mesh, or
+    supports that leave a rigid-body motion free."""
+
+
+def fix(mesh: Mesh, where, components: str = "uv", value=0.0) -> dict[int, float]:
+    """Prescribed DOFs for the nodes in ``where``: components "u", "v" or "uv"; value a number
+    or a callable (x, y) -> (u, v)."""
+    mask = _resolve_mask(mesh, where)
+    if not mask.any():
+        raise InputError("support selection contains no node")
+    if not components or set(components) - set("uv"):
+        raise InputError(f"support components must be 'u', 'v' or 'uv'; got {components!r}")
+    idx = np.nonzero(mask)[0]
+    out: dict[int, float] = {}
+    if callable(value):
+        uu, vv = value(mesh.nodes[idx, 0], mesh.nodes[idx, 1])
+        uu, vv = np.broadcast_to(uu, idx.shape), np.broadcast_to(vv, idx.shape)
+    else:
+        uu = vv = np.full(idx.shape, float(value))
+    for k, n in enumerate(idx):
+        if "u" in components:
+            out[2 * int(n)] = float(uu[k])
+        if "v" in components:
+            out[2 * int(n) + 1] = float(vv[k])
+    return out
+
+
+def solve(K: sps.spmatrix, f: np.ndarray, fixed: dict[int, float],
+          diagnostics: dict | None = None) -> tuple[np.ndarray, np.ndarray, float]:
+    """Solve K u = f with prescribed DOFs; returns (u, reactions, seconds).
+
+    Sparse LU (SuperLU, minimum-degree ordering on A^T + A).  A pivot smaller than 1e-12
+    of the largest means the supported stiffness is singular (a mechanism: a zero-energy
+    mode or missing supports) and raises :class:`MechanismError`; between 1e-12 and 1e-8
+    the system is nearly singular and a warning is put into ``diagnostics["warnings"]``.
+    """
+    n = K.shape[0]
+    u = np.zeros(n)
+    if fixed:
+        cdofs = np.fromiter(fixed.keys(), np.int64)
+        u[cdofs] = np.fromiter(fixed.values(), float)
+    else:
+        cdofs = np.zeros(0, np.int64)
+    free = np.ones(n, bool)
+    free[cdofs] = False
+    fd = np.nonzero(free)[0]
+    t0 = time.perf_counter()
+    K = K.tocsr()
+    rhs = f[fd] - (K[fd][:, cdofs] @ u[cdofs] if len(cdofs) else 0.0)
+    Kff = K[fd][:, fd].tocsc()
+    try:
+        lu = spla.splu(Kff, permc_spec="MMD_AT_PLUS_A")
+    except RuntimeError as exc:
+        raise MechanismError(f"the stiffness matrix is singular with these supports ({exc}): a mechanism "
+                             "(zero-energy mode) or too few supports") from None
+    piv = np.abs(lu.U.diagonal())
+    ratio = float(piv.min() / piv.max()) if piv.size else 1.0
+    if ratio < 1e-12:
+        raise MechanismError(f"the stiffness matrix is singular with these supports (smallest pivot {ratio:.1e} of "
+                             "the largest): a mechanism (zero-energy mode) or too few supports")
+    uf = lu.solve(rhs)
+    if not np.all(np.isfinite(uf)):
+        raise MechanismError("the solve produced non-finite displacements: a mechanism or too few supports")
+    u[fd] = uf
+    seconds = time.perf_counter() - t0
+    reactions = K @ u - f
+    reactions[fd] = 0.0
+    if diagnostics is not None:
+        diagnostics["min_pivot_ratio"] = ratio
+        diagnostics.setdefault("warnings", [])
+        if ratio < 1e-8:
+            diagnostics["warnings"].append(f"nearly singular stiffness (smallest pivot {ratio:.1e} of the largest): "
+                                           "a weakly restrained zero-energy mode may pollute the result")
+    return u, reactions, seconds
+
+
+# ---------------------------------------------------------------------------------------------
+# solution and stresses
+
+@dataclass
+class Solution:
+    mesh: Mesh
+    variant: str
+    state: str
+    E: float
+    nu: float
+    t: float
+    u: np.ndarray
+    reactions: np.ndarray
+    f: np.ndarray
+    route: str = ""
+    timings: dict = field(default_factory=dict)
+    warnings: list = field(default_factory=list)
+
+    def displacement(self, node: int) -> tuple[float, float]:
+        return float(self.u[2 * node]), float(self.u[2 * node + 1])
+
+    @property
+    def U(self) -> np.ndarray:
+        """(N, 2) nodal displacements."""
+        return self.u.reshape(-1, 2)
+
+    def displacement_at(self, x: float, y: float) -> tuple[float, float]:
+        """Displacement at a point of the mesh, interpolated with the element's shape functions."""
+        e, ref_pt = locate(self.mesh, x, y)
+        N = self.mesh.ref.N(ref_pt[None])[0]
+        ue = self.U[self.mesh.conn[e]]
+        return float(N @ ue[:, 0]), float(N @ ue[:, 1])
+
+    def point_stresses(self, rule: str | None = None) -> tuple[np.ndarray, np.ndarray]:
+        """Stresses D B u at the rule's points: returns (positions (ne, np, 2), stresses (ne, np, nstress))."""
+        ref = self.mesh.ref
+        pts, _ = rule_points(rule or ref.full_rule)
+        xy = self.mesh.element_coords()
+        B, _, _ = b_matrices(self.mesh.element, self.state, xy, pts)
+        ue = self.u[self.mesh.element_dofs()]
+        strain = np.einsum("epkd,ed->epk", B, ue)
+        sig = np.einsum("kl,epl->epk", _D(self.state, self.E, self.nu), strain)
+        pos = np.einsum("pn,enk->epk", ref.N(pts), xy)
+        return pos, sig
+
+    def nodal_stresses(self, rule: str | None = None) -> np.ndarray:
+        """Stresses extrapolated from the rule points to each element's nodes, averaged over the
+        elements meeting at a node: (N, nstress).
+
+        The extrapolation fits the rule-point values with the element's shape functions when
+        the rule has at least as many points as nodes, with the corner (linear / bilinear)
+        functions when it has at least as many as corners, and with a constant otherwise.
+        """
+        ref = self.mesh.ref
+        pts, _ = rule_points(rule or ref.full_rule)
+        _, sig = self.point_stresses(rule)
+        E = _extrapolation(ref, pts)                           # (nn, np)
+        at_nodes = np.einsum("np,epk->enk", E, sig)
+        ns = sig.shape[2]
+        acc = np.zeros((self.mesh.n_nodes, ns))
+        cnt = np.zeros(self.mesh.n_nodes)
+        np.add.at(acc, self.mesh.conn.ravel(), at_nodes.reshape(-1, ns))
+        np.add.at(cnt, self.mesh.conn.ravel(), 1.0)
+        return acc / cnt[:, None]
+
+
+def locate(mesh: Mesh, x: float, y: float, tol: float = 1e-9) -> tuple[int, np.ndarray]:
+    """Element containing (x, y) and the reference coordinates of the point in it (Newton on the map)."""
+    xy = mesh.element_coords()
+    lo, hi = xy.min(axis=1), xy.max(axis=1)
+    span = max(np.ptp(mesh.nodes[:, 0]), np.ptp(mesh.nodes[:, 1]), 1e-300)
+    pad = 1e-6 * span
+    cand = np.nonzero((lo[:, 0] - pad <= x) & (x <= hi[:, 0] + pad) & (lo[:, 1] - pad <= y) & (y <= hi[:, 1] + pad))[0]
+    ref = mesh.ref
+    start = np.array([0.0, 0.0]) if ref.domain == "square" else np.array([1 / 3, 1 / 3])
+    target = np.array([x, y])
+    for e in cand:
+        P = start.copy()
+        for _ in range(30):
+            N = ref.N(P[None])[0]
+            dN = ref.dN(P[None])[0]
+            pos = N @ xy[e]
+            J = dN @ xy[e]                   # rows d/dxi, d/deta; columns x, y
+            step = np.linalg.solve(J.T, target - pos)
+            P = P + step
+            if np.abs(step).max() < 1e-13:
+                break
+        inside = (np.all(np.abs(P) <= 1 + tol) if ref.domain == "square"
+                  else (P.min() >= -tol and P.sum() <= 1 + tol))
+        if inside and np.linalg.norm(ref.N(P[None])[0] @ xy[e] - target) <= 1e-9 * span:
+            return int(e), P
+    raise InputError(f"point ({x:g}, {y:g}) is not inside the mesh")
+
+
+def _extrapolation(ref: RefElement, pts: np.ndarray) -> np.ndarray:
+    npt = pts.shape[0]
+    if npt >= ref.n_nodes:
+        A = ref.N(pts)                                  # (np, nn)
+        return np.linalg.lstsq(A, np.eye(npt), rcond=None)[0]   # (nn, np): least-squares fit
+    if npt >= ref.n_corners:
+        def corner_funcs(P):
+            p, q = P[:, 0], P[:, 1]
+            if ref.domain == "square":
+                return np.stack([(1 - p) * (1 - q), (1 + p) * (1 - q), (1 + p) * (1 + q), (1 - p) * (1 + q)], 1) / 4
+            return np.stack([1 - p - q, p, q], 1)
+        coeff = np.linalg.lstsq(corner_funcs(pts), np.eye(npt), rcond=None)[0]   # (nc, np)
+        return corner_funcs(ref.nodes) @ coeff                                    # (nn, np)
+    return np.full((ref.n_nodes, npt), 1.0 / npt)
+
+
+def analyse(mesh: Mesh, f: np.ndarray, fixed: dict[int, float], variant: str = "full",
+            state: str = "plane-stress", E: float = 1.0, nu: float = 0.3, t: float = 1.0,
+            provider: Provider | None = None) -> Solution:
+    """Assemble, solve and return a :class:`Solution`."""
+    asm = assemble(mesh, variant, state, E, nu, t, provider)
+    diag: dict = {}
+    u, reactions, secs = solve(asm.K, f, fixed, diag)
+    return Solution(mesh, variant, state, E, nu, t, u, reactions, f, asm.route,
+                    {"element_matrices": asm.element_seconds, "scatter": asm.scatter_seconds, "solve": secs},
+                    diag.get("warnings", []))
+
+
+def von_mises(sig: np.ndarray, state: str, nu: float) -> np.ndarray:
+    """Von Mises stress of plane stress / plane strain (sigma_z = nu (sx + sy)) / axisymmetric stresses."""
+    if state == "axisymmetric":
+        sr, sz, st, trz = sig[..., 0], sig[..., 1], sig[..., 2], sig[..., 3]
+        return np.sqrt(0.5 * ((sr - sz) ** 2 + (sz - st) ** 2 + (st - sr) ** 2) + 3 * trz ** 2)
+    sx, sy, txy = sig[..., 0], sig[..., 1], sig[..., 2]
+    sz = nu * (sx + sy) if state == "plane-strain" else 0.0 * sx
+    return np.sqrt(0.5 * ((sx - sy) ** 2 + (sy - sz) ** 2 + (sz - sx) ** 2) + 3 * txy ** 2)
+
+
+# ---------------------------------------------------------------------------------------------
+# VTK export
+
+# VTK cell types: triangle 5, quad 9, quadratic triangle 22, quadratic quad 23, biquadratic quad 28
+_VTK_TYPES = {"T3": 5, "Q4": 9, "T6": 22, "Q8": 23, "Q9": 28}
+
+
+def vtu_text(sol: Solution, scale: float = 1.0) -> str:
+    """VTK XML UnstructuredGrid (ASCII) of the deformed mesh (points x + scale u), with the
+    displacement and averaged nodal stresses as point data and element-mean stresses as cell data."""
+    mesh = sol.mesh
+    ref = mesh.ref
+    ctype = _VTK_TYPES.get(mesh.element)
+    conn = mesh.conn
+    if ctype is None:  # other elements: their corner polygon
+        ctype = 5 if ref.n_corners == 3 else 9
+        conn = conn[:, :ref.n_corners]
+    pts = mesh.nodes + scale * sol.U
+    nod = sol.nodal_stresses()
+    _, sp_ = sol.point_stresses()
+    cell = sp_.mean(axis=1)
+    names = ["sigma_rr", "sigma_zz", "sigma_tt", "tau_rz"] if sol.state == "axisymmetric" else \
+        ["sigma_xx", "sigma_yy", "tau_xy"]
+
+    def arr(a, fmt="{:.9g}"):
+        return " ".join(fmt.format(v) for v in np.asarray(a).ravel())
+
+    n_pts, n_cells = len(pts), len(conn)
+    offsets = np.cumsum(np.full(n_cells, conn.shape[1]))
+    p3 = np.column_stack([pts, np.zeros(n_pts)])
+    d3 = np.column_stack([sol.U, np.zeros(n_pts)])
+    lines = ['<?xml version="1.0"?>',
+             '<VTKFile type="UnstructuredGrid" version="0.1" byte_order="LittleEndian">',
+             '  <UnstructuredGrid>',
+             f'    <Piece NumberOfPoints="{n_pts}" NumberOfCells="{n_cells}">',
+             '      <PointData Vectors="displacement">',
+             f'        <DataArray type="Float64" Name="displacement" NumberOfComponents="3" format="ascii">{arr(d3)}</DataArray>']
+    for k, nm in enumerate(names):
+        lines.append(f'        <DataArray type="Float64" Name="{nm}" format="ascii">{arr(nod[:, k])}</DataArray>')
+    lines.append(f'        <DataArray type="Float64" Name="von_mises" format="ascii">'
+                 f'{arr(von_mises(nod, sol.state, sol.nu))}</DataArray>')
+    lines.append('      </PointData>')
+    lines.append('      <CellData>')
+    for k, nm in enumerate(names):
+        lines.append(f'        <DataArray type="Float64" Name="{nm}_mean" format="ascii">{arr(cell[:, k])}</DataArray>')
+    lines += ['      </CellData>',
+              '      <Points>',
+              f'        <DataArray type="Float64" NumberOfComponents="3" format="ascii">{arr(p3)}</DataArray>',
+              '      </Points>',
+              '      <Cells>',
+              f'        <DataArray type="Int64" Name="connectivity" format="ascii">{arr(conn, "{:d}")}</DataArray>',
+              f'        <DataArray type="Int64" Name="offsets" format="ascii">{arr(offsets, "{:d}")}</DataArray>',
+              f'        <DataArray type="UInt8" Name="types" format="ascii">{arr(np.full(n_cells, ctype), "{:d}")}</DataArray>',
+              '      </Cells>',
+              '    </Piece>',
+              '  </UnstructuredGrid>',
+              f'  <!-- {_xml.escape(f"derive mesh: {mesh.element} {sol.variant} {sol.state}, deformation scale {scale:g}")} -->',
+              '</VTKFile>', '']
+    return "\n".join(lines)
+
+
+def write_vtu(path, sol: Solution, scale: float = 1.0):
+    """Write the deformed mesh as a .vtu file (atomically)."""
+    return write_atomic(path, vtu_text(sol, scale))
+
+
+# ---------------------------------------------------------------------------------------------
+# benchmark (derive perf --mesh)
+
+def _membrane_problem(element: str, n: int):
+    from .benchmarks import COOK
+    mesh = structured(element, n, n, COOK["corners"])
+    f = uniform_edge_force(mesh, "right", (0.0, COOK["load"]), "plane-stress", COOK["t"])
+    fixed = fix(mesh, "left", "uv")
+    return mesh, f, fixed
+
+
+def benchmark(quick: bool = False) -> dict:
+    """Assembly and solve of an n x n Q4 mesh of the tapered membrane, per element-matrix route.
+
+    Times are measured side by side in one run; the figures to quote are the ratios.
+    """
+    n = 32 if quick else 256
+    element, variant, state, E, nu, t = "Q4", "full", "plane-stress", 1.0, 1.0 / 3.0, 1.0
+    mesh, f, fixed = _membrane_problem(element, n)
+    routes: list[tuple[str, Provider]] = []
+    import derive
+    kernel = getattr(derive, "kernel", None)
+    if kernel is not None:
+        for lang in ("c", "numpy"):
+            try:
+                routes.append((f"generated {lang} kernel", kernel(element, variant, state, lang=lang)))
+            except Exception:  # not generated or not compilable on this machine
+                pass
+    routes.append(("numpy Gauss quadrature (mesh.gauss_provider)", gauss_provider(element, state)))
+    from .element import element as make_element
+    el = make_element(element, variant, state)
+    routes.append(("lambdified reference (numeric_stiffness)", lambda xy, E, nu, t: el.numeric_stiffness(xy, E, nu, t)))
+    # warm-up (lambdify / compile / first-call costs are not assembly)
+    small = mesh.element_coords()[:4]
+    for _, p in routes:
+        p(small, E, nu, t)
+    results, lines = [], []
+    lines.append(f"membrane {n} x {n} {element} ({mesh.n_elements} elements, {mesh.ndof} unknowns); "
+                 f"command: derive perf --mesh{' --quick' if quick else ''}")
+    K_ref = None
+    for label, p in routes:
+        best = None
+        for _ in range(1 if not quick else 2):
+            asm = assemble(mesh, variant, state, E, nu, t, provider=p)
+            if best is None or asm.element_seconds + asm.scatter_seconds < best.element_seconds + best.scatter_seconds:
+                best = asm
+        if K_ref is None:
+            K_ref = best.K
+        diff = abs(best.K - K_ref).max() / abs(K_ref).max()
+        results.append({"route": label, "element_seconds": best.element_seconds, "scatter_seconds": best.scatter_seconds,
+                        "assembly_seconds": best.element_seconds + best.scatter_seconds,
+                        "elements_per_second": mesh.n_elements / max(best.element_seconds + best.scatter_seconds, 1e-12),
+                        "max_rel_difference": float(diff)})
+    u, _, solve_s = solve(K_ref, f, fixed)
+    v_corner = float(u[2 * mesh.node_at(48.0, 60.0) + 1])
+    fastest = results[0]
+    for r in results:
+        lines.append(f"{r['route']}: assembly {r['assembly_seconds']:.3f} s (element matrices {r['element_seconds']:.3f} s "
+                     f"+ scatter/CSR {r['scatter_seconds']:.3f} s), {r['elements_per_second']:.3g} elements/s, "
+                     f"{fastest['assembly_seconds'] / r['assembly_seconds']:.2f}x of the first route's rate; "
+                     f"K differs by {r['max_rel_difference']:.1e}")
+    lines.append(f"sparse LU solve (scipy SuperLU, MMD on A^T+A): {solve_s:.3f} s; corner deflection {v_corner:.4f}")
+    return {"section": "mesh", "lines": lines, "n": n, "elements": mesh.n_elements, "unknowns": mesh.ndof,
+            "routes": results, "solve_seconds": solve_s, "v_corner": v_corner}
