@@ -38,9 +38,10 @@ COOK = {"corners": ((0.0, 0.0), (48.0, 44.0), (48.0, 60.0), (0.0, 44.0)), "E": 1
         "load": 1.0, "corner": (48.0, 60.0), "mid": (48.0, 52.0),
         # Cook (1974) / often-quoted converged mid-edge value, from memory
         "quoted_mid": 23.96}
-# converged values established in this project by the Q9 study to 256 x 256 with Richardson
-# extrapolation (derive bench membrane --element Q9 --refine 8; see notes/verification.md)
-COOK_CONVERGED = {"corner": None, "mid": None}
+# converged values established in this project: Q9 and Q8 refinement studies to 256 x 256 with
+# Richardson extrapolation of the last three levels agree to 1e-4 (Q9: 25.18928 / 23.96774,
+# Q8: 25.18922 / 23.96774); see notes/verification.md
+COOK_CONVERGED = {"corner": 25.189, "mid": 23.968}
 CYLINDER = {"inner": 3.0, "outer": 9.0, "E": 1000.0, "p": 1.0, "t": 1.0,
             "nus": (0.3, 0.49, 0.499, 0.4999)}
 
@@ -225,24 +226,45 @@ def _progress(total, label, show):
     return Progress(total, label, enabled=show)
 
 
+MECHANISM = "mechanism (singular stiffness)"
+
+
+def _attempt(fn, *args, **kw):
+    """Run one problem; a mechanism (singular supported stiffness) becomes a row with value None."""
+    try:
+        r = fn(*args, **kw)
+    except M.MechanismError:
+        return None, None
+    sol = r.pop("_solution")
+    return r, sol
+
+
+def _num(v, fmt: str) -> str:
+    return format(v, fmt) if v is not None else MECHANISM
+
+
 def cantilever_study(element: str, variant: str = "full", meshes=CANTILEVER_MESHES, loads=("shear", "extension"),
                      refine: int = 1, show_progress=False) -> dict:
-    rows = []
+    rows, last = [], None
     pr = _progress(len(meshes) * len(loads), "cantilever", show_progress)
     for kind in meshes:
         for load in loads:
             pr.step(f"{kind} {load}")
-            r = run_cantilever(element, variant, kind, load, refine)
-            r.pop("_solution")
+            r, sol = _attempt(run_cantilever, element, variant, kind, load, refine)
+            if r is None:
+                r = {"problem": "cantilever", "element": element, "variant": variant, "mesh": kind, "load": load,
+                     "refine": refine, "value": None, "reference": CANTILEVER["reference"][load], "normalized": None,
+                     "note": MECHANISM}
+            last = sol or last
             rows.append(r)
     pr.close()
     lines = [f"cantilever (MacNeal & Harder 1985): {element} {variant}, 6 x 1 cells x refine {refine}; "
              "value = mean tip displacement along the load"]
     for r in rows:
-        lines.append(f"{r['mesh']:<13} {r['load']:<9} value {r['value']:.6g}  reference {r['reference']:.6g}  "
-                     f"normalized {r['normalized']:.4f}")
+        lines.append(f"{r['mesh']:<13} {r['load']:<9} value {_num(r['value'], '.6g')}  reference {r['reference']:.6g}  "
+                     f"normalized {_num(r['normalized'], '.4f')}")
     return {"problem": "cantilever", "element": element, "variant": variant, "results": rows, "lines": lines,
-            **_headline(rows[0])}
+            **_headline(rows[0]), "_solution": last}
 
 
 def _headline(row: dict) -> dict:
@@ -251,65 +273,78 @@ def _headline(row: dict) -> dict:
 
 def membrane_study(element: str, variant: str = "full", levels=(2, 4, 8, 16, 32), show_progress=False) -> dict:
     levels = [M._count(n, "membrane mesh") for n in levels]
-    rows = []
+    rows, last = [], None
     pr = _progress(len(levels), "membrane", show_progress)
     for n in levels:
         pr.step(f"{n} x {n}")
-        r = run_membrane(element, variant, n)
-        r.pop("_solution")
+        r, sol = _attempt(run_membrane, element, variant, n)
+        if r is None:
+            r = {"problem": "membrane", "element": element, "variant": variant, "mesh": f"{n} x {n}", "n": n,
+                 "value": None, "corner": None, "mid": None, "reference": COOK_CONVERGED["mid"] or COOK["quoted_mid"],
+                 "normalized": None, "note": MECHANISM}
+        last = sol or last
         rows.append(r)
     pr.close()
     out = {"problem": "membrane", "element": element, "variant": variant, "results": rows}
+    ok = [r for r in rows if r["mid"] is not None]
     geometric = all(b == 2 * a for a, b in zip(levels, levels[1:]))
     extrap = {}
-    if len(rows) >= 3 and geometric:
+    if len(ok) == len(rows) and len(rows) >= 3 and geometric:
         for key in ("corner", "mid"):
             extrap[key] = richardson([r[key] for r in rows])
     out["extrapolated"] = extrap
     refs = {k: (COOK_CONVERGED[k] if COOK_CONVERGED[k] is not None else (extrap.get(k) or {}).get("value"))
             for k in ("corner", "mid")}
     out["converged_reference"] = refs
-    h = [1.0 / n for n in levels]
     rates = {}
     for key in ("corner", "mid"):
-        if refs[key] is not None:
-            for r in rows:
+        if refs[key] is not None and ok:
+            for r in ok:
                 r[f"error_{key}"] = r[key] - refs[key]
-            rates[key] = slope(h, [r[f"error_{key}"] for r in rows])
+            rates[key] = slope([1.0 / r["n"] for r in ok], [r[f"error_{key}"] for r in ok])
     out["rates"] = rates
     lines = [f"membrane (Cook 1974): {element} {variant}; v at the top corner (48, 60) and at the loaded edge's "
              "mid-point (48, 52)", f"{'mesh':>9} {'v corner':>11} {'v mid-edge':>11}"]
     for r in rows:
-        lines.append(f"{r['mesh']:>9} {r['corner']:11.5f} {r['mid']:11.5f}")
+        if r["mid"] is None:
+            lines.append(f"{r['mesh']:>9} {MECHANISM}")
+        else:
+            lines.append(f"{r['mesh']:>9} {r['corner']:11.5f} {r['mid']:11.5f}")
     for key, e in extrap.items():
         if e["order"] is not None:
             lines.append(f"Richardson ({key}, last three levels): {e['value']:.4f}, observed order {e['order']:.2f}")
         else:
             lines.append(f"Richardson ({key}): {e['note']}")
-    for key, s in rates.items():
-        if s is not None:
-            lines.append(f"convergence rate ({key}): error ~ h^{s:.2f} against {refs[key]:.4f}")
+    for key, sl in rates.items():
+        if sl is not None:
+            lines.append(f"convergence rate ({key}): error ~ h^{sl:.2f} against {refs[key]:.4f}")
     lines.append(f"often-quoted converged value (mid-edge, from memory): {COOK['quoted_mid']}")
     out["lines"] = lines
     out.update(_headline(rows[-1]))
+    out["_solution"] = last
     return out
 
 
 def cylinder_study(element: str, variant: str = "full", levels=(2, 4, 8, 16), nus=CYLINDER["nus"],
                    show_progress=False) -> dict:
     levels = [M._count(n, "cylinder mesh") for n in levels]
-    rows = []
+    rows, last = [], None
     pr = _progress(len(levels) * len(nus), "cylinder", show_progress)
     for nu in nus:
         for n in levels:
             pr.step(f"nu {nu} {n} x {n}")
-            r = run_cylinder(element, variant, n, nu)
-            r.pop("_solution")
+            r, sol = _attempt(run_cylinder, element, variant, n, nu)
+            if r is None:
+                r = {"problem": "cylinder", "element": element, "variant": variant, "mesh": f"{n} x {n}", "n": n,
+                     "nu": nu, "value": None,
+                     "reference": lame_bore(CYLINDER["p"], CYLINDER["inner"], CYLINDER["outer"], CYLINDER["E"], nu),
+                     "normalized": None, "error": None, "note": MECHANISM}
+            last = sol or last
             rows.append(r)
     pr.close()
     rates = {}
     for nu in nus:
-        sub = [r for r in rows if r["nu"] == nu]
+        sub = [r for r in rows if r["nu"] == nu and r["error"] is not None]
         rates[str(nu)] = slope([1.0 / r["n"] for r in sub], [r["error"] for r in sub])
     lines = [f"cylinder (Lame, plane strain, inner {CYLINDER['inner']:g}, outer {CYLINDER['outer']:g}, "
              f"E {CYLINDER['E']:g}, p {CYLINDER['p']:g}): {element} {variant}; radial displacement at the bore / Lame",
@@ -317,10 +352,11 @@ def cylinder_study(element: str, variant: str = "full", levels=(2, 4, 8, 16), nu
     for nu in nus:
         sub = [r for r in rows if r["nu"] == nu]
         rate = rates[str(nu)]
-        lines.append(f"{nu:>7} " + " ".join(f"{r['normalized']:10.4f}" for r in sub) +
+        lines.append(f"{nu:>7} " + " ".join(f"{r['normalized']:10.4f}" if r["normalized"] is not None
+                                            else f"{'mechanism':>10}" for r in sub) +
                      (f"   h^{rate:.2f}" if rate is not None else ""))
     return {"problem": "cylinder", "element": element, "variant": variant, "results": rows, "rates": rates,
-            "lines": lines, **_headline(rows[-1])}
+            "lines": lines, **_headline(rows[-1]), "_solution": last}
 
 
 LOCKING_ASPECTS = (1, 2, 3, 5, 10, 15, 30)
@@ -332,10 +368,15 @@ def locking_mesh_study(element: str, variant: str = "full", depths=(1, 2, 4), as
     c = CANTILEVER
     slender = c["length"] / c["depth"]
     ref = beam_tip_deflection(1.0, c["length"], c["depth"], c["t"], c["E"], c["nu"])
-    rows = []
+    if not 0 < accuracy <= 2:
+        raise InputError(f"accuracy must be a fraction of beam theory such as 0.95; got {accuracy}")
+    rows, last = [], None
+    depths = [M._count(ny, "elements through the depth") for ny in depths]
+    for ar in aspects:
+        if not (isinstance(ar, (int, float)) and ar > 0):
+            raise InputError(f"aspect ratios must be positive numbers; got {ar!r}")
     pr = _progress(len(depths) * len(aspects), "locking-mesh", show_progress)
     for ny in depths:
-        ny = M._count(ny, "elements through the depth")
         for ar in aspects:
             nx = slender * ny / ar
             if abs(nx - round(nx)) > 1e-9 or round(nx) < 1:
@@ -343,28 +384,30 @@ def locking_mesh_study(element: str, variant: str = "full", depths=(1, 2, 4), as
                                  f"number of elements along the length (L/h = {slender:g})")
             nx = int(round(nx))
             pr.step(f"{ny} deep, aspect {ar}")
-            r = run_cantilever(element, variant, "rectangular", "shear", 1, nx=nx, ny=ny)
-            r.pop("_solution")
-            rows.append({"problem": "locking-mesh", "element": r["element"], "variant": variant,
-                         "mesh": f"{nx} x {ny}", "depth_elements": ny, "aspect": ar, "value": r["value"],
-                         "reference": ref, "normalized": r["value"] / ref})
+            r, sol = _attempt(run_cantilever, element, variant, "rectangular", "shear", 1, nx=nx, ny=ny)
+            last = sol or last
+            value = r["value"] if r else None
+            rows.append({"problem": "locking-mesh", "element": element, "variant": variant,
+                         "mesh": f"{nx} x {ny}", "depth_elements": ny, "aspect": ar, "value": value,
+                         "reference": ref, "normalized": value / ref if value is not None else None})
     pr.close()
     needed = {}
     for ny in depths:
-        ok = [r["aspect"] for r in rows if r["depth_elements"] == ny and r["normalized"] >= accuracy]
+        ok = [r["aspect"] for r in rows if r["depth_elements"] == ny and r["normalized"] is not None
+              and r["normalized"] >= accuracy]
         needed[str(ny)] = max(ok) if ok else None
     lines = [f"locking-mesh: cantilever L {c['length']:g}, depth {c['depth']:g}, {element} {variant}; "
              f"tip deflection / Timoshenko beam theory ({ref:.6g})",
              f"{'aspect':>7} " + " ".join(f"{str(ny) + ' deep':>9}" for ny in depths)]
     for ar in aspects:
         vals = [next(r for r in rows if r["depth_elements"] == ny and r["aspect"] == ar)["normalized"] for ny in depths]
-        lines.append(f"{ar:>7} " + " ".join(f"{v:9.4f}" for v in vals))
+        lines.append(f"{ar:>7} " + " ".join(f"{v:9.4f}" if v is not None else f"{'mechanism':>9}" for v in vals))
     for ny in depths:
-        a = needed[str(ny)]
+        a_ = needed[str(ny)]
         lines.append(f"{ny} through the depth: largest aspect ratio reaching {accuracy:g} of beam theory: "
-                     + (f"{a}" if a is not None else "none of those tried"))
+                     + (f"{a_}" if a_ is not None else "none of those tried"))
     return {"problem": "locking-mesh", "element": element, "variant": variant, "results": rows, "accuracy": accuracy,
-            "largest_aspect_for_accuracy": needed, "lines": lines, **_headline(rows[-1])}
+            "largest_aspect_for_accuracy": needed, "lines": lines, **_headline(rows[-1]), "_solution": last}
 
 
 # ---------------------------------------------------------------------------------------------
@@ -386,6 +429,10 @@ def _save(fig, path) -> Path:
     return write_atomic(path, buf.getvalue())
 
 
+def _v(x) -> float:
+    return float("nan") if x is None else float(x)
+
+
 def plot_study(study: dict, path) -> Path:
     """Chart of a study: membrane/cylinder convergence (value and log-log error), cantilever bars,
     locking-mesh normalized deflection against aspect ratio."""
@@ -396,14 +443,16 @@ def plot_study(study: dict, path) -> Path:
         fig, (a1, a2) = plt.subplots(1, 2, figsize=(10, 4))
         ns = [r["n"] for r in study["results"]]
         for key, lab in (("corner", "top corner (48, 60)"), ("mid", "mid-edge (48, 52)")):
-            a1.plot(ns, [r[key] for r in study["results"]], "o-", label=lab)
+            a1.plot(ns, [_v(r[key]) for r in study["results"]], "o-", label=lab)
             ref = study["converged_reference"].get(key)
             if ref is not None:
                 a1.axhline(ref, ls=":", lw=0.8, color="grey")
-                errs = [abs(r[key] - ref) for r in study["results"]]
+                errs = [abs(_v(r[key]) - ref) for r in study["results"]]
                 a2.loglog([1.0 / n for n in ns], [max(e, 1e-16) for e in errs], "o-",
                           label=f"{lab}, slope {study['rates'].get(key) or float('nan'):.2f}")
         a1.set_xscale("log", base=2)
+        a1.set_xticks(ns)
+        a1.set_xticklabels([str(n) for n in ns])
         a1.set_xlabel("elements per side")
         a1.set_ylabel("vertical displacement")
         a1.legend()
@@ -416,11 +465,14 @@ def plot_study(study: dict, path) -> Path:
         nus = sorted({r["nu"] for r in study["results"]})
         for nu in nus:
             sub = [r for r in study["results"] if r["nu"] == nu]
-            a1.plot([r["n"] for r in sub], [r["normalized"] for r in sub], "o-", label=f"nu = {nu}")
-            a2.loglog([1.0 / r["n"] for r in sub], [max(abs(r["error"]), 1e-16) for r in sub], "o-",
+            a1.plot([r["n"] for r in sub], [_v(r["normalized"]) for r in sub], "o-", label=f"nu = {nu}")
+            a2.loglog([1.0 / r["n"] for r in sub], [max(abs(_v(r["error"])), 1e-16) for r in sub], "o-",
                       label=f"nu = {nu}, slope {study['rates'].get(str(nu)) or float('nan'):.2f}")
         a1.axhline(1.0, ls=":", color="grey")
         a1.set_xscale("log", base=2)
+        levels = sorted({r["n"] for r in study["results"]})
+        a1.set_xticks(levels)
+        a1.set_xticklabels([str(n) for n in levels])
         a1.set_xlabel("elements per side (radial = hoop)")
         a1.set_ylabel("bore displacement / Lame")
         a1.legend()
@@ -432,7 +484,7 @@ def plot_study(study: dict, path) -> Path:
         fig, ax = plt.subplots(figsize=(6, 4))
         for ny in sorted({r["depth_elements"] for r in study["results"]}):
             sub = [r for r in study["results"] if r["depth_elements"] == ny]
-            ax.semilogx([r["aspect"] for r in sub], [r["normalized"] for r in sub], "o-", label=f"{ny} through depth")
+            ax.semilogx([r["aspect"] for r in sub], [_v(r["normalized"]) for r in sub], "o-", label=f"{ny} through depth")
         ax.axhline(1.0, ls=":", color="grey")
         ax.axhline(study["accuracy"], ls="--", lw=0.8, color="grey")
         ax.set_xlabel("element aspect ratio (length / depth)")
@@ -442,7 +494,7 @@ def plot_study(study: dict, path) -> Path:
     else:
         fig, ax = plt.subplots(figsize=(6, 4))
         labels = [f"{r['mesh']}\n{r['load']}" for r in study["results"]]
-        ax.bar(range(len(labels)), [r["normalized"] for r in study["results"]])
+        ax.bar(range(len(labels)), [_v(r["normalized"]) for r in study["results"]])
         ax.axhline(1.0, ls=":", color="grey")
         ax.set_xticks(range(len(labels)))
         ax.set_xticklabels(labels, fontsize=8)

@@ -25,10 +25,11 @@ What is here
     nodes (:meth:`Solution.nodal_stresses`), and VTK XML ``.vtu`` export of the deformed
     mesh (:func:`write_vtu`).
 
-Stresses are D B u from the compatible strain field of the element's nodal displacements,
-evaluated at the element's full rule points (or a rule you name).  For variants with
-internal unknowns (incompatible modes, enhanced strains, hybrid stresses) that is the
-compatible part of the strain only; the nodal displacements are the element's own.
+Stresses are D times the strain the formulation works with, at the element's full rule
+points (or a rule you name): when the formulation declares a recovery operator
+(``Formulation.strain(point) -> (S_u, S_a)``) the strain is S_u u + S_a alpha with the
+condensed internal unknowns alpha = -K_aa^-1 K_ua^T u recovered element by element
+(incompatible modes, enhanced strains, B-bar, hybrid stresses); otherwise it is B u.
 """
 from __future__ import annotations
 
@@ -761,13 +762,22 @@ class Solution:
         return float(N @ ue[:, 0]), float(N @ ue[:, 1])
 
     def point_stresses(self, rule: str | None = None) -> tuple[np.ndarray, np.ndarray]:
-        """Stresses D B u at the rule's points: returns (positions (ne, np, 2), stresses (ne, np, nstress))."""
+        """Stresses at the rule's points: returns (positions (ne, np, 2), stresses (ne, np, nstress)).
+
+        D times the strain the formulation works with: its recovery operator
+        S_u u + S_a alpha when it declares one (alpha: the condensed internal unknowns,
+        recovered element by element), the compatible B u otherwise.
+        """
         ref = self.mesh.ref
-        pts, _ = rule_points(rule or ref.full_rule)
+        rule = rule or ref.full_rule
+        pts, _ = rule_points(rule)
         xy = self.mesh.element_coords()
-        B, _, _ = b_matrices(self.mesh.element, self.state, xy, pts)
         ue = self.u[self.mesh.element_dofs()]
-        strain = np.einsum("epkd,ed->epk", B, ue)
+        strain = formulation_strains(self.mesh.element, self.variant, self.state, xy, ue, self.E, self.nu, self.t,
+                                     rule)
+        if strain is None:
+            B, _, _ = b_matrices(self.mesh.element, self.state, xy, pts)
+            strain = np.einsum("epkd,ed->epk", B, ue)
         sig = np.einsum("kl,epl->epk", _D(self.state, self.E, self.nu), strain)
         pos = np.einsum("pn,enk->epk", ref.N(pts), xy)
         return pos, sig
@@ -791,6 +801,76 @@ class Solution:
         np.add.at(acc, self.mesh.conn.ravel(), at_nodes.reshape(-1, ns))
         np.add.at(cnt, self.mesh.conn.ravel(), 1.0)
         return acc / cnt[:, None]
+
+
+@lru_cache(maxsize=None)
+def _strain_plan(name: str, variant: str, state: str, rule: str):
+    """Lambdified recovery operators (S_u, S_a) of a formulation at a rule's points, or None."""
+    from .element import element as make_element
+    from .formulations.base import Point
+    from .symbols import E as E_s, nu as nu_s, t as t_s
+    el = make_element(name, variant, state)
+    hook = getattr(el.formulation, "strain", None)
+    if hook is None:
+        return None
+    imap = el.map("general")
+    args = list(imap.geometry.xs) + list(imap.geometry.ys) + [E_s, nu_s, t_s]
+    funcs = []
+    for (px, py) in quadrature.rule(rule).points:
+        pt = Point(imap, state, sp.Float(px.evalf(30), 30), sp.Float(py.evalf(30), 30))
+        Su, Sa = hook(pt)
+        flat = list(Su) + (list(Sa) if Sa is not None else [])
+        funcs.append((sp.lambdify(args, flat, "numpy", cse=True), Su.shape, None if Sa is None else Sa.shape))
+    return funcs
+
+
+def internal_unknowns(name: str, variant: str, state: str, xy: np.ndarray, ue: np.ndarray, E: float, nu: float,
+                      t: float) -> np.ndarray | None:
+    """Condensed internal unknowns alpha = -K_aa^-1 K_ua^T u of each element (None without any)."""
+    from .stiffness import _numeric_plan
+    ndof, n_int, plan = _numeric_plan((name, variant, state))
+    if not n_int:
+        return None
+    n = xy.shape[0]
+    args = [xy[:, i, 0] for i in range(xy.shape[1])] + [xy[:, i, 1] for i in range(xy.shape[1])] + [E, nu, t]
+    blocks: dict[str, np.ndarray] = {}
+    for block, funcs, weights in plan:
+        if block == "uu":
+            continue
+        for (f, ls, ms, rs), w in zip(funcs, weights):
+            vals = [np.broadcast_to(np.asarray(v, dtype=float), (n,)) for v in f(*args)]
+            k1, k2, k3 = ls[0] * ls[1], ms[0] * ms[1], rs[0] * rs[1]
+            L = np.stack(vals[:k1], axis=1).reshape(n, *ls)
+            Mm = np.stack(vals[k1:k1 + k2], axis=1).reshape(n, *ms)
+            Rm = np.stack(vals[k1 + k2:k1 + k2 + k3], axis=1).reshape(n, *rs)
+            contrib = np.einsum("nki,nkl,nlj->nij", L, Mm, Rm) * (w * vals[-1])[:, None, None]
+            blocks[block] = blocks[block] + contrib if block in blocks else contrib
+    Kua, Kaa = blocks["ua"], blocks["aa"]
+    rhs = np.einsum("nda,nd->na", Kua, ue)
+    return -np.linalg.solve(Kaa, rhs[..., None])[..., 0]
+
+
+def formulation_strains(name: str, variant: str, state: str, xy: np.ndarray, ue: np.ndarray, E: float, nu: float,
+                        t: float, rule: str) -> np.ndarray | None:
+    """Strains S_u u + S_a alpha at the rule's points (ne, np, nstrain) from the formulation's
+    recovery operator, or None when the formulation declares none (then B u applies)."""
+    plan = _strain_plan(name, variant, state, rule)
+    if plan is None:
+        return None
+    alpha = internal_unknowns(name, variant, state, xy, ue, E, nu, t)
+    n = xy.shape[0]
+    args = [xy[:, i, 0] for i in range(xy.shape[1])] + [xy[:, i, 1] for i in range(xy.shape[1])] + [E, nu, t]
+    out = []
+    for f, su, sa in plan:
+        vals = [np.broadcast_to(np.asarray(v, dtype=float), (n,)) for v in f(*args)]
+        k1 = su[0] * su[1]
+        Su = np.stack(vals[:k1], axis=1).reshape(n, *su)
+        eps = np.einsum("nkd,nd->nk", Su, ue)
+        if sa is not None and alpha is not None:
+            Sa = np.stack(vals[k1:k1 + sa[0] * sa[1]], axis=1).reshape(n, *sa)
+            eps = eps + np.einsum("nka,na->nk", Sa, alpha)
+        out.append(eps)
+    return np.stack(out, axis=1)
 
 
 def locate(mesh: Mesh, x: float, y: float, tol: float = 1e-9) -> tuple[int, np.ndarray]:

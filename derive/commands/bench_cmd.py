@@ -1,0 +1,112 @@
+"""`derive bench PROBLEM`: benchmark problems with published or closed-form answers."""
+from __future__ import annotations
+
+from .. import benchmarks as B
+from ..errors import InputError
+from ..mesh import write_vtu
+from ..output import CAUTION, parse_number, write_atomic
+from .common import add_output_args, output_format, print_json
+
+NAME = "bench"
+HELP = "benchmark meshes: cantilever, membrane (tapered panel), thick cylinder, locking-mesh chart"
+EXAMPLE = ("examples:\n"
+           "  derive bench cantilever --element Q4 --variant full\n"
+           "  derive bench cantilever --element Q4 --variant incompatible-centred --mesh trapezoidal --refine 2\n"
+           "  derive bench membrane --element Q9 --refine 5 --plot membrane.png --table membrane.md\n"
+           "  derive bench membrane --element Q4 --mesh 16 --vtu membrane-16.vtu\n"
+           "  derive bench cylinder --element Q4 --variant bbar --nu 0.49,0.4999 --json\n"
+           "  derive bench locking-mesh --element Q4 --plot locking-mesh.png --accuracy 0.9")
+
+
+def add_arguments(p) -> None:
+    p.add_argument("problem", choices=B.PROBLEMS, help="benchmark problem")
+    p.add_argument("--element", default="Q4", help="catalogue element (default Q4)")
+    p.add_argument("--variant", default="full", help="formulation variant (default: full); see `derive list`")
+    p.add_argument("--mesh", help="cantilever: rectangular, trapezoidal, parallelogram or all (default all); "
+                                  "membrane / cylinder: N for a single N x N mesh instead of a refinement study")
+    p.add_argument("--refine", help="cantilever: subdivide each of the 6 cells N x N (default 1); membrane / cylinder: "
+                                    "number of refinement levels 2, 4, ... (default 5 / 4)")
+    p.add_argument("--load", default="both", choices=("shear", "extension", "both"),
+                   help="cantilever tip load (default both)")
+    p.add_argument("--nu", help="cylinder: Poisson's ratios, comma-separated (default 0.3,0.49,0.499,0.4999)")
+    p.add_argument("--depths", default="1,2,4", help="locking-mesh: elements through the depth (default 1,2,4)")
+    p.add_argument("--accuracy", default="0.95",
+                   help="locking-mesh: target fraction of beam theory for the mesh advice (default 0.95)")
+    p.add_argument("--plot", metavar="FILE", help="write a chart (.png, .svg, .pdf)")
+    p.add_argument("--table", metavar="FILE", help="write the result table (Markdown)")
+    p.add_argument("--vtu", metavar="FILE", help="write the deformed mesh of the (finest) run as VTK .vtu")
+    p.add_argument("--scale", default="1", help="deformation scale for --vtu (default 1)")
+    add_output_args(p, formats=False)
+
+
+def _int(text, what, low=1, high=4096):
+    try:
+        v = int(str(text).strip())
+    except ValueError:
+        raise InputError(f"{what}: {text!r} is not a whole number") from None
+    if not low <= v <= high:
+        raise InputError(f"{what} must be between {low} and {high}; got {v}")
+    return v
+
+
+def _floats(text, what):
+    out = []
+    for item in str(text).split(","):
+        if item.strip():
+            out.append(float(parse_number(item, what)))
+    if not out:
+        raise InputError(f"{what} is empty")
+    return out
+
+
+def run(args) -> int:
+    quiet = output_format(args) == "json"
+    show = False if quiet else None
+    prob = args.problem
+    if prob == "cantilever":
+        meshes = B.CANTILEVER_MESHES if args.mesh in (None, "all") else (args.mesh,)
+        for m in meshes:
+            if m not in B.CANTILEVER_MESHES:
+                raise InputError(f"--mesh {m!r} for the cantilever; allowed: {', '.join(B.CANTILEVER_MESHES)}, all")
+        loads = ("shear", "extension") if args.load == "both" else (args.load,)
+        refine = _int(args.refine or 1, "--refine", 1, 64)
+        res = B.cantilever_study(args.element, args.variant, meshes, loads, refine, show_progress=show)
+    elif prob == "membrane":
+        if args.mesh:
+            levels = (_int(args.mesh, "--mesh"),)
+        else:
+            k = _int(args.refine or 5, "--refine", 1, 10)
+            levels = tuple(2 ** i for i in range(1, k + 1))
+        res = B.membrane_study(args.element, args.variant, levels, show_progress=show)
+    elif prob == "cylinder":
+        if args.mesh:
+            levels = (_int(args.mesh, "--mesh", 1, 1024),)
+        else:
+            k = _int(args.refine or 4, "--refine", 1, 9)
+            levels = tuple(2 ** i for i in range(1, k + 1))
+        nus = _floats(args.nu, "--nu") if args.nu else B.CYLINDER["nus"]
+        res = B.cylinder_study(args.element, args.variant, levels, nus, show_progress=show)
+    else:
+        depths = [_int(d, "--depths", 1, 64) for d in str(args.depths).split(",") if d.strip()]
+        acc = float(parse_number(args.accuracy, "--accuracy"))
+        res = B.locking_mesh_study(args.element, args.variant, depths, accuracy=acc, show_progress=show)
+    files = {}
+    if args.plot:
+        files["plot"] = str(B.plot_study(res, args.plot))
+    if args.table:
+        files["table"] = str(write_atomic(args.table, B.table_text(res)))
+    if args.vtu:
+        sol = res.get("_solution")
+        if sol is None:
+            raise InputError("--vtu: no run produced a solution (every mesh was a mechanism)")
+        files["vtu"] = str(write_vtu(args.vtu, sol, float(parse_number(args.scale, "--scale"))))
+    out = {k: v for k, v in res.items() if not k.startswith("_") and k != "lines"}
+    out["files"] = files
+    if quiet:
+        print_json({**out, "caution": CAUTION})
+        return 0
+    for line in res["lines"]:
+        print(line)
+    for kind, path in files.items():
+        print(f"{kind} written to {path}")
+    return 0

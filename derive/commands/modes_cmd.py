@@ -1,0 +1,47 @@
+"""`derive modes ELEMENT`: zero-energy modes (rigid-body and spurious) and whether they spread."""
+from __future__ import annotations
+
+from .. import catalog
+from ..modes import GEOMETRIES, plot_modes, summary_lines, zero_energy_modes
+from ..output import CAUTION, parse_number
+from .common import add_output_args, output_format, print_json
+from .stiffness_cmd import parse_nodes
+
+NAME = "modes"
+HELP = "zero-energy modes of the element stiffness: rigid-body vs spurious, communicable or not"
+EXAMPLE = ("examples:\n"
+           "  derive modes Q4 --variant reduced\n"
+           "  derive modes Q9 --variant reduced --plot q9-modes.png\n"
+           "  derive modes Q8 --variant reduced --geometry distorted --json\n"
+           "  derive modes Q4 --nodes \"0,0 2,0 2.4,1.6 0.4,1.2\" --nu 0.49")
+
+
+def add_arguments(p) -> None:
+    p.add_argument("element", help="catalogue element (" + ", ".join(catalog.ELEMENTS) + ")")
+    p.add_argument("--variant", default="full", help="formulation variant (default: full); see `derive list`")
+    p.add_argument("--state", default="plane-stress", help="plane-stress (default), plane-strain, axisymmetric")
+    p.add_argument("--geometry", default="square", choices=GEOMETRIES,
+                   help="element shape: square (the reference element, default), rectangle (aspect 2), "
+                        "parallelogram (skew 0.5), distorted (a general convex quadrilateral)")
+    p.add_argument("--nodes", help='numeric nodal coordinates "x1,y1 x2,y2 ..." (overrides --geometry)')
+    p.add_argument("--nu", default="0.3", help="Poisson's ratio used for the eigenvalues (default 0.3; E = 1, t = 1)")
+    p.add_argument("--tol", default="1e-8", help="zero threshold relative to the largest eigenvalue (default 1e-8)")
+    p.add_argument("--plot", metavar="FILE", help="write the deformed shapes of the zero-energy modes (.png, .svg, .pdf)")
+    add_output_args(p, formats=False)
+
+
+def run(args) -> int:
+    nu = float(parse_number(args.nu, "--nu"))
+    tol = float(parse_number(args.tol, "--tol"))
+    nodes = [[float(u), float(v)] for u, v in parse_nodes(args.nodes)] if args.nodes else None
+    res = zero_energy_modes(args.element, args.variant, args.state, nodes=nodes, geometry=args.geometry, nu=nu, tol=tol)
+    if args.plot:
+        res["plot"] = plot_modes(res, args.plot)
+    if output_format(args) == "json":
+        print_json({**res, "caution": CAUTION})
+        return 0
+    for line in summary_lines(res):
+        print(line)
+    if args.plot:
+        print(f"mode shapes written to {res['plot']}")
+    return 0
