@@ -19,6 +19,9 @@ CAUTION = ("Caution: derive is a verification aid, not a design check. Defer to 
 
 FORMATS = ("text", "latex", "json")
 
+#: entries with more operations than this are printed as derived, not factored
+DISPLAY_FACTOR_LIMIT = 300
+
 # names accepted by --set, beyond nodal x<i>/y<i>
 SETTABLE = ("a", "b", "c", "R", "E", "nu", "t", "r")
 
@@ -76,19 +79,35 @@ def display(expr: sp.Expr) -> sp.Expr:
     """Compact form for display only (factor, never simplify)."""
     if not isinstance(expr, sp.Basic) or expr.is_number:
         return expr
+    if _larger_than(expr, DISPLAY_FACTOR_LIMIT):
+        return expr  # factoring a very large entry (general geometry) costs minutes and gains nothing
     try:
         return sp.factor(expr)
     except Exception:  # factor can refuse radicals-heavy input; fall back to the raw form
         return expr
 
 
+def _larger_than(expr: sp.Expr, limit: int) -> bool:
+    """True when the expression tree has more than ``limit`` nodes (stops counting early)."""
+    for k, _ in enumerate(sp.preorder_traversal(expr)):
+        if k > limit:
+            return True
+    return False
+
+
 def matrix_text(M: sp.Matrix, name: str = "K", symmetric: bool = False) -> str:
     lines = []
+    big = M.rows * M.cols > 64 and any(_larger_than(M[i, i], DISPLAY_FACTOR_LIMIT) for i in range(min(M.rows, M.cols)))
+    progress = Progress(M.rows, f"printing {name}") if big else None
     for i in range(M.rows):
+        if progress:
+            progress.step()
         for j in range(M.cols):
             if symmetric and j < i:
                 continue
             lines.append(f"{name}[{i},{j}] = {display(M[i, j])}")
+    if progress:
+        progress.close()
     return "\n".join(lines)
 
 

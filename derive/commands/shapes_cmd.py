@@ -11,13 +11,16 @@ NAME = "shapes"
 HELP = "shape functions with partition-of-unity, Kronecker-delta and completeness checks"
 EXAMPLE = ("examples:\n  derive shapes Q8\n  derive shapes T6 --format latex\n"
            "  derive shapes q12-cubic-serendipity.toml --json\n"
-           "  derive shapes Q4 --geometry parallelogram   # adds the map, J, det J")
+           "  derive shapes Q4 --geometry parallelogram   # adds the map, J, det J\n"
+           "  derive shapes Q4 --nodes \"0,0 2,0 2.2,1 0,1\"  # validity report of a numeric element")
 
 
 def add_arguments(p) -> None:
     add_element_args(p, variant=False, state=False)
     p.add_argument("--geometry", choices=("rectangle", "parallelogram", "general"),
                    help="also print the isoparametric map, Jacobian and det J for this geometry")
+    p.add_argument("--nodes", help='numeric nodal coordinates "x1,y1 x2,y2 ...": map, J and a validity report '
+                   "(det J over the element and at the rule's points)")
     add_output_args(p)
 
 
@@ -30,7 +33,15 @@ def run(args) -> int:
             "basis": [str(m) for m in sh.basis], "shape_functions": [str(f) for f in sh.functions],
             "checks": checks}
     imap = None
-    if args.geometry:
+    if args.nodes:
+        from .stiffness_cmd import parse_nodes
+        nodes = parse_nodes(args.nodes)
+        data["validity"] = el.validity(nodes)
+        imap = el.map(nodes)
+        data["map"] = {"geometry": "nodes", "x": str(imap.x), "y": str(imap.y),
+                       "jacobian": [[str(display(v)) for v in row] for row in imap.jacobian.tolist()],
+                       "det_jacobian": str(display(imap.det))}
+    elif args.geometry:
         imap = el.map(args.geometry)
         data["map"] = {"geometry": args.geometry, "x": str(imap.x), "y": str(imap.y),
                        "jacobian": [[str(display(v)) for v in row] for row in imap.jacobian.tolist()],
@@ -54,7 +65,11 @@ def run(args) -> int:
     print(f"  Kronecker delta at the nodes:     {'yes' if checks['kronecker_delta'] else 'NO'}")
     print(f"  completeness degree:              {checks['completeness']}")
     if imap is not None:
-        print(f"map ({args.geometry}): x = {imap.x}, y = {imap.y}")
+        print(f"map ({args.geometry or 'nodes'}): x = {imap.x}, y = {imap.y}")
         print(f"J = {imap.jacobian.applyfunc(display).tolist()}")
         print(f"det J = {display(imap.det)}")
+    if "validity" in data:
+        v = data["validity"]
+        print(f"validity: valid; area {v['area']:.6g}; det J over the element {v['det_min']:.6g} .. {v['det_max']:.6g}; "
+              f"at the full rule's points {v['det_at_points_min']:.6g} .. {v['det_at_points_max']:.6g}")
     return 0
