@@ -162,7 +162,7 @@ def point_blocks(form: Formulation, imap: IsoMap, state: str, material: dict, ru
     for term in form.terms:
         rl = quadrature.rule(rule_for_name(term))
         acc = None
-        for (px, py), w in zip(rl.points, rl.weights):
+        for (px, py), w in _rule_points(rl, imap.geometry.numeric):
             key = (px, py)
             if key not in points_cache:
                 points_cache[key] = Point(imap, state, px, py, **material)
@@ -174,6 +174,15 @@ def point_blocks(form: Formulation, imap: IsoMap, state: str, material: dict, ru
             acc = contrib if acc is None else acc + contrib
         blocks[term.block] = acc if term.block not in blocks else blocks[term.block] + acc
     return blocks
+
+
+def _rule_points(rl, numeric: bool):
+    """The rule's points and weights; 30-digit Floats for numeric geometry, where exact radicals
+    would only slow the arithmetic down without making the float result any better."""
+    if not numeric:
+        return list(zip(rl.points, rl.weights))
+    return [((sp.Float(px.evalf(30), 30), sp.Float(py.evalf(30), 30)), sp.Float(w.evalf(30), 30))
+            for (px, py), w in zip(rl.points, rl.weights)]
 
 
 def condense_symbolic(blocks: dict, ndof: int, n_internal: int) -> sp.Matrix:
