@@ -1,0 +1,208 @@
+"""derive.mesh: generation, assembly against a hand-assembled model, loads, supports, solve, stresses, VTU."""
+from __future__ import annotations
+
+import math
+import xml.etree.ElementTree as ET
+
+import numpy as np
+import pytest
+
+import derive
+from derive import mesh as M
+from derive.errors import GeometryError, InputError
+
+import fem_reference as fr
+
+
+def cst_stiffness(xy, E, nu, t):
+    """Constant-strain triangle K = t A B^T D B with b_i = y_j - y_k, c_i = x_k - x_j
+    (the textbook closed form of the 3-node triangle, e.g. Zienkiewicz & Taylor, from memory)."""
+    (x1, y1), (x2, y2), (x3, y3) = xy
+    A = 0.5 * ((x2 - x1) * (y3 - y1) - (x3 - x1) * (y2 - y1))
+    b = [y2 - y3, y3 - y1, y1 - y2]
+    c = [x3 - x2, x1 - x3, x2 - x1]
+    B = np.zeros((3, 6))
+    for i in range(3):
+        B[0, 2 * i] = b[i]
+        B[1, 2 * i + 1] = c[i]
+        B[2, 2 * i] = c[i]
+        B[2, 2 * i + 1] = b[i]
+    B /= 2 * A
+    D = E / (1 - nu ** 2) * np.array([[1, nu, 0], [nu, 1, 0], [0, 0, (1 - nu) / 2]])
+    return t * A * B.T @ D @ B
+
+
+def test_two_triangles_hand_assembled():
+    # textbook CST closed form per element, global matrix assembled by hand below
+    nodes = np.array([[0.0, 0.0], [2.0, 0.0], [2.0, 1.0], [0.0, 1.0]])
+    conn = np.array([[0, 1, 2], [0, 2, 3]])
+    mesh = M.hand("T3", nodes, conn)
+    E, nu, t = 200.0, 0.3, 0.5
+    k1 = cst_stiffness(nodes[[0, 1, 2]], E, nu, t)
+    k2 = cst_stiffness(nodes[[0, 2, 3]], E, nu, t)
+    K = np.zeros((8, 8))
+    d1 = [0, 1, 2, 3, 4, 5]          # nodes 0, 1, 2
+    d2 = [0, 1, 4, 5, 6, 7]          # nodes 0, 2, 3
+    for a in range(6):
+        for b in range(6):
+            K[d1[a], d1[b]] += k1[a, b]
+            K[d2[a], d2[b]] += k2[a, b]
+    got = M.assemble(mesh, "full", "plane-stress", E, nu, t).K.toarray()
+    assert np.allclose(got, K, rtol=0, atol=1e-12 * np.abs(K).max())   # hand-assembled two-element model
+
+
+def test_two_quads_hand_assembled_and_tension_bar():
+    # two Q4 side by side; element matrices from the independent textbook routine (tests/fem_reference.py)
+    nodes = np.array([[0, 0], [1, 0], [2, 0], [2, 1], [1, 1], [0, 1]], float)
+    conn = np.array([[0, 1, 4, 5], [1, 2, 3, 4]])
+    mesh = M.hand("Q4", nodes, conn)
+    E, nu, t = 1000.0, 0.25, 0.1
+    K = np.zeros((12, 12))
+    for e in conn:
+        ke = fr.stiffness("Q4", nodes[e], E, nu, t)
+        dofs = np.ravel([[2 * n, 2 * n + 1] for n in e])
+        K[np.ix_(dofs, dofs)] += ke
+    got = M.assemble(mesh, "full", "plane-stress", E, nu, t).K.toarray()
+    assert np.allclose(got, K, atol=1e-12 * np.abs(K).max())              # hand-assembled two-element model
+    # uniform tension sigma on x = 2: u = sigma x / E, v = -nu sigma y / E (Hooke's law, elementary)
+    sigma = 3.0
+    f = M.edge_load(mesh, lambda x, y: np.isclose(x, 2.0), (sigma, 0.0), "plane-stress", t)
+    fixed = {**M.fix(mesh, lambda x, y: np.isclose(x, 0.0), "u"), 1: 0.0}
+    sol = M.analyse(mesh, f, fixed, "full", "plane-stress", E, nu, t)
+    assert np.allclose(sol.U[:, 0], sigma * nodes[:, 0] / E, atol=1e-14)
+    assert np.allclose(sol.U[:, 1], -nu * sigma * nodes[:, 1] / E, atol=1e-14)
+    _, sig = sol.point_stresses()
+    assert np.allclose(sig[..., 0], sigma) and np.allclose(sig[..., 1:], 0, atol=1e-12)
+    assert np.allclose(sol.nodal_stresses()[:, 0], sigma)
+    # reactions balance the load (statics)
+    assert math.isclose(sol.reactions[0::2].sum(), -sigma * 1.0 * t, rel_tol=1e-12)
+
+
+@pytest.mark.parametrize("name", ["Q4", "Q8", "T6"])
+def test_gauss_provider_matches_textbook(name):
+    # independent textbook routine (tests/fem_reference.py) against mesh.gauss_provider and the default provider
+    rng = np.random.default_rng(7)
+    xy = np.array([fr.random_element(name, rng) for _ in range(3)])
+    ref = np.array([fr.stiffness(name, x, 5.0, 0.3, 0.2) for x in xy])
+    assert np.allclose(M.gauss_provider(name)(xy, 5.0, 0.3, 0.2), ref, atol=1e-10 * np.abs(ref).max())
+    prov, _ = M.element_provider(name, "full", "plane-stress")
+    assert np.allclose(prov(xy, 5.0, 0.3, 0.2), ref, atol=1e-10 * np.abs(ref).max())
+
+
+def test_structured_counts_and_sides():
+    # node counts of structured grids (combinatorics, common practice, no source)
+    n = 3
+    corners = ((0, 0), (3, 0), (3, 2), (0, 2))
+    assert M.structured("Q4", n, n, corners).n_nodes == (n + 1) ** 2
+    assert M.structured("Q8", n, n, corners).n_nodes == (2 * n + 1) ** 2 - n * n
+    assert M.structured("Q9", n, n, corners).n_nodes == (2 * n + 1) ** 2
+    t6 = M.structured("T6", n, n, corners)
+    assert t6.n_nodes == (2 * n + 1) ** 2 and t6.n_elements == 2 * n * n
+    m = M.structured("Q8", 2, 3, corners)
+    m.check()
+    assert m.side("left").sum() == 2 * 3 + 1 and m.side("top").sum() == 2 * 2 + 1
+    assert np.allclose(m.nodes[m.side("right"), 0], 3.0)
+
+
+def test_consistent_edge_loads():
+    # consistent nodal loads of a uniform traction: linear edge 1/2, 1/2; quadratic edge 1/6, 2/3, 1/6
+    # (textbook result, e.g. Cook et al. (2002), from memory)
+    for name, share in (("Q4", [0.5, 0.5]), ("Q8", [1 / 6, 2 / 3, 1 / 6]), ("T6", [1 / 6, 2 / 3, 1 / 6])):
+        m = M.structured(name, 1, 1, ((0, 0), (2, 0), (2, 1), (0, 1)))
+        f = M.edge_load(m, "right", (0.0, 4.0), "plane-stress", 0.5)     # 4 * 0.5 * edge length 1 = 2
+        on = np.nonzero(m.side("right"))[0]
+        order = on[np.argsort(m.nodes[on, 1])]
+        assert np.allclose(f[2 * order + 1], 2.0 * np.array(share))
+        assert np.allclose(f[0::2], 0.0)
+
+
+def test_pressure_on_arc_resultant():
+    # pressure p on a quarter arc of radius a: resultant (p a, p a) towards +x, +y (statics)
+    p, a = 2.0, 3.0
+    for name in ("Q4", "Q9"):
+        m = M.structured(name, 4, 8, M.polar(a, 9.0))
+        f = M.pressure_load(m, "left", p, "plane-strain", 1.0)
+        tol = 2e-2 if name == "Q4" else 1e-5        # Q4: chords instead of the arc
+        assert math.isclose(f[0::2].sum(), p * a, rel_tol=tol) and math.isclose(f[1::2].sum(), p * a, rel_tol=tol)
+
+
+def test_mechanism_is_reported():
+    # one-point Q4 hourglass modes make a clamped 6 x 1 strip singular (common practice, no source)
+    m = M.structured("Q4", 6, 1, ((0, 0), (6, 0), (6, 1), (0, 1)))
+    f = M.uniform_edge_force(m, "right", (0.0, 1.0))
+    with pytest.raises(M.MechanismError):
+        M.analyse(m, f, M.fix(m, "left"), "reduced", "plane-stress", 1.0, 0.3)
+    with pytest.raises(M.MechanismError):
+        M.analyse(m, f, {}, "full", "plane-stress", 1.0, 0.3)
+
+
+def test_bad_input():
+    with pytest.raises(GeometryError):
+        M.hand("Q4", [[0, 0], [0, 1], [1, 1], [1, 0]], [[0, 1, 2, 3]])     # clockwise
+    with pytest.raises(InputError):
+        M.structured("Q4", 0, 2, ((0, 0), (1, 0), (1, 1), (0, 1)))
+    with pytest.raises(InputError):
+        M.Mesh("Q4", [[0, 0], [1, 0], [1, 1]], [[0, 1, 2, 3]])
+    m = M.structured("Q4", 2, 2, ((0, 0), (1, 0), (1, 1), (0, 1)))
+    with pytest.raises(InputError):
+        m.side("north")
+    with pytest.raises(InputError):
+        M.fix(m, "left", "w")
+    with pytest.raises(InputError):
+        m.node_at(0.3, 0.3)
+
+
+def test_point_evaluation_and_corner_lifting():
+    # a linear field is reproduced exactly at any point (completeness, common practice, no source)
+    m = M.from_corners("Q9", [[0, 0], [2, 0], [2.5, 1.5], [0.2, 1.0]], [[0, 1, 2, 3]])
+    assert m.n_nodes == 9 and np.allclose(m.nodes[4], [1.0, 0.0]) and np.allclose(m.nodes[8], [1.175, 0.625])
+    sol = M.Solution(m, "full", "plane-stress", 1.0, 0.3, 1.0,
+                     np.column_stack([1 + 2 * m.nodes[:, 0] - m.nodes[:, 1], 3 * m.nodes[:, 1]]).ravel(),
+                     np.zeros(18), np.zeros(18))
+    u, v = sol.displacement_at(1.3, 0.7)
+    assert math.isclose(u, 1 + 2.6 - 0.7, rel_tol=1e-12) and math.isclose(v, 2.1, rel_tol=1e-12)
+    with pytest.raises(InputError):
+        sol.displacement_at(5.0, 5.0)
+
+
+def test_vtu_export(tmp_path):
+    for name, ctype in (("Q8", 23), ("T3", 5)):
+        m = M.structured(name, 3, 2, ((0, 0), (3, 0), (3, 1), (0, 1)))
+        sol = M.analyse(m, M.uniform_edge_force(m, "right", (1.0, 0.0)), M.fix(m, "left"), "full",
+                        "plane-stress", 100.0, 0.3)
+        path = M.write_vtu(tmp_path / f"{name}.vtu", sol, scale=2.0)
+        root = ET.parse(path).getroot()
+        piece = root.find("UnstructuredGrid/Piece")
+        assert int(piece.get("NumberOfPoints")) == m.n_nodes and int(piece.get("NumberOfCells")) == m.n_elements
+        types = piece.find("Cells/DataArray[@Name='types']").text.split()
+        assert set(types) == {str(ctype)}          # VTK file-format cell type numbers (VTK documentation)
+        pts = np.array(piece.find("Points/DataArray").text.split(), float).reshape(-1, 3)
+        assert np.allclose(pts[:, :2], m.nodes + 2.0 * sol.U)
+        names = {d.get("Name") for d in piece.iter("DataArray")}
+        assert {"displacement", "sigma_xx", "von_mises"} <= names
+
+
+def test_provider_prefers_kernel(monkeypatch):
+    calls = []
+
+    def fake_kernel(name, variant="full", state="plane-stress", lang="numpy"):
+        calls.append(lang)
+        el = derive.element(name, variant, state)
+        return lambda xy, E, nu, t: el.numeric_stiffness(xy, E, nu, t)
+
+    monkeypatch.setattr(derive, "kernel", fake_kernel, raising=False)
+    _, route = M.element_provider("Q4", "full", "plane-stress")
+    assert route == "kernel-c" and calls == ["c"]
+
+    def broken(name, variant="full", state="plane-stress", lang="numpy"):
+        raise RuntimeError("no compiler")
+
+    monkeypatch.setattr(derive, "kernel", broken, raising=False)
+    _, route = M.element_provider("Q4", "full", "plane-stress")
+    assert route == "reference"
+
+
+def test_perf_benchmark_quick():
+    res = M.benchmark(quick=True)
+    assert res["lines"] and res["unknowns"] == 2 * 33 * 33
+    assert all(r["max_rel_difference"] < 1e-10 for r in res["routes"])
