@@ -1,0 +1,523 @@
+"""Rendering of kernel IR into NumPy, C (source + header) and Fortran with jinja2 templates.
+
+Output is deterministic: no dates, paths or hash-ordered iteration; numbers print as the
+shortest round-trip float64 literal.  One source file per (element, variant, state, lang)
+holds three kernels: stiffness, validity (min det J over the full rule's points) and
+recovery (strain and stress at the full rule's points).
+"""
+from __future__ import annotations
+
+import re
+from dataclasses import dataclass
+from functools import lru_cache
+
+import jinja2
+import sympy as sp
+
+from .. import catalog, quadrature
+from ..catalog import ElementInfo
+from ..material import STATES
+from . import GENERATOR_VERSION
+from .ir import KernelIR, build
+from .lower import Lowered, lower
+from .printers import c_expr, f_expr, float_literal, py_expr, wrap_c, wrap_fortran
+
+LANGS = ("numpy", "c", "fortran")
+#: C batch kernels process this many elements at a time, transposed so that the element
+#: index is the innermost (unit-stride, vectorisable) dimension.
+C_LANES = 8
+NUMPY_CHUNK = 2048
+
+
+@lru_cache(maxsize=1)
+def _env() -> jinja2.Environment:
+    return jinja2.Environment(loader=jinja2.PackageLoader("derive.codegen", "templates"),
+                              undefined=jinja2.StrictUndefined, keep_trailing_newline=True,
+                              trim_blocks=True, lstrip_blocks=True, autoescape=False)
+
+
+def stem(element: str, variant: str, state: str) -> str:
+    raw = f"{element}_{variant}_{state}".lower()
+    return re.sub(r"[^a-z0-9]+", "_", raw).strip("_")
+
+
+@dataclass
+class Source:
+    """One generated file."""
+
+    path: str      # relative path, e.g. "c/q4_full_plane_stress.c"
+    text: str
+
+
+@dataclass
+class KernelSet:
+    """All sources and the manifest entry of one (element, variant, state, lang)."""
+
+    element: str
+    variant: str
+    state: str
+    lang: str
+    stem: str
+    sources: list
+    meta: dict
+
+
+# ---------------------------------------------------------------------------------------------
+# meta data shared by all languages
+
+def _rule_text(name: str) -> str:
+    rl = quadrature.rule(name)
+    return f"{name} ({rl.npoints} point{'s' if rl.npoints != 1 else ''})"
+
+
+def describe(ir: KernelIR, lows: dict) -> dict:
+    nodes, ndof = ir.n_nodes, ir.ndof
+    st = ir.state
+    strains = ("eps_rr, eps_zz, eps_tt, gamma_rz" if st == "axisymmetric" else "eps_xx, eps_yy, gamma_xy")
+    stresses = ("sigma_rr, sigma_zz, sigma_tt, tau_rz" if st == "axisymmetric" else "sigma_xx, sigma_yy, tau_xy")
+    npr = quadrature.rule(ir.full_rule).npoints
+    thick = ("thickness t (the out-of-plane thickness)" if st != "axisymmetric"
+             else "ignored: axisymmetric kernels integrate over the full ring, thick = 2 pi r")
+    return {
+        "element": ir.element, "variant": ir.variant, "state": st,
+        "description": ir.description, "source": ir.source,
+        "nodes": nodes, "ndof": ndof, "n_internal": ir.n_internal, "nstrain": ir.nstrain,
+        "rules": dict(ir.rules), "full_rule": ir.full_rule, "recovery_points": npr,
+        "flops": {name: low.flops() for name, low in lows.items()},
+        "inputs": {
+            "xy": f"nodal coordinates, shape (n, {nodes}, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of "
+                  f"node i+1 (counter-clockwise corners first, then mid-side, then interior)"
+                  + ("; x is the radius r > 0" if st == "axisymmetric" else ""),
+            "E": "Young's modulus (> 0), scalar", "nu": "Poisson's ratio (-1 < nu < 0.5), scalar",
+            "t": thick,
+            "u": f"nodal displacements for recovery, shape (n, {ndof}), interleaved u1, v1, u2, v2, ...",
+        },
+        "outputs": {
+            "K": f"stiffness, shape (n, {ndof}, {ndof}), DOFs interleaved u1, v1, u2, v2, ...; symmetric"
+                 + (f"; the {ir.n_internal} internal unknowns are condensed" if ir.n_internal else ""),
+            "detJ_min": "validity: min det J over the points of " + ir.full_rule + ", shape (n,); <= 0 means an "
+                        "inverted or degenerate element",
+            "strain": f"recovery: strain at the {npr} points of {ir.full_rule}, shape (n, {npr}, {ir.nstrain}), "
+                      f"Voigt [{strains}] (engineering shear)",
+            "stress": f"recovery: stress D strain at the same points, shape (n, {npr}, {ir.nstrain}), [{stresses}]",
+        },
+        "units": "any consistent set; K has units of E * length (plane) or E * length (ring, per radian x 2 pi)",
+    }
+
+
+def header_lines(ir: KernelIR, meta: dict, lang: str) -> list[str]:
+    st = ir.state
+    rules = "; ".join(f"{label}: {_rule_text(r)}" for label, r in ir.rules.items())
+    out = [
+        f"derive generated kernel: {ir.element} {ir.variant} {st}",
+        "",
+        f"element      {ir.element}, {ir.n_nodes} nodes, {ir.ndof} DOFs interleaved u1, v1, u2, v2, ...",
+        f"formulation  {ir.description}" + (f" [{ir.source}]" if ir.source else ""),
+        f"integration  {rules}",
+    ]
+    if ir.n_internal:
+        out.append(f"internal     {ir.n_internal} internal unknowns condensed inside the kernel: "
+                   "K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)")
+    out += [
+        f"flops        stiffness {meta['flops']['stiffness']}, validity {meta['flops']['validity']}, "
+        f"recovery {meta['flops']['recovery']} per element (add, mul, div, sqrt)",
+        "",
+        "arguments (units-agnostic; any consistent set of units):",
+        f"  xy      {meta['inputs']['xy']}",
+        f"  E       {meta['inputs']['E']}",
+        f"  nu      {meta['inputs']['nu']}",
+        f"  t       {meta['inputs']['t']}",
+        f"  u       {meta['inputs']['u']}",
+        f"  K       {meta['outputs']['K']}",
+        f"  detJ_min {meta['outputs']['detJ_min']}",
+        f"  strain  {meta['outputs']['strain']}",
+        f"  stress  {meta['outputs']['stress']}",
+        "",
+        "The kernels do not check their inputs; derive.kernel() checks shapes, finite",
+        "coordinates and E, nu before calling them.  Screen meshes with the validity kernel.",
+        f"generator    derive.codegen {GENERATOR_VERSION}; regenerate with",
+        f"             derive kernel {ir.element} --variant {ir.variant} --state {st} --lang {lang}",
+    ]
+    return out
+
+
+# ---------------------------------------------------------------------------------------------
+# C
+
+def _c_stmt_lines(low_block, indent: str, out_fmt) -> list[str]:
+    lines = []
+    for s, e in low_block.stmts:
+        lines += wrap_c(f"{indent}const double {s} = {c_expr(e)};", indent)
+    for s, e, op, first in low_block.accs:
+        if op == "add":
+            text = f"{s} = {c_expr(e)};" if first else f"{s} += {c_expr(e)};"
+        else:
+            text = f"{s} = {c_expr(e)};" if first else f"{s} = fmin({s}, {c_expr(e)});"
+        lines += wrap_c(indent + text, indent)
+    for name, idx, e in low_block.outs:
+        lines += wrap_c(f"{indent}{out_fmt(name, idx)} = {c_expr(e)};", indent)
+    return lines
+
+
+def _decl(names, indent: str, ctype: str = "double", width: int = 100) -> list[str]:
+    lines, cur = [], ""
+    for n in names:
+        piece = (", " if cur else "") + n
+        if len(indent) + len(ctype) + 1 + len(cur) + len(piece) > width:
+            lines.append(f"{indent}{ctype} {cur};")
+            cur = n
+        else:
+            cur += piece
+    if cur:
+        lines.append(f"{indent}{ctype} {cur};")
+    return lines
+
+
+def _flat(shape, idx) -> int:
+    k = 0
+    for s, i in zip(shape, idx):
+        k = k * s + i
+    return k
+
+
+def _c_body(low: Lowered, ir: KernelIR, inputs: dict, outputs: dict, indent="    ") -> list[str]:
+    """Statements of one kernel body.  inputs: name -> C accessor format; outputs likewise."""
+    lines = []
+    used = low.used_inputs
+    nodal = []
+    for i in range(ir.n_nodes):
+        for k, c in enumerate(("x", "y")):
+            nm = f"{c}{i + 1}"
+            if nm in used:
+                nodal.append(f"{indent}const double {nm} = {inputs['xy'](2 * i + k)};")
+    lines += nodal
+    if "u" in inputs:
+        for j in range(ir.ndof):
+            if f"u{j + 1}" in used:
+                lines.append(f"{indent}const double u{j + 1} = {inputs['u'](j)};")
+    for k, nm in enumerate(("E", "nu", "t")):
+        if nm in used:
+            lines.append(f"{indent}const double {nm} = mat[{k}];")
+    for k, (s, _) in enumerate(low.mat):
+        if s.name in used:
+            lines.append(f"{indent}const double {s} = mat[{3 + k}];")
+    if low.elem:
+        lines.append(f"{indent}/* element quantities: map coefficients, centre Jacobian */")
+    for s, e in low.elem:
+        lines += wrap_c(f"{indent}const double {s} = {c_expr(e)};", indent)
+    if low.accumulators:
+        lines += _decl([str(s) for s, _ in low.accumulators], indent)
+    for blk in low.pre:
+        lines.append(f"{indent}{{   /* {blk.title} */")
+        lines += _c_stmt_lines(blk, indent + "    ", outputs.get("__point__"))
+        lines.append(f"{indent}}}")
+    if low.tail:
+        lines.append(f"{indent}/* static condensation of the internal unknowns */")
+        for s, e in low.tail:
+            lines += wrap_c(f"{indent}const double {s} = {c_expr(e)};", indent)
+    for blk in low.post:
+        lines.append(f"{indent}{{   /* {blk.title} */")
+        lines += _c_stmt_lines(blk, indent + "    ", outputs["__point__"])
+        lines.append(f"{indent}}}")
+    for name, items in low.outputs.items():
+        shape = low.shapes[name]
+        for idx, e in items:
+            if isinstance(e, tuple):
+                e = _mirror_expr(items, e[1], shape)
+            lines += wrap_c(f"{indent}{outputs[name](_flat(shape, idx))} = {c_expr(e)};", indent)
+    return lines
+
+
+def _mirror_expr(items, idx, shape):
+    for i2, e in items:
+        if i2 == idx:
+            return e
+    raise KeyError(idx)
+
+
+def _mat_lines(low: Lowered, indent="    ") -> list[str]:
+    lines = [f"{indent}mat[0] = E;", f"{indent}mat[1] = nu;", f"{indent}mat[2] = t;"]
+    for k, (s, e) in enumerate(low.mat):
+        lines += wrap_c(f"{indent}mat[{3 + k}] = {c_expr(e)};   /* {s} */", indent)
+    return lines
+
+
+def render_c(ir: KernelIR, lows: dict, meta: dict, name: str) -> list[Source]:
+    prefix = f"derive_{name}"
+    K, V, R = lows["stiffness"], lows["validity"], lows["recovery"]
+    # the three bodies share one material table (union of their material constants)
+    mats = _merge_mats(lows)
+    for low in lows.values():
+        _remap_mats(low, mats)
+    nin = 2 * ir.n_nodes
+    nk = ir.ndof * ir.ndof
+    stiff_body = _c_body(K, ir, {"xy": lambda k: f"xy[{k} * sx]"}, {"K": lambda k: f"K[{k} * sk]"})
+    valid_body = _c_body(V, ir, {"xy": lambda k: f"xy[{k}]"}, {"detJ_min": lambda k: "*detJ_min"})
+    nstr = ir.nstrain
+    rec_body = _c_body(R, ir, {"xy": lambda k: f"xy[{k}]", "u": lambda k: f"u[{k}]"},
+                       {"__point__": lambda nm, idx: f"{nm}[{idx[0] * nstr + idx[1]}]"})
+    ctx = {
+        "header": header_lines(ir, meta, "c"), "prefix": prefix, "name": name, "guard": prefix.upper() + "_H",
+        "nin": nin, "nk": nk, "ndof": ir.ndof, "nodes": ir.n_nodes, "nmat": 3 + len(mats), "lanes": C_LANES,
+        "mat_lines": _mat_lines(_MatView(mats)), "stiff_body": stiff_body, "valid_body": valid_body,
+        "rec_body": rec_body, "nrec": meta["recovery_points"] * nstr, "nstrain": nstr,
+        "npoints": meta["recovery_points"], "version": GENERATOR_VERSION,
+    }
+    env = _env()
+    return [Source(f"c/{name}.c", env.get_template("kernel.c.j2").render(**ctx)),
+            Source(f"c/{name}.h", env.get_template("kernel.h.j2").render(**ctx))]
+
+
+class _MatView:
+    def __init__(self, mats):
+        self.mat = mats
+
+
+def _merge_mats(lows: dict) -> list:
+    seen, out = set(), []
+    for low in lows.values():
+        for s, e in low.mat:
+            if s not in seen:
+                seen.add(s)
+                out.append((s, e))
+    out.sort(key=lambda se: int(se[0].name[1:]))
+    return out
+
+
+def _remap_mats(low: Lowered, mats: list):
+    low.mat = list(mats)
+    for s, _ in mats:
+        pass
+
+
+# ---------------------------------------------------------------------------------------------
+# Fortran
+
+def _f_names(low: Lowered) -> tuple[list, list]:
+    top = [str(s) for s, _ in low.elem] + [str(s) for s, _ in low.accumulators] + [str(s) for s, _ in low.tail]
+    blocks = [[str(s) for s, _ in blk.stmts] for blk in low.pre + low.post]
+    return top, blocks
+
+
+def _f_decl(names, indent: str) -> list[str]:
+    lines, cur = [], []
+    for n in names:
+        cur.append(n)
+        if len(", ".join(cur)) > 80:
+            lines.append(f"{indent}real(dp) :: " + ", ".join(cur))
+            cur = []
+    if cur:
+        lines.append(f"{indent}real(dp) :: " + ", ".join(cur))
+    return lines
+
+
+def _f_stmt(indent, lhs, rhs) -> list[str]:
+    return wrap_fortran(f"{indent}{lhs} = {f_expr(rhs)}", indent)
+
+
+def _f_body(low: Lowered, ir: KernelIR, out_fmt, point_fmt=None, indent="    ") -> tuple[list, list]:
+    decl, lines = [], []
+    used = low.used_inputs
+    names = []
+    for i in range(ir.n_nodes):
+        for k, c in enumerate(("x", "y")):
+            nm = f"{c}{i + 1}"
+            if nm in used:
+                names.append(nm)
+                lines.append(f"{indent}{nm} = xy({k + 1}, {i + 1})")
+    for j in range(ir.ndof):
+        if f"u{j + 1}" in used:
+            names.append(f"u{j + 1}")
+            lines.append(f"{indent}u{j + 1} = u({j + 1})")
+    for s, e in low.mat:
+        if s.name in used:
+            names.append(s.name)
+            lines += _f_stmt(indent, s, e)
+    for s, e in low.elem:
+        lines += _f_stmt(indent, s, e)
+    top, _ = _f_names(low)
+    names += top
+    for blk in low.pre + [None] + low.post:
+        if blk is None:
+            if low.tail:
+                lines.append(f"{indent}! static condensation of the internal unknowns")
+            for s, e in low.tail:
+                lines += _f_stmt(indent, s, e)
+            continue
+        lines.append(f"{indent}block   ! {blk.title}")
+        bn = [str(s) for s, _ in blk.stmts]
+        if bn:
+            lines += _f_decl(bn, indent + "  ")
+        for s, e in blk.stmts:
+            lines += _f_stmt(indent + "  ", s, e)
+        for s, e, op, first in blk.accs:
+            if op == "add":
+                rhs = e if first else sp.Symbol(str(s)) + e
+                lines += _f_stmt(indent + "  ", s, rhs) if first else wrap_fortran(
+                    f"{indent}  {s} = {s} + ({f_expr(e)})", indent + "  ")
+            else:
+                lines += (_f_stmt(indent + "  ", s, e) if first else
+                          wrap_fortran(f"{indent}  {s} = min({s}, {f_expr(e)})", indent + "  "))
+        for nm, idx, e in blk.outs:
+            lines += wrap_fortran(f"{indent}  {point_fmt(nm, idx)} = {f_expr(e)}", indent + "  ")
+        lines.append(f"{indent}end block")
+    for name, items in low.outputs.items():
+        shape = low.shapes[name]
+        for idx, e in items:
+            if isinstance(e, tuple):
+                e = _mirror_expr(items, e[1], shape)
+            lines += wrap_fortran(f"{indent}{out_fmt(name, idx)} = {f_expr(e)}", indent)
+    decl = _f_decl(names, indent)
+    _check_case(names + [n for blk in low.pre + low.post for n in (str(s) for s, _ in blk.stmts)] +
+                ["xy", "u", "E", "nu", "t", "K", "detJ_min", "strain", "stress", "mat", "n", "iel"])
+    return decl, lines
+
+
+def _check_case(names):
+    seen = {}
+    for n in names:
+        k = n.lower()
+        if k in seen and seen[k] != n:
+            raise ValueError(f"Fortran name clash (case-insensitive): {seen[k]} and {n}")
+        seen[k] = n
+
+
+def render_fortran(ir: KernelIR, lows: dict, meta: dict, name: str) -> list[Source]:
+    K, V, R = lows["stiffness"], lows["validity"], lows["recovery"]
+    sd, sl = _f_body(K, ir, lambda nm, idx: f"K({idx[0] + 1}, {idx[1] + 1})")
+    vd, vl = _f_body(V, ir, lambda nm, idx: "detJ_min")
+    rd, rl = _f_body(R, ir, None, lambda nm, idx: f"{nm}({idx[1] + 1}, {idx[0] + 1})")
+    ctx = {"header": header_lines(ir, meta, "fortran"), "module": f"derive_{name}", "name": name,
+           "nodes": ir.n_nodes, "ndof": ir.ndof, "nstrain": ir.nstrain, "npoints": meta["recovery_points"],
+           "stiff_decl": sd, "stiff_lines": sl, "valid_decl": vd, "valid_lines": vl,
+           "rec_decl": rd, "rec_lines": rl, "version": GENERATOR_VERSION}
+    text = _env().get_template("kernel.f90.j2").render(**ctx)
+    return [Source(f"fortran/{name}.f90", text)]
+
+
+# ---------------------------------------------------------------------------------------------
+# NumPy
+
+def _py_lines(low: Lowered, ir: KernelIR, tag: str, out_fmt, indent="    ") -> tuple[list, list]:
+    consts, lines = [], []
+    used = low.used_inputs
+    for i in range(ir.n_nodes):
+        for k, c in enumerate(("x", "y")):
+            nm = f"{c}{i + 1}"
+            if nm in used:
+                lines.append(f"{indent}{nm} = X[{2 * i + k}]")
+    for j in range(ir.ndof):
+        if f"u{j + 1}" in used:
+            lines.append(f"{indent}u{j + 1} = U[{j}]")
+    for k, nm in enumerate(("E", "nu", "t")):
+        if nm in used:
+            lines.append(f"{indent}{nm} = mat[{k}]")
+    for k, (s, _) in enumerate(low.mat):
+        if s.name in used:
+            lines.append(f"{indent}{s} = mat[{3 + k}]")
+    for s, e in low.elem:
+        lines += _py_assign(indent, s, e)
+    for bi, blk in enumerate(low.pre + [None] + low.post):
+        if blk is None:
+            if low.tail:
+                lines.append(f"{indent}# static condensation of the internal unknowns")
+            for s, e in low.tail:
+                lines += _py_assign(indent, s, e)
+            continue
+        lines.append(f"{indent}# {blk.title}")
+        npts = blk.npoints
+        for s, vals in blk.pc.items():
+            cname = f"_{tag}{bi}_{s}"
+            consts.append(f"{cname} = np.array([{', '.join(float_literal(v) for v in vals)}]).reshape({npts}, 1)")
+            lines.append(f"{indent}{s} = {cname}")
+        for s, e in blk.stmts:
+            lines += _py_assign(indent, s, e)
+        for s, e, op, first in blk.accs:
+            red = f"_psum({py_expr(e)}, {npts})" if op == "add" else f"_pmin({py_expr(e)})"
+            text = f"{s} = {red}" if first else (f"{s} = {s} + {red}" if op == "add" else f"{s} = np.minimum({s}, {red})")
+            lines.append(indent + text)
+        for nm, idx, e in blk.outs:
+            lines.append(f"{indent}{nm}[{idx[0]}] = {py_expr(e)}")
+    for name, items in low.outputs.items():
+        shape = low.shapes[name]
+        for idx, e in items:
+            if isinstance(e, tuple):
+                src = _flat(shape, e[1])
+                lines.append(f"{indent}{out_fmt(name, _flat(shape, idx))} = {out_fmt(name, src)}")
+            else:
+                lines.append(f"{indent}{out_fmt(name, _flat(shape, idx))} = {py_expr(e)}")
+    return consts, lines
+
+
+def _py_assign(indent, s, e) -> list[str]:
+    text = f"{indent}{s} = {py_expr(e)}"
+    if len(text) <= 110:
+        return [text]
+    parts = wrap_c(f"{indent}{s} = ({py_expr(e)})", indent)
+    return parts
+
+
+def render_numpy(ir: KernelIR, lows: dict, meta: dict, name: str) -> list[Source]:
+    mats = _merge_mats(lows)
+    for low in lows.values():
+        _remap_mats(low, mats)
+    sc, sl = _py_lines(lows["stiffness"], ir, "S", lambda nm, k: f"buf[{k}]")
+    vc, vl = _py_lines(lows["validity"], ir, "V", lambda nm, k: "detJ_min")
+    rc, rl = _py_lines(lows["recovery"], ir, "R", None)
+    mat_lines = []
+    for s, e in mats:
+        mat_lines += _py_assign("    ", s, e)
+    ctx = {"header": header_lines(ir, meta, "numpy"), "name": name, "nodes": ir.n_nodes, "ndof": ir.ndof,
+           "nstrain": ir.nstrain, "npoints": meta["recovery_points"], "chunk": NUMPY_CHUNK,
+           "consts": sc + vc + rc, "stiff_lines": sl, "valid_lines": vl, "rec_lines": rl,
+           "mat_lines": mat_lines, "mat_names": ["E", "nu", "t"] + [str(s) for s, _ in mats],
+           "element": ir.element, "variant": ir.variant, "state": ir.state, "version": GENERATOR_VERSION,
+           "meta_repr": _py_literal(meta)}
+    text = _env().get_template("kernel.py.j2").render(**ctx)
+    return [Source(f"numpy/{name}.py", text)]
+
+
+def _py_literal(obj, indent=0) -> str:
+    import json
+    return json.dumps(obj, indent=4, sort_keys=True)
+
+
+# ---------------------------------------------------------------------------------------------
+# entry points
+
+@lru_cache(maxsize=None)
+def _ir_for(key):
+    element, variant, state = key
+    info = catalog.element_info(element)
+    return build(info, catalog.shape_set(info.name), variant, state)
+
+
+def lowered(ir: KernelIR, mode: str) -> dict:
+    return {name: lower(ir, fn, mode) for name, fn in ir.functions.items()}
+
+
+def generate(element: str, variant: str = "full", state: str = "plane-stress", langs=LANGS, ir=None) -> list:
+    """KernelSet per language for one catalogue element (or a given IR)."""
+    if ir is None:
+        ir = _ir_for((catalog.element_info(element).name, variant, state))
+    name = stem(ir.element, ir.variant, ir.state)
+    out = []
+    unrolled = vector = None
+    for lang in langs:
+        if lang in ("c", "fortran"):
+            if unrolled is None:
+                unrolled = lowered(ir, "unrolled")
+            lows = unrolled
+        elif lang == "numpy":
+            if vector is None:
+                vector = lowered(ir, "vector")
+            lows = vector
+        else:
+            raise ValueError(f"unknown language {lang!r}")
+        if unrolled is None:
+            unrolled = lowered(ir, "unrolled")
+        meta = describe(ir, unrolled)
+        render = {"c": render_c, "fortran": render_fortran, "numpy": render_numpy}[lang]
+        sources = render(ir, lows, meta, name)
+        out.append(KernelSet(ir.element, ir.variant, ir.state, lang, name, sources, meta))
+    return out

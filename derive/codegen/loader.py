@@ -1,0 +1,319 @@
+"""``derive.kernel(...)``: generate, compile on demand, cache per user, load, call.
+
+* NumPy kernels are generated in memory and executed as a module.
+* C kernels are compiled with the system C compiler (``$CC``, else ``cc``/``gcc``) into a
+  per-user cache, ``$XDG_CACHE_HOME/derive/kernels`` (default ``~/.cache/derive/kernels``;
+  ``$DERIVE_CACHE_DIR`` overrides), keyed by a hash of the source, the compiler's version
+  line, the flags and the machine; loaded with ctypes.  Fortran likewise with ``$FC`` or
+  ``gfortran``.  Without a compiler the NumPy kernel is used and a one-line warning says so.
+* Every call checks its inputs before any native code runs: array shapes, finite
+  coordinates, E > 0 and -1 < nu < 0.5 (:func:`derive.material.check_material`), t > 0.
+"""
+from __future__ import annotations
+
+import ctypes
+import hashlib
+import os
+import platform
+import shutil
+import subprocess
+import sys
+import tempfile
+import threading
+import types
+import warnings
+from functools import lru_cache
+from pathlib import Path
+
+import numpy as np
+
+from .. import catalog
+from ..errors import GeometryError, InputError
+from ..material import STATES, check_material
+from . import GENERATOR_VERSION
+from .emit import LANGS, generate
+
+C_FLAGS = ("-O3", "-march=native", "-fopenmp-simd", "-std=c99", "-fPIC", "-shared")
+F_FLAGS = ("-O3", "-march=native", "-fPIC", "-shared")
+_LOCK = threading.Lock()
+
+
+class KernelWarning(UserWarning):
+    """A native kernel was requested but could not be built; NumPy is used instead."""
+
+
+def cache_dir() -> Path:
+    """Per-user cache folder for compiled kernels (never inside the repository)."""
+    env = os.environ.get("DERIVE_CACHE_DIR")
+    if env:
+        base = Path(env)
+    else:
+        xdg = os.environ.get("XDG_CACHE_HOME")
+        base = (Path(xdg) if xdg else Path.home() / ".cache") / "derive"
+    return base / "kernels"
+
+
+@lru_cache(maxsize=None)
+def find_compiler(lang: str) -> tuple[str, str] | None:
+    """(executable, version line) of the C or Fortran compiler, or None."""
+    names = ([os.environ["CC"]] if os.environ.get("CC") else []) + ["cc", "gcc", "clang"] if lang == "c" else \
+        ([os.environ["FC"]] if os.environ.get("FC") else []) + ["gfortran"]
+    for name in names:
+        exe = shutil.which(name)
+        if not exe:
+            continue
+        try:
+            out = subprocess.run([exe, "--version"], capture_output=True, text=True, timeout=30)
+        except (OSError, subprocess.SubprocessError):
+            continue
+        if out.returncode == 0:
+            return exe, (out.stdout.splitlines() or [""])[0].strip()
+    return None
+
+
+@lru_cache(maxsize=1)
+def _machine_id() -> str:
+    """CPU identity for -march=native builds (model name and flags)."""
+    text = platform.machine()
+    try:
+        with open("/proc/cpuinfo", encoding="utf-8", errors="replace") as fh:
+            for line in fh:
+                if line.startswith(("model name", "flags")):
+                    text += line.strip()
+                if line.strip() == "":
+                    break
+    except OSError:
+        pass
+    return hashlib.sha256(text.encode()).hexdigest()[:16]
+
+
+def build_shared(sources: dict, lang: str, stem: str) -> Path:
+    """Compile sources {file name: text} into a shared library in the cache; return its path."""
+    comp = find_compiler(lang)
+    if comp is None:
+        raise FileNotFoundError(f"no {'C' if lang == 'c' else 'Fortran'} compiler found")
+    exe, version = comp
+    flags = C_FLAGS if lang == "c" else F_FLAGS
+    h = hashlib.sha256()
+    for name in sorted(sources):
+        h.update(name.encode() + b"\0" + sources[name].encode() + b"\0")
+    h.update(" ".join(flags).encode() + version.encode() + _machine_id().encode())
+    key = h.hexdigest()[:20]
+    folder = cache_dir()
+    lib = folder / f"{stem}-{lang}-{key}.so"
+    if lib.exists():
+        return lib
+    folder.mkdir(parents=True, exist_ok=True)
+    with tempfile.TemporaryDirectory(prefix=f".build-{stem}-", dir=str(folder)) as tmp:
+        main = None
+        for name, text in sources.items():
+            (Path(tmp) / name).write_text(text, encoding="utf-8")
+            if name.endswith((".c", ".f90")):
+                main = name
+        out = Path(tmp) / "k.so"
+        cmd = [exe, *flags, main, "-o", str(out)]
+        if lang == "fortran":
+            cmd.insert(1, "-J" + tmp)
+        res = subprocess.run(cmd, cwd=tmp, capture_output=True, text=True)
+        if res.returncode != 0:
+            raise RuntimeError(f"compiling {stem} ({lang}) failed: {res.stderr.strip()[:2000]}")
+        os.replace(out, lib)
+    return lib
+
+
+class Kernel:
+    """A generated element kernel: ``k(xy, E, nu, t)`` -> stiffness (n, ndof, ndof).
+
+    Also ``k.validity(xy)`` (min det J at the full rule's points), ``k.check(xy)``
+    (GeometryError naming inverted elements by index) and ``k.recovery(xy, u, E, nu)``
+    (strain, stress at the full rule's points).  ``lang`` is the language actually used
+    (``requested`` the one asked for).
+    """
+
+    def __init__(self, kset, lang: str, requested: str, impl):
+        self.element, self.variant, self.state = kset.element, kset.variant, kset.state
+        self.meta = kset.meta
+        self.nodes, self.ndof = kset.meta["nodes"], kset.meta["ndof"]
+        self.npoints, self.nstrain = kset.meta["recovery_points"], kset.meta["nstrain"]
+        self.lang, self.requested = lang, requested
+        self.sources = {s.path: s.text for s in kset.sources}
+        self._impl = impl
+
+    def __repr__(self) -> str:
+        return f"<derive kernel {self.element} {self.variant} {self.state} [{self.lang}]>"
+
+    # ---------------------------------------------------------------- checks
+    def _xy(self, xy) -> np.ndarray:
+        try:
+            arr = np.asarray(xy, dtype=np.float64)
+        except (TypeError, ValueError):
+            raise InputError("xy must be an array of numbers of shape (n, nodes, 2)") from None
+        if arr.ndim == 2 and arr.shape == (self.nodes, 2):
+            raise InputError(f"xy must have shape (n, {self.nodes}, 2) (a batch); for one element use xy[None]")
+        if arr.ndim != 3 or arr.shape[1:] != (self.nodes, 2):
+            raise InputError(f"xy must have shape (n, {self.nodes}, 2) for {self.element}; got {arr.shape}")
+        if not np.all(np.isfinite(arr)):
+            bad = int(np.flatnonzero(~np.all(np.isfinite(arr.reshape(arr.shape[0], -1)), axis=1))[0])
+            raise InputError(f"xy contains NaN or infinity (first at element index {bad})")
+        return np.ascontiguousarray(arr)
+
+    def _material(self, E, nu, t=None):
+        for name, v in (("E", E), ("nu", nu)) + ((("t", t),) if t is not None else ()):
+            if not np.ndim(v) == 0:
+                raise InputError(f"{name} must be a scalar (one material per call)")
+            try:
+                float(v)
+            except (TypeError, ValueError):
+                raise InputError(f"{name} must be a number, got {v!r}") from None
+        E, nu = float(E), float(nu)
+        check_material(self.state, E, nu)
+        if not nu < 0.5:
+            raise InputError(f"Poisson's ratio nu = {nu} is not allowed in a kernel; -1 < nu < 0.5")
+        if t is not None:
+            t = float(t)
+            if not np.isfinite(t) or t <= 0:
+                raise InputError(f"thickness t = {t} is not allowed; t must be a finite number > 0")
+        return E, nu, t
+
+    # ---------------------------------------------------------------- calls
+    def __call__(self, xy, E, nu, t=1.0, out=None):
+        arr = self._xy(xy)
+        E, nu, t = self._material(E, nu, t)
+        n = arr.shape[0]
+        if out is None:
+            out = np.empty((n, self.ndof, self.ndof))
+        elif (not isinstance(out, np.ndarray) or out.shape != (n, self.ndof, self.ndof) or out.dtype != np.float64
+              or not out.flags.c_contiguous):
+            raise InputError(f"out must be a C-contiguous float64 array of shape ({n}, {self.ndof}, {self.ndof})")
+        if n:
+            self._impl.stiffness(arr, E, nu, t, out)
+        return out
+
+    stiffness = __call__
+
+    def validity(self, xy) -> np.ndarray:
+        arr = self._xy(xy)
+        out = np.empty(arr.shape[0])
+        if arr.shape[0]:
+            self._impl.validity(arr, out)
+        return out
+
+    def check(self, xy) -> np.ndarray:
+        """min det J per element; GeometryError naming the inverted/degenerate elements."""
+        d = self.validity(xy)
+        bad = np.flatnonzero(~(d > 0))
+        if bad.size:
+            shown = ", ".join(str(int(i)) for i in bad[:10]) + (" ..." if bad.size > 10 else "")
+            raise GeometryError(f"{bad.size} {self.element} element(s) with det J <= 0 at a quadrature point "
+                                f"(inverted, clockwise or degenerate): index {shown}; first min det J = "
+                                f"{d[bad[0]]:.6g}")
+        return d
+
+    def recovery(self, xy, u, E, nu):
+        arr = self._xy(xy)
+        E, nu, _ = self._material(E, nu)
+        try:
+            U = np.ascontiguousarray(np.asarray(u, dtype=np.float64))
+        except (TypeError, ValueError):
+            raise InputError("u must be an array of numbers") from None
+        if U.shape != (arr.shape[0], self.ndof):
+            raise InputError(f"u must have shape ({arr.shape[0]}, {self.ndof}); got {U.shape}")
+        if not np.all(np.isfinite(U)):
+            raise InputError("u contains NaN or infinity")
+        n = arr.shape[0]
+        strain = np.empty((n, self.npoints, self.nstrain))
+        stress = np.empty((n, self.npoints, self.nstrain))
+        if n:
+            self._impl.recovery(arr, U, E, nu, strain, stress)
+        return strain, stress
+
+
+class _NumpyImpl:
+    def __init__(self, text: str, name: str):
+        mod = types.ModuleType(f"derive_kernel_{name}")
+        mod.__file__ = f"<derive generated {name}.py>"
+        exec(compile(text, mod.__file__, "exec"), mod.__dict__)
+        self.mod = mod
+
+    def stiffness(self, xy, E, nu, t, out):
+        self.mod.stiffness(xy, E, nu, t, out=out)
+
+    def validity(self, xy, out):
+        out[:] = self.mod.validity(xy)
+
+    def recovery(self, xy, u, E, nu, strain, stress):
+        s, t = self.mod.recovery(xy, u, E, nu)
+        strain[:] = s
+        stress[:] = t
+
+
+def _ptr(a: np.ndarray):
+    return ctypes.c_void_p(a.ctypes.data)
+
+
+class _NativeImpl:
+    def __init__(self, lib_path: Path, prefix: str, suffix: str):
+        self.lib = ctypes.CDLL(str(lib_path))
+        L, P, D = ctypes.c_long, ctypes.c_void_p, ctypes.c_double
+        self.k = getattr(self.lib, f"{prefix}_stiffness_batch{suffix}")
+        self.k.argtypes = [L, P, D, D, D, P]
+        self.k.restype = None
+        self.v = getattr(self.lib, f"{prefix}_validity{suffix}")
+        self.v.argtypes = [L, P, P]
+        self.v.restype = None
+        self.r = getattr(self.lib, f"{prefix}_recovery{suffix}")
+        self.r.argtypes = [L, P, P, D, D, P, P]
+        self.r.restype = None
+
+    def stiffness(self, xy, E, nu, t, out):
+        self.k(xy.shape[0], _ptr(xy), E, nu, t, _ptr(out))
+
+    def validity(self, xy, out):
+        self.v(xy.shape[0], _ptr(xy), _ptr(out))
+
+    def recovery(self, xy, u, E, nu, strain, stress):
+        self.r(xy.shape[0], _ptr(xy), _ptr(u), E, nu, _ptr(strain), _ptr(stress))
+
+
+def check_request(name, variant: str, state: str, lang: str):
+    if lang not in LANGS:
+        raise InputError(f"unknown kernel language {lang!r}; allowed: {', '.join(LANGS)}")
+    info = catalog.element_info(name)
+    v = catalog.check_variant(info, variant)
+    catalog.check_state(state)
+    if state not in getattr(v, "states", STATES):
+        raise InputError(f"variant {variant!r} is offered in {', '.join(v.states)} only; got state {state!r}")
+    return info
+
+
+@lru_cache(maxsize=None)
+def _kernel(name: str, variant: str, state: str, lang: str) -> Kernel:
+    (kset,) = generate(name, variant, state, langs=(lang,))
+    if lang == "numpy":
+        return Kernel(kset, "numpy", lang, _NumpyImpl(kset.sources[0].text, kset.stem))
+    sources = {Path(s.path).name: s.text for s in kset.sources}
+    try:
+        with _LOCK:
+            lib = build_shared(sources, lang, kset.stem)
+        prefix = f"derive_{kset.stem}"
+        impl = _NativeImpl(lib, prefix, "_f" if lang == "fortran" else "")
+        return Kernel(kset, lang, lang, impl)
+    except FileNotFoundError as exc:
+        warnings.warn(f"derive.kernel: {exc}; using the NumPy kernel for {kset.element} {kset.variant} "
+                      f"{kset.state} instead of {lang}", KernelWarning, stacklevel=3)
+        np_kernel = _kernel(name, variant, state, "numpy")
+        return Kernel(kset, "numpy", lang, np_kernel._impl)
+
+
+def kernel(name, variant: str = "full", state: str = "plane-stress", lang: str = "numpy") -> Kernel:
+    """Generated stiffness kernel ``k(xy, E, nu, t)`` for a catalogue element.
+
+    ``xy``: (n, nodes, 2) nodal coordinates; returns (n, ndof, ndof).  ``lang``: "numpy",
+    "c" or "fortran" (compiled on first use into the per-user cache; NumPy with a warning
+    when the compiler is missing).
+    """
+    if not isinstance(lang, str):
+        raise InputError(f"unknown kernel language {lang!r}; allowed: {', '.join(LANGS)}")
+    lang = lang.strip().lower()
+    info = check_request(name, variant, state, lang)
+    return _kernel(info.name, variant, state, lang)
