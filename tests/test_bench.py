@@ -176,3 +176,26 @@ def test_mechanism_rows_are_reported():
     row = res["results"][0]
     assert row["value"] is None and "mechanism" in row["note"]
     json.dumps({k: v for k, v in res.items() if not k.startswith("_")}, allow_nan=False)
+
+
+def test_recovered_bending_stress():
+    # flexure formula sigma_x = -M y / I with M = P (L - x) (elementary beam theory): at each
+    # element's centre line the recovered stresses of the bending-exact variants match it; the
+    # hybrid element's stress comes entirely from its condensed stress parameters
+    I = 0.1 * 0.2 ** 3 / 12
+    for v in ("hybrid5", "eas4", "incompatible-centred"):
+        sol = B.run_cantilever("Q4", v, "rectangular", "shear", 1)["_solution"]
+        pos, sig = sol.point_stresses()
+        xc = pos[..., 0].mean(axis=1, keepdims=True)           # element centre (2x2 points symmetric)
+        exact = -(6.0 - xc) * (pos[..., 1] - 0.1) / I
+        assert np.allclose(sig[..., 0], exact, rtol=0.01, atol=1e-3 * np.abs(exact).max()), v
+        assert np.allclose(sig[..., 0].mean(axis=1), 0.0, atol=1e-6 * np.abs(sig).max())   # no net axial force
+    full = B.run_cantilever("Q4", "full", "rectangular", "shear", 1)["_solution"]
+    _, sig = full.point_stresses()
+    assert np.abs(sig[..., 0]).max() < 0.2 * 6.0 * 0.1 / I              # locked: far below M c / I
+
+
+def test_demo_section(tmp_path):
+    res = B.demo_section(tmp_path)
+    assert res["title"] and all((tmp_path / f).exists() for f in res["files"])
+    assert any("patch test Q4 full: passed" in line for line in res["lines"])

@@ -206,3 +206,18 @@ def test_perf_benchmark_quick():
     res = M.benchmark(quick=True)
     assert res["lines"] and res["unknowns"] == 2 * 33 * 33
     assert all(r["max_rel_difference"] < 1e-10 for r in res["routes"])
+
+
+def test_nodal_stresses_reproduce_a_linear_field():
+    # a quadratic displacement field (pure bending, sigma_x = c y, elementary beam theory) gives
+    # linear stresses that the rule-point fit reproduces at every node (common practice, no source)
+    E, nu, c = 100.0, 0.3, 5.0
+    for name in ("Q9", "Q8", "T6"):
+        m = M.structured(name, 3, 2, ((0, 0), (3, 0), (3, 2), (0, 2)))
+        x, y = m.nodes[:, 0], m.nodes[:, 1]
+        u = np.column_stack([c / E * x * y, -c / E * x ** 2 / 2 - nu * c / E * y ** 2 / 2]).ravel()
+        sol = M.Solution(m, "full", "plane-stress", E, nu, 1.0, u, np.zeros_like(u), np.zeros_like(u))
+        pos, sig = sol.point_stresses()
+        assert np.allclose(sig[..., 0], c * pos[..., 1], atol=1e-12) and np.allclose(sig[..., 1:], 0, atol=1e-12)
+        nod = sol.nodal_stresses()
+        assert np.allclose(nod[:, 0], c * y, atol=1e-10) and np.allclose(nod[:, 1:], 0, atol=1e-10)
