@@ -116,6 +116,8 @@ def compare_symbolic(expected: sp.Matrix, given) -> CheckResult:
     """Entry-wise exact comparison; ``given`` is a Matrix or a dict {(i, j): expr}."""
     entries = _entries_of(given)
     if not isinstance(given, dict) and given.shape != expected.shape:
+        if given.shape == expected.T.shape:  # a transposed matrix: every entry differs; diagnosis follows
+            return CheckResult(match=False, mismatched=[], compared=len(entries), method="shape differs")
         raise InputError(f"the given matrix is {given.rows} x {given.cols}; expected {expected.rows} x {expected.cols}")
     mismatched, counter = [], None
     for (i, j), g in sorted(entries.items()):
@@ -133,6 +135,8 @@ def compare_numeric(expected: np.ndarray, given: np.ndarray, rtol: float) -> Che
     expected = np.asarray(expected, dtype=float)
     given = np.asarray(given, dtype=float)
     if given.shape != expected.shape:
+        if given.shape == expected.T.shape:
+            return CheckResult(match=False, mismatched=[], compared=given.size, method="shape differs")
         raise InputError(f"the given matrix is {given.shape[0]} x {given.shape[1]}; expected "
                          f"{expected.shape[0]} x {expected.shape[1]}")
     scale = max(np.linalg.norm(expected), 1e-300)
