@@ -13,9 +13,11 @@ What is here
     given).  Triangles split every cell of a structured grid along its rising diagonal.
   * :func:`assemble`: global stiffness in ``scipy.sparse`` CSR from a batch of element
     matrices.  The element-matrix provider is a parameter, ``provider(xy, E, nu, t)`` with
-    ``xy`` of shape (n, nodes, 2) returning (n, ndof, ndof); :func:`element_provider` picks
-    the generated C kernel (``derive.kernel(..., lang="c")``) when it exists and falls back
-    to the lambdified reference ``Element.numeric_stiffness`` otherwise.
+    ``xy`` of shape (n, nodes, 2) returning (n, ndof, ndof); by default
+    :func:`element_provider` picks the generated C kernel (``derive.kernel(..., lang="c")``)
+    when it exists (meshes below :data:`C_MIN_ELEMENTS` elements try the generated NumPy
+    kernel first, which needs no compilation) and falls back to the lambdified reference
+    ``Element.numeric_stiffness`` otherwise.
   * consistent edge loads (:func:`edge_load`, :func:`uniform_edge_force`,
     :func:`pressure_load`): the traction integrated against the element's own shape
     functions along each loaded edge with a Gauss rule, per unit area times the thickness
@@ -419,19 +421,26 @@ def polar(r_inner: float, r_outer: float, theta0: float = 0.0, theta1: float = m
 # ---------------------------------------------------------------------------------------------
 # element matrices
 
+#: generated-kernel languages tried, in order, by the default element-matrix provider
+DEFAULT_LANGS: tuple[str, ...] = ("c", "numpy")
+#: below this many elements :func:`assemble` tries the NumPy kernel first: a C kernel compiles
+#: on first use (seconds for a quadratic element in a fresh cache), more than such a mesh costs
+C_MIN_ELEMENTS = 2000
+
+
 def element_provider(element: str, variant: str = "full", state: str = "plane-stress",
-                     prefer: Sequence[str] = ("c", "numpy")) -> tuple[Provider, str]:
+                     prefer: Sequence[str] | None = None) -> tuple[Provider, str]:
     """Element-matrix provider for a mesh, and a label saying which route it is.
 
     Tries the generated kernels ``derive.kernel(element, variant, state, lang)`` in the
-    order of ``prefer``; falls back to the lambdified reference ``numeric_stiffness``.
+    order of ``prefer`` (default :data:`DEFAULT_LANGS`: C, then NumPy); falls back to the
+    lambdified reference ``numeric_stiffness``.
     """
-    import derive
     from .element import element as make_element
     el = make_element(element, variant, state)  # validates names
-    kernel = getattr(derive, "kernel", None)
+    kernel = _kernel_factory()
     if kernel is not None:
-        for lang in prefer:
+        for lang in (DEFAULT_LANGS if prefer is None else prefer):
             try:
                 k = kernel(el.name, variant, state, lang=lang)
             except Exception:  # a kernel that is not generated / not compilable here: try the next route
@@ -442,6 +451,19 @@ def element_provider(element: str, variant: str = "full", state: str = "plane-st
         return el.numeric_stiffness(xy, E, nu, t)
 
     return reference, "reference"
+
+
+def _kernel_factory():
+    """``derive.kernel`` (the public contract), or the code generator's own entry point, or None."""
+    import derive
+    k = getattr(derive, "kernel", None)
+    if k is not None:
+        return k
+    try:
+        from .codegen import kernel as k
+    except ImportError:
+        return None
+    return k
 
 
 def gauss_provider(element: str, state: str = "plane-stress", rule: str | None = None) -> Provider:
@@ -530,7 +552,9 @@ def assemble(mesh: Mesh, variant: str = "full", state: str = "plane-stress", E: 
         raise InputError(f"thickness t = {t} is not allowed; t must be a finite number > 0")
     route = "given"
     if provider is None:
-        provider, route = element_provider(mesh.element, variant, state)
+        prefer = DEFAULT_LANGS if mesh.n_elements >= C_MIN_ELEMENTS else \
+            tuple(dict.fromkeys(("numpy",) + tuple(DEFAULT_LANGS)))
+        provider, route = element_provider(mesh.element, variant, state, prefer)
     xy = mesh.element_coords()
     ne = mesh.n_elements
     t0 = time.perf_counter()
@@ -1025,8 +1049,7 @@ def benchmark(quick: bool = False) -> dict:
     element, variant, state, E, nu, t = "Q4", "full", "plane-stress", 1.0, 1.0 / 3.0, 1.0
     mesh, f, fixed = _membrane_problem(element, n)
     routes: list[tuple[str, Provider]] = []
-    import derive
-    kernel = getattr(derive, "kernel", None)
+    kernel = _kernel_factory()
     if kernel is not None:
         for lang in ("c", "numpy"):
             try:
