@@ -31,6 +31,7 @@ SCENARIO = {
 SECTIONS = [
     "derive.demo:core_section",
     "derive.benchmarks:demo_section",
+    "derive.check:demo_section",
 ]
 
 
