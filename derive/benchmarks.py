@@ -166,6 +166,18 @@ def _element(element: str, variant: str, state: str):
     return make_element(element, variant, state)
 
 
+def _warn(sol) -> dict:
+    return {"warnings": list(sol.warnings)} if sol.warnings else {}
+
+
+def _warning_lines(rows) -> list[str]:
+    out = []
+    for r in rows:
+        for w in r.get("warnings", []):
+            out.append(f"warning ({r['mesh']}{', nu ' + str(r['nu']) if 'nu' in r else ''}): {w}")
+    return out
+
+
 def run_cantilever(element: str, variant: str = "full", kind: str = "rectangular", load: str = "shear",
                    refine: int = 1, provider=None, nx=None, ny=None) -> dict:
     _element(element, variant, "plane-stress")
@@ -183,7 +195,7 @@ def run_cantilever(element: str, variant: str = "full", kind: str = "rectangular
     ref = c["reference"][load]
     return {"problem": "cantilever", "element": mesh.element, "variant": variant, "mesh": kind, "load": load,
             "refine": refine, "cells": mesh.label, "value": value, "reference": ref, "normalized": value / ref,
-            "_solution": sol}
+            **_warn(sol), "_solution": sol}
 
 
 def run_membrane(element: str, variant: str = "full", n: int = 16, provider=None) -> dict:
@@ -198,7 +210,7 @@ def run_membrane(element: str, variant: str = "full", n: int = 16, provider=None
     ref = COOK_CONVERGED["mid"] or c["quoted_mid"]
     return {"problem": "membrane", "element": mesh.element, "variant": variant, "mesh": f"{n} x {n}", "n": n,
             "value": mid, "corner": corner, "mid": mid, "reference": ref, "normalized": mid / ref,
-            "reference_corner": COOK_CONVERGED["corner"], "_solution": sol}
+            "reference_corner": COOK_CONVERGED["corner"], **_warn(sol), "_solution": sol}
 
 
 def run_cylinder(element: str, variant: str = "full", n: int = 8, nu: float = 0.4999, provider=None,
@@ -216,7 +228,7 @@ def run_cylinder(element: str, variant: str = "full", n: int = 8, nu: float = 0.
     ref = lame_bore(c["p"], c["inner"], c["outer"], c["E"], nu)
     return {"problem": "cylinder", "element": mesh.element, "variant": variant, "mesh": mesh.label, "n": n, "nu": nu,
             "value": value, "reference": ref, "normalized": value / ref, "error": value / ref - 1.0,
-            "_solution": sol}
+            **_warn(sol), "_solution": sol}
 
 
 # ---------------------------------------------------------------------------------------------
@@ -263,6 +275,7 @@ def cantilever_study(element: str, variant: str = "full", meshes=CANTILEVER_MESH
     for r in rows:
         lines.append(f"{r['mesh']:<13} {r['load']:<9} value {_num(r['value'], '.6g')}  reference {r['reference']:.6g}  "
                      f"normalized {_num(r['normalized'], '.4f')}")
+    lines += _warning_lines(rows)
     return {"problem": "cantilever", "element": element, "variant": variant, "results": rows, "lines": lines,
             **_headline(rows[0]), "_solution": last}
 
@@ -319,6 +332,7 @@ def membrane_study(element: str, variant: str = "full", levels=(2, 4, 8, 16, 32)
         if sl is not None:
             lines.append(f"convergence rate ({key}): error ~ h^{sl:.2f} against {refs[key]:.4f}")
     lines.append(f"often-quoted converged value (mid-edge, from memory): {COOK['quoted_mid']}")
+    lines += _warning_lines(rows)
     out["lines"] = lines
     out.update(_headline(rows[-1]))
     out["_solution"] = last
@@ -355,6 +369,7 @@ def cylinder_study(element: str, variant: str = "full", levels=(2, 4, 8, 16), nu
         lines.append(f"{nu:>7} " + " ".join(f"{r['normalized']:10.4f}" if r["normalized"] is not None
                                             else f"{'mechanism':>10}" for r in sub) +
                      (f"   h^{rate:.2f}" if rate is not None else ""))
+    lines += _warning_lines(rows)
     return {"problem": "cylinder", "element": element, "variant": variant, "results": rows, "rates": rates,
             "lines": lines, **_headline(rows[-1]), "_solution": last}
 
@@ -420,10 +435,25 @@ def _figure():
     return plt
 
 
+PLOT_FORMATS = ("png", "svg", "pdf")
+
+
+def plot_format(path) -> str:
+    """Image format from the file suffix; InputError for anything but .png, .svg, .pdf."""
+    fmt = Path(path).suffix.lstrip(".").lower()
+    if fmt not in PLOT_FORMATS:
+        raise InputError(f"plot file {str(path)!r}: use a .png, .svg or .pdf file name")
+    return fmt
+
+
 def _save(fig, path) -> Path:
     plt = _figure()
     buf = io.BytesIO()
-    fmt = Path(path).suffix.lstrip(".").lower() or "png"
+    try:
+        fmt = plot_format(path)
+    except InputError:
+        plt.close(fig)
+        raise
     fig.savefig(buf, format=fmt, dpi=120, bbox_inches="tight")
     plt.close(fig)
     return write_atomic(path, buf.getvalue())
@@ -503,10 +533,29 @@ def plot_study(study: dict, path) -> Path:
     return _save(fig, path)
 
 
+def plot_locking_comparison(studies: list[dict], path) -> Path:
+    """Locking-mesh charts of several variants side by side (shared axes)."""
+    plt = _figure()
+    n = len(studies)
+    fig, axes = plt.subplots(1, n, figsize=(4.2 * n, 3.8), sharey=True, squeeze=False)
+    for ax, study in zip(axes[0], studies):
+        for ny in sorted({r["depth_elements"] for r in study["results"]}):
+            sub = [r for r in study["results"] if r["depth_elements"] == ny]
+            ax.semilogx([r["aspect"] for r in sub], [_v(r["normalized"]) for r in sub], "o-", label=f"{ny} through depth")
+        ax.axhline(1.0, ls=":", color="grey")
+        ax.axhline(study["accuracy"], ls="--", lw=0.8, color="grey")
+        ax.set_title(f"{study['element']} {study['variant']}", fontsize=10)
+        ax.set_xlabel("element aspect ratio")
+    axes[0][0].set_ylabel("tip deflection / Timoshenko theory")
+    axes[0][0].legend(fontsize=8)
+    return _save(fig, path)
+
+
 def table_text(study: dict) -> str:
     """Markdown table of a study's rows."""
     rows = study["results"]
-    keys = [k for k in rows[0] if not k.startswith("_") and k not in ("problem", "element", "variant")]
+    skip = {"problem", "element"} | ({"variant"} if len({r["variant"] for r in rows}) == 1 else set())
+    keys = [k for k in rows[0] if not k.startswith("_") and k not in skip]
     out = ["| " + " | ".join(keys) + " |", "|" + "---|" * len(keys)]
     for r in rows:
         out.append("| " + " | ".join(_fmt(r.get(k)) for k in keys) + " |")

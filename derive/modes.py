@@ -166,6 +166,8 @@ def _outline_lines(name: str, n: int = 24):
 
 def plot_modes(result: dict, path) -> str:
     """Deformed shapes of the zero-energy modes (rigid first, then spurious) into an image file."""
+    from .benchmarks import plot_format
+    fmt = plot_format(path)
     import matplotlib
     matplotlib.use("Agg")
     import matplotlib.pyplot as plt
@@ -199,7 +201,6 @@ def plot_modes(result: dict, path) -> str:
     fig.suptitle(f"{name} {result['variant']}: {result['zero_energy']} zero-energy modes, "
                  f"{result['rigid']} rigid, {result['spurious']} spurious{comm}", fontsize=10)
     buf = io.BytesIO()
-    fmt = str(path).rsplit(".", 1)[-1].lower() if "." in str(path) else "png"
     fig.savefig(buf, format=fmt, dpi=110, bbox_inches="tight")
     plt.close(fig)
     return str(write_atomic(path, buf.getvalue()))

@@ -199,3 +199,15 @@ def test_demo_section(tmp_path):
     res = B.demo_section(tmp_path)
     assert res["title"] and all((tmp_path / f).exists() for f in res["files"])
     assert any("patch test Q4 full: passed" in line for line in res["lines"])
+
+
+def test_locking_mesh_cli_compares_variants(tmp_path, capsys):
+    png = tmp_path / "cmp.png"
+    code = main(["bench", "locking-mesh", "--element", "Q4", "--variant", "full,eas4", "--depths", "1",
+                 "--plot", str(png), "--json"])
+    data = json.loads(capsys.readouterr().out)
+    assert code == 0 and [s["variant"] for s in data["studies"]] == ["full", "eas4"]
+    assert png.read_bytes()[:4] == b"\x89PNG"
+    # at 30:1 elements, EAS stays within 30% of beam theory while full Q4 collapses (locking ratio trend)
+    last = {s["variant"]: s["results"][-1]["normalized"] for s in data["studies"]}
+    assert last["full"] < 0.01 and last["eas4"] > 0.7

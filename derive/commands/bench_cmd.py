@@ -15,13 +15,16 @@ EXAMPLE = ("examples:\n"
            "  derive bench membrane --element Q9 --refine 5 --plot membrane.png --table membrane.md\n"
            "  derive bench membrane --element Q4 --mesh 16 --vtu membrane-16.vtu\n"
            "  derive bench cylinder --element Q4 --variant bbar --nu 0.49,0.4999 --json\n"
-           "  derive bench locking-mesh --element Q4 --plot locking-mesh.png --accuracy 0.9")
+           "  derive bench locking-mesh --element Q4 --plot locking-mesh.png --accuracy 0.9\n"
+           "  derive bench locking-mesh --element Q4 --variant full,incompatible-centred,eas4 --plot cmp.png")
 
 
 def add_arguments(p) -> None:
     p.add_argument("problem", choices=B.PROBLEMS, help="benchmark problem")
     p.add_argument("--element", default="Q4", help="catalogue element (default Q4)")
-    p.add_argument("--variant", default="full", help="formulation variant (default: full); see `derive list`")
+    p.add_argument("--variant", default="full",
+                   help="formulation variant (default: full); see `derive list`; locking-mesh accepts a "
+                        "comma-separated list to compare variants on one chart")
     p.add_argument("--mesh", help="cantilever: rectangular, trapezoidal, parallelogram or all (default all); "
                                   "membrane / cylinder: N for a single N x N mesh instead of a refinement study")
     p.add_argument("--refine", help="cantilever: subdivide each of the 6 cells N x N (default 1); membrane / cylinder: "
@@ -63,6 +66,9 @@ def run(args) -> int:
     quiet = output_format(args) == "json"
     show = False if quiet else None
     prob = args.problem
+    if args.plot:
+        B.plot_format(args.plot)          # refuse a bad file name before the runs
+    scale = float(parse_number(args.scale, "--scale"))
     if prob == "cantilever":
         meshes = B.CANTILEVER_MESHES if args.mesh in (None, "all") else (args.mesh,)
         for m in meshes:
@@ -89,17 +95,32 @@ def run(args) -> int:
     else:
         depths = [_int(d, "--depths", 1, 64) for d in str(args.depths).split(",") if d.strip()]
         acc = float(parse_number(args.accuracy, "--accuracy"))
-        res = B.locking_mesh_study(args.element, args.variant, depths, accuracy=acc, show_progress=show)
+        variants = [v.strip() for v in args.variant.split(",") if v.strip()]
+        if not variants:
+            raise InputError("--variant is empty")
+        studies = [B.locking_mesh_study(args.element, v, depths, accuracy=acc, show_progress=show) for v in variants]
+        if len(studies) == 1:
+            res = studies[0]
+        else:
+            res = {"problem": "locking-mesh", "element": studies[0]["element"], "variant": ",".join(variants),
+                   "studies": [{k: v for k, v in st.items() if not k.startswith("_") and k != "lines"}
+                               for st in studies],
+                   "results": [r for st in studies for r in st["results"]],
+                   "lines": [line for st in studies for line in st["lines"]], "_solution": studies[-1]["_solution"],
+                   "_studies": studies, **{k: studies[-1][k] for k in ("mesh", "value", "reference", "normalized")}}
     files = {}
     if args.plot:
-        files["plot"] = str(B.plot_study(res, args.plot))
+        if res.get("_studies"):
+            files["plot"] = str(B.plot_locking_comparison(res["_studies"], args.plot))
+        else:
+            files["plot"] = str(B.plot_study(res, args.plot))
     if args.table:
         files["table"] = str(write_atomic(args.table, B.table_text(res)))
     if args.vtu:
         sol = res.get("_solution")
         if sol is None:
             raise InputError("--vtu: no run produced a solution (every mesh was a mechanism)")
-        files["vtu"] = str(write_vtu(args.vtu, sol, float(parse_number(args.scale, "--scale"))))
+        files["vtu"] = str(write_vtu(args.vtu, sol, scale))
     out = {k: v for k, v in res.items() if not k.startswith("_") and k != "lines"}
     out["files"] = files
     if quiet:

@@ -31,6 +31,9 @@ def add_arguments(p) -> None:
 
 
 def run(args) -> int:
+    if args.plot:
+        from ..benchmarks import plot_format
+        plot_format(args.plot)            # refuse a bad file name before the analysis
     nu = float(parse_number(args.nu, "--nu"))
     tol = float(parse_number(args.tol, "--tol"))
     nodes = [[float(u), float(v)] for u, v in parse_nodes(args.nodes)] if args.nodes else None
