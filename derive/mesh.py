@@ -238,7 +238,7 @@ class Mesh:
         return {"elements": self.n_elements, "nodes": self.n_nodes}
 
 
-def _lift(element: str, cell_param: np.ndarray, cell_ref_tri: bool):
+def _lift(element: str):
     """Cell-local (u, v) in [0, 1]^2 of every element node, for a square cell or its two triangles."""
     ref = ref_element(element)
     P = ref.nodes
@@ -252,7 +252,7 @@ def _generate(element: str, nx: int, ny: int, position, label: str) -> Mesh:
     """Shared structured generator: ``position(i, j, u, v) -> (x, y)`` for cell (i, j) and local (u, v)."""
     nx, ny = _count(nx, "nx"), _count(ny, "ny")
     ref = ref_element(element)
-    locals_ = _lift(element, None, ref.domain == "triangle")
+    locals_ = _lift(element)
     I, J = np.meshgrid(np.arange(nx), np.arange(ny), indexing="ij")
     I, J = I.ravel(), J.ravel()  # cells, s-major
     all_keys, all_xy, all_param, conns = [], [], [], []
@@ -269,7 +269,7 @@ def _generate(element: str, nx: int, ny: int, position, label: str) -> Mesh:
     keys = np.stack(all_keys, axis=1).reshape(-1, ref.n_nodes)
     xy = np.stack(all_xy, axis=1).reshape(-1, ref.n_nodes, 2)
     par = np.stack(all_param, axis=1).reshape(-1, ref.n_nodes, 2)
-    uniq, first, inverse = np.unique(keys.ravel(), return_index=True, return_inverse=True)
+    _, first, inverse = np.unique(keys.ravel(), return_index=True, return_inverse=True)
     nodes = xy.reshape(-1, 2)[first]
     param = par.reshape(-1, 2)[first]
     conn = inverse.reshape(keys.shape)
@@ -356,7 +356,7 @@ def from_corners(element: str, corner_nodes, corner_conn, label: str = "") -> Me
     scale = max(np.ptp(cn[:, 0]), np.ptp(cn[:, 1]), 1e-300)
     keys = np.rint(xy.reshape(-1, 2) / scale * 1e9).astype(np.int64)
     # keep corner numbering first (as given), then the new nodes
-    uniq, first, inverse = np.unique(keys, axis=0, return_index=True, return_inverse=True)
+    _, first, inverse = np.unique(keys, axis=0, return_index=True, return_inverse=True)
     inverse = inverse.ravel()
     order = np.argsort(first, kind="stable")
     rank = np.empty_like(order)

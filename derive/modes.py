@@ -14,11 +14,9 @@ mesh (hourglassing); none means neighbouring elements suppress the element's mod
 from __future__ import annotations
 
 import io
-from functools import lru_cache
 
 import numpy as np
 
-from . import catalog
 from . import mesh as M
 from .errors import InputError
 from .kinematics import rigid_body_modes
