@@ -57,6 +57,8 @@ class VariantInfo:
     description: str
     builder: str  # "module:function" inside derive.formulations
     source: str = ""
+    #: states the variant is offered in (all by default)
+    states: tuple[str, ...] = STATES
 
 
 _SQ = ((-1, -1), (1, -1), (1, 1), (-1, 1))
@@ -79,6 +81,19 @@ def register_variant(info: VariantInfo) -> None:
 for _v in (
     VariantInfo("full", "displacement element, full integration", "displacement:full"),
     VariantInfo("reduced", "uniformly reduced integration", "displacement:reduced"),
+    VariantInfo("selective", "reduced rule for the volumetric part of D only (all states; T6 plane states)", "selective:selective",
+                "Doherty, Wilson & Taylor (1969); Hughes (1987)"),
+    VariantInfo("incompatible", "bubble modes 1-xi^2, 1-eta^2, own Jacobian; fails the patch test off "
+                "parallelograms (all states)", "incompatible:incompatible", "Wilson, Taylor, Doherty & Ghaboussi (1973)"),
+    VariantInfo("incompatible-centred", "bubble modes through the centre Jacobian, scaled det J0/det J; passes "
+                "the patch test (plane states)", "incompatible:incompatible_centred", "Taylor, Beresford & Wilson (1976)",
+                ("plane-stress", "plane-strain")),
+    VariantInfo("bbar", "mean-dilatation B-bar, constant pressure condensed (plane states; axisymmetric Q4)", "bbar:bbar",
+                "Hughes (1980)"),
+    VariantInfo("eas4", "enhanced assumed strain, 4 modes (plane states)", "eas:eas4", "Simo & Rifai (1990)",
+                ("plane-stress", "plane-strain")),
+    VariantInfo("hybrid5", "assumed-stress hybrid, 5 stress parameters (plane states)", "hybrid:hybrid5",
+                "Pian & Sumihara (1984)", ("plane-stress", "plane-strain")),
 ):
     register_variant(_v)
 
@@ -87,18 +102,19 @@ register_element(ElementInfo(
     (sp.Integer(1), xi, eta), "triangle-d1", "triangle-d1", ("full",)))
 register_element(ElementInfo(
     "T6", "6-node quadratic triangle (linear strain)", "triangle", _TRI + _TRI_MID,
-    (sp.Integer(1), xi, eta, xi ** 2, xi * eta, eta ** 2), "triangle-d2", "triangle-d1", ("full", "reduced")))
+    (sp.Integer(1), xi, eta, xi ** 2, xi * eta, eta ** 2), "triangle-d2", "triangle-d1", ("full", "reduced", "selective", "bbar")))
 register_element(ElementInfo(
     "Q4", "4-node bilinear quadrilateral", "square", _SQ,
-    (sp.Integer(1), xi, eta, xi * eta), "gauss-2x2", "gauss-1x1", ("full", "reduced")))
+    (sp.Integer(1), xi, eta, xi * eta), "gauss-2x2", "gauss-1x1",
+    ("full", "reduced", "selective", "incompatible", "incompatible-centred", "bbar", "eas4", "hybrid5")))
 register_element(ElementInfo(
     "Q8", "8-node serendipity quadrilateral", "square", _SQ + _SQ_MID,
     (sp.Integer(1), xi, eta, xi ** 2, xi * eta, eta ** 2, xi ** 2 * eta, xi * eta ** 2),
-    "gauss-3x3", "gauss-2x2", ("full", "reduced")))
+    "gauss-3x3", "gauss-2x2", ("full", "reduced", "selective", "bbar")))
 register_element(ElementInfo(
     "Q9", "9-node Lagrange quadrilateral", "square", _SQ + _SQ_MID + ((0, 0),),
     (sp.Integer(1), xi, eta, xi ** 2, xi * eta, eta ** 2, xi ** 2 * eta, xi * eta ** 2, xi ** 2 * eta ** 2),
-    "gauss-3x3", "gauss-2x2", ("full", "reduced")))
+    "gauss-3x3", "gauss-2x2", ("full", "reduced", "selective", "bbar")))
 
 
 def element_info(name: str) -> ElementInfo:
@@ -128,9 +144,15 @@ def shape_set(name: str) -> shapes_mod.ShapeSet:
     return shapes_mod.from_nodes(info.name, info.domain, info.nodes, info.basis)
 
 
+def check_variant_state(v: VariantInfo, state: str) -> None:
+    if state not in v.states:
+        raise InputError(f"variant {v.name!r} is offered in {', '.join(v.states)} only; got state {state!r}")
+
+
 def formulation(info: ElementInfo, variant: str, state: str):
     """Build the variant's :class:`~derive.formulations.base.Formulation` for this element."""
     v = check_variant(info, variant)
+    check_variant_state(v, state)
     module, func = v.builder.split(":")
     mod = importlib.import_module(f"derive.formulations.{module}")
     return getattr(mod, func)(info, state)

@@ -122,8 +122,9 @@ def _float_points_map(imap: IsoMap) -> IsoMap:
 def element(name: str, variant: str = "full", state: str = "plane-stress") -> Element:
     """Catalogue element by name (T3, T6, Q4, Q8, Q9), variant and state."""
     info = catalog.element_info(name)
-    catalog.check_variant(info, variant)
+    v = catalog.check_variant(info, variant)
     catalog.check_state(state)
+    catalog.check_variant_state(v, state)
     return Element(info, variant, state, catalog.shape_set(info.name))
 
 

@@ -152,6 +152,10 @@ class Formulation:
     description: str = ""
     source: str = ""
     notes: tuple[str, ...] = field(default=())
+    #: optional strain recovery for analyses: ``strain(point) -> (S_u, S_a)`` such that the
+    #: strain the formulation works with is S_u u + S_a alpha (alpha: the condensed internal
+    #: unknowns; S_a None when there are none).  None means the plain B u.
+    strain: Callable[[Point], tuple] | None = field(default=None, compare=False)
 
     def rules(self) -> tuple[str, ...]:
         return tuple(dict.fromkeys(t.rule for t in self.terms))

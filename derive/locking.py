@@ -1,0 +1,885 @@
+"""Bending locking of an element, in closed form, by the energy route.
+
+The test problem: a 2a x 2b rectangle (aspect ratio r = a/b) under pure bending, the linear
+stress sigma_xx = sigma0 y / b, sigma_yy = tau_xy = 0 (equilibrated, traction-free on
+y = +-b, a linear traction on the two ends).
+
+* continuum: that stress field is the exact solution; its strain energy is
+  U_c = 1/2 int sigma^T C sigma dV with C = D^-1 of the plane state (plane strain: the 3-D
+  energy with eps_zz = 0, so C_xx = (1 - nu^2) / E).
+* element: the consistent nodal load of the same stress, f = int B^T sigma dV (equal to the
+  boundary integral of N^T t because div sigma = 0), applied to the element's condensed
+  stiffness K (any variant: the :class:`~derive.formulations.base.Formulation` structure,
+  each term integrated with its own rule), supported statically determinately (u, v at the
+  corner (-a, -b), v at (a, -b)); U_e = 1/2 f^T u.
+* ratio = U_e / U_c.  For one load pattern the work f^T u is the generalised end rotation,
+  so the energy ratio is theta_element / theta_continuum: 1 for an element that represents
+  pure bending, below 1 for a stiffer (locking) element, unbounded when the bending pattern
+  is a zero-energy mode (then ``zero_energy`` is reported instead of a number).
+
+The arithmetic is exact over the field Q(r, nu) (b = E = t = sigma0 = 1 without loss of
+generality: the ratio is dimensionless), through the exact polynomial route of
+:mod:`derive.stiffness`, so the result is a cancelled rational function of r and nu; no
+``simplify`` anywhere.  Triangles are analysed as the rectangle split into two along the
+diagonal from (-a, -b) to (a, b).
+
+Distortion: ``skew`` (parallelogram, side edges at angle theta from the vertical,
+c = b tan theta; exact and symbolic in c for given r and nu) and ``taper`` (trapezoid with
+bottom edge 2a (1 + tau) and top edge 2a (1 - tau); a quadrilateral is then not affine and
+is evaluated numerically with the element's own rule through the numeric batch route,
+while a two-triangle patch stays exact).
+"""
+from __future__ import annotations
+
+import math
+import time
+from dataclasses import dataclass, field
+from functools import lru_cache
+
+import numpy as np
+import sympy as sp
+from sympy.polys.domains import QQ
+from sympy.polys.matrices import DomainMatrix
+from sympy.polys.matrices.exceptions import DMNonInvertibleMatrixError
+
+from . import catalog, material, quadrature
+from .element import element
+from .errors import InputError
+from .formulations.base import B_op, Formulation, Point, Term
+from .geometry import Geometry, IsoMap
+from .stiffness import exact_blocks, numeric_stiffness
+from .symbols import eta, nu, r, x, xi, y
+
+PLANE_STATES = ("plane-stress", "plane-strain")
+#: symbols of the distortion parameters: c = b tan(skew angle), tau = taper
+c_sym = sp.Symbol("c")
+tau = sp.Symbol("tau")
+COMPONENTS = ("eps_xx", "eps_yy", "gamma_xy")
+SOURCE = ("energy route (derive.locking): strain energy of the element's exact response to the consistent "
+          "nodal load of sigma_xx = sigma0*y/b, over the continuum's")
+#: the published Q4 plane-stress result, for reference in reports and charts
+COOK_Q4 = (1 - nu ** 2) / (1 + (1 - nu) * r ** 2 / 2)
+COOK_SOURCE = "Cook, Malkus, Plesha & Witt, Concepts and Applications of FEA, 4th ed."
+
+
+# ---------------------------------------------------------------------------------------------
+# checks and small helpers
+
+def check(name: str, variant: str, state: str):
+    """The Element (validating names); refuses states without a bending ratio."""
+    el = element(name, variant, state)
+    if state not in PLANE_STATES:
+        raise InputError(f"the bending locking ratio is defined for the plane states ({', '.join(PLANE_STATES)}); "
+                         f"got {state!r}")
+    return el
+
+
+@lru_cache(maxsize=None)
+def compliance(state: str, nu_value=nu) -> sp.Matrix:
+    """C = D^-1 with E = 1 (entries cancelled)."""
+    return material.D(state, sp.Integer(1), nu_value).inv().applyfunc(sp.cancel)
+
+
+def _sigma_op(p: Point) -> sp.Matrix:
+    return sp.Matrix([p.at(p.imap.y), 0, 0])
+
+
+def _y_op(p: Point) -> sp.Matrix:
+    return sp.Matrix([[p.at(p.imap.y)]])
+
+
+def _identity3(p: Point) -> sp.Matrix:
+    return sp.eye(3)
+
+
+def _one(p: Point) -> sp.Matrix:
+    return sp.Matrix([[1]])
+
+
+#: the load f = int B^T sigma dV ("ua") and int y^2 dV ("aa") as a formulation, so they are
+#: integrated by the same exact route as the stiffness
+LOAD = Formulation(
+    variant="bending-load",
+    terms=(Term("ua", B_op, _identity3, _sigma_op, rule="exact", label="B^T sigma"),
+           Term("aa", _y_op, _one, _y_op, rule="exact", label="y^2")),
+    n_internal=1,
+    description="consistent load of the linear bending stress and the second moment of area",
+)
+
+
+_TRIANGLES = (((-1, -1), (1, -1), (1, 1)), ((-1, -1), (1, 1), (-1, 1)))
+
+
+def _ref_patch(name: str):
+    """Element node lists in the rectangle's normalised coordinates (X, Y) in [-1, 1]^2.
+
+    Returns (elements, nodes): per element the node positions (X, Y) of the undistorted patch
+    (which also identify the shared nodes), and the list of distinct nodes.
+    """
+    info = catalog.element_info(name)
+    shapes = catalog.shape_set(info.name)
+    if info.domain == "square":
+        elements = [tuple((sp.sympify(p), sp.sympify(q)) for p, q in shapes.nodes)]
+    else:
+        elements = []
+        for (X1, Y1), (X2, Y2), (X3, Y3) in _TRIANGLES:
+            elements.append(tuple((sp.Integer(X1) + (X2 - X1) * p + (X3 - X1) * q,
+                                   sp.Integer(Y1) + (Y2 - Y1) * p + (Y3 - Y1) * q) for p, q in shapes.nodes))
+    nodes: list = []
+    for el in elements:
+        for n in el:
+            if n not in nodes:
+                nodes.append(n)
+    return elements, nodes
+
+
+def _map_point(X, Y, r_v, c_v, tau_v):
+    """The distortion map of the patch (b = 1): x = r X (1 - tau Y) + c Y, y = Y."""
+    return sp.expand(r_v * X * (1 - tau_v * Y) + c_v * Y), sp.sympify(Y)
+
+
+def _element_coords(name: str, k: int, r_v, c_v, tau_v):
+    """Nodal coordinates of patch element k.  Quadrilaterals: the (bilinear) distortion map of
+    every node, which keeps edges straight and mid-side nodes at mid-edge; triangles: the
+    corners mapped, the other nodes by the triangle's own affine map (straight sides)."""
+    elements, _ = _ref_patch(name)
+    info = catalog.element_info(name)
+    if info.domain == "square":
+        pts = [_map_point(X, Y, r_v, c_v, tau_v) for X, Y in elements[k]]
+    else:
+        corners = [_map_point(sp.Integer(X), sp.Integer(Y), r_v, c_v, tau_v) for X, Y in _TRIANGLES[k]]
+        (x1, y1), (x2, y2), (x3, y3) = corners
+        pts = [(sp.expand(x1 + (x2 - x1) * p + (x3 - x1) * q), sp.expand(y1 + (y2 - y1) * p + (y3 - y1) * q))
+               for p, q in catalog.shape_set(info.name).nodes]
+    xs, ys = zip(*pts)
+    return tuple(xs), tuple(ys)
+
+
+def _field(*values):
+    syms = sorted({s for v in values for s in getattr(v, "free_symbols", set())}, key=lambda s: s.name)
+    return QQ.frac_field(*syms) if syms else QQ
+
+
+def _rational(v, what: str) -> sp.Expr:
+    if isinstance(v, sp.Basic):
+        return v
+    try:
+        f = float(v)
+    except (TypeError, ValueError):
+        raise InputError(f"{what}: {v!r} is not a number") from None
+    if not math.isfinite(f):
+        raise InputError(f"{what}: {v!r} is not a finite number")
+    return sp.Rational(repr(f)) if isinstance(v, float) else sp.nsimplify(v, rational=True)
+
+
+# ---------------------------------------------------------------------------------------------
+# the exact route
+
+@dataclass(frozen=True)
+class Response:
+    """The solved bending problem of one patch (exact field arithmetic)."""
+
+    ratio: sp.Expr | None
+    zero_energy: bool
+    field: object
+    element_data: tuple = field(default=(), compare=False)  # (imap, formulation, u_e, alpha) per element
+
+
+@lru_cache(maxsize=None)
+def _solve_exact(name: str, variant: str, state: str, r_v=r, nu_v=nu, c_v=sp.Integer(0), tau_v=sp.Integer(0)) -> Response:
+    el = check(name, variant, state)
+    form = el.formulation
+    elements, nodes = _ref_patch(el.info.name)
+    F = _field(r_v, nu_v, c_v, tau_v)
+    material_ = {"E": sp.Integer(1), "nu": nu_v, "t": sp.Integer(1)}
+    n = 2 * len(nodes)
+    Kg = [[F.zero] * n for _ in range(n)]
+    fg = [F.zero] * n
+    Iy = F.zero
+    per_element = []
+    for k, ref_nodes in enumerate(elements):
+        xs, ys = _element_coords(el.info.name, k, r_v, c_v, tau_v)
+        imap = IsoMap(el.shapes, Geometry("rectangle", xs, ys))
+        blocks = exact_blocks(form, imap, state, material_, lambda term: el.info.rule_name(term.rule))
+        blocks = {k: v.convert_to(F) for k, v in blocks.items()}
+        load = exact_blocks(LOAD, imap, state, material_, lambda term: None)
+        fe = load["ua"].convert_to(F)
+        Iy += load["aa"].convert_to(F).to_list()[0][0]
+        ndof = el.ndof
+        K = blocks.get("uu", DomainMatrix.zeros((ndof, ndof), F))
+        X = None
+        if form.n_internal:
+            X = blocks["aa"].lu_solve(blocks["ua"].transpose())
+            K = K - blocks["ua"] * X
+        dofs = [2 * nodes.index(nd) + k for nd in ref_nodes for k in (0, 1)]
+        Kl, fl = K.to_list(), fe.to_list()
+        for i, gi in enumerate(dofs):
+            fg[gi] += fl[i][0]
+            row = Kg[gi]
+            for j, gj in enumerate(dofs):
+                row[gj] += Kl[i][j]
+        per_element.append((imap, form, dofs, X))
+    group = _symmetry_group(elements, nodes, c_v, tau_v)
+    if not _invariant(Kg, fg, group):  # a formulation that breaks the symmetry: solve in full
+        group = [((1, 1), list(range(len(nodes))), 1)]
+    basis = _basis(group, n)
+    m = len(basis)
+    Kr = [[sum((sa * sb * Kg[i][j] for i, sa in ba for j, sb in bb), F.zero) for bb in basis] for ba in basis]
+    fr = [sum((sa * fg[i] for i, sa in ba), F.zero) for ba in basis]
+    Kf = DomainMatrix(Kr, (m, m), F)
+    ff = DomainMatrix([[v] for v in fr], (m, 1), F)
+    y_full = _solve_reduced(Kf, ff, _rigid_pivots(basis, nodes), F)
+    if y_full is None:
+        return Response(None, True, F, ())
+    u = DomainMatrix([[v] for v in y_full], (m, 1), F)
+    work = (ff.transpose() * u).to_list()[0][0]
+    C11 = F.from_sympy(compliance(state, nu_v)[0, 0])
+    ratio = F.to_sympy(work / (C11 * Iy))
+    yl = [row[0] for row in u.to_list()]
+    ul = [F.zero] * n
+    for ba, yv in zip(basis, yl):
+        for i, sa in ba:
+            ul[i] += sa * yv
+    data = []
+    for imap, form_, dofs, X in per_element:
+        ue = [ul[d] for d in dofs]
+        alpha = None
+        if X is not None:
+            alpha = [-sum((X.to_list()[k][j] * ue[j] for j in range(len(ue))), F.zero) for k in range(X.shape[0])]
+        data.append((imap, form_, tuple(ue), None if alpha is None else tuple(alpha)))
+    return Response(sp.cancel(ratio), False, F, tuple(data))
+
+
+#: reflections of the patch: (sign of X, sign of Y) and the character of the bending pattern
+#: (u odd in X and Y, v even: symmetric under X -> -X, antisymmetric under Y -> -Y)
+_REFLECTIONS = {"x": ((-1, 1), 1), "y": ((1, -1), -1), "xy": ((-1, -1), -1)}
+
+
+def _symmetry_group(elements, nodes, c_v, tau_v) -> list:
+    """Signed node permutations that map the (distorted) patch onto itself.
+
+    Each entry: ((sign_u, sign_v), node permutation, character).  The identity is always in;
+    a reflection is kept when it maps every element's node set onto an element's node set and
+    the distortion respects it (skew c keeps only the half-turn, taper tau only X -> -X).
+    """
+    group = [((1, 1), list(range(len(nodes))), 1)]
+    allowed = {"x": c_v == 0, "y": c_v == 0 and tau_v == 0, "xy": tau_v == 0}
+    sets = [frozenset(el) for el in elements]
+    for key, ((sx, sy), chi) in _REFLECTIONS.items():
+        if not allowed[key]:
+            continue
+        image = [(sx * X, sy * Y) for X, Y in nodes]
+        if any(p not in nodes for p in image):
+            continue
+        if any(frozenset((sx * X, sy * Y) for X, Y in el) not in sets for el in elements):
+            continue
+        group.append(((sx, sy), [nodes.index(p) for p in image], chi))
+    return group
+
+
+def _rigid_pivots(basis, nodes) -> list[int]:
+    """Coordinates of the reduced basis to hold at zero so that no rigid-body mode is left.
+
+    The plane rigid modes (two translations, rotation about the centre) are projected on the
+    (orthogonal, sparse) basis; those lying in the subspace form the rows of a small rational
+    matrix whose pivot columns are a statically determinate choice of supports.
+    """
+    n = 2 * len(nodes)
+    modes = [[1 if k % 2 == 0 else 0 for k in range(n)], [0 if k % 2 == 0 else 1 for k in range(n)],
+             [(-nodes[k // 2][1] if k % 2 == 0 else nodes[k // 2][0]) for k in range(n)]]
+    rows = []
+    for mode in modes:
+        coeff = [sp.Rational(sum(sa * mode[i] for i, sa in ba), sum(sa * sa for _, sa in ba)) for ba in basis]
+        back = [0] * n
+        for ba, cf in zip(basis, coeff):
+            for i, sa in ba:
+                back[i] += cf * sa
+        if any(cf != 0 for cf in coeff) and all(sp.sympify(back[i] - mode[i]) == 0 for i in range(n)):
+            rows.append(coeff)
+    if not rows:
+        return []
+    _, pivots = sp.Matrix(rows).rref()
+    return list(pivots)
+
+
+def _solve_reduced(K: DomainMatrix, f: DomainMatrix, fixed: list[int], F):
+    """Solve the reduced system with the coordinates ``fixed`` held at zero.
+
+    Returns the full coordinate list, or None when the load excites a zero-energy mode
+    (the system is inconsistent).  A further singularity (spurious modes) is handled with the
+    row-reduced form: its free columns are held at zero too, after checking consistency.
+    """
+    m = K.shape[0]
+    Kl, fl = K.to_list(), [row[0] for row in f.to_list()]
+
+    def attempt(fix):
+        free = [i for i in range(m) if i not in fix]
+        A = DomainMatrix([[Kl[i][j] for j in free] for i in free], (len(free), len(free)), F)
+        b = DomainMatrix([[fl[i]] for i in free], (len(free), 1), F)
+        sol = [row[0] for row in A.lu_solve(b).to_list()]
+        y = [F.zero] * m
+        for i, v in zip(free, sol):
+            y[i] = v
+        return y
+
+    try:
+        return attempt(fixed)
+    except DMNonInvertibleMatrixError:
+        pass
+    null = K.nullspace()
+    if any(row[0] != F.zero for row in (null * f).to_list()):
+        return None
+    _, pivots = K.rref()
+    return attempt([i for i in range(m) if i not in pivots])
+
+
+def _invariant(Kg, fg, group) -> bool:
+    """K and f commute with every signed permutation of the group (character chi for f)."""
+    for (sx, sy), perm, chi in group[1:]:
+        sign = [sx if k % 2 == 0 else sy for k in range(len(fg))]
+        dof = [2 * perm[k // 2] + k % 2 for k in range(len(fg))]
+        for i in range(len(fg)):
+            if fg[dof[i]] != chi * sign[i] * fg[i]:
+                return False
+            row, grow = Kg[i], Kg[dof[i]]
+            for j in range(len(fg)):
+                if grow[dof[j]] != sign[i] * sign[j] * row[j]:
+                    return False
+    return True
+
+
+def _basis(group, n: int) -> list:
+    """Basis of the nodal vectors that transform like the bending pattern (sparse columns)."""
+    out, seen = [], set()
+    for j in range(n):
+        vec: dict = {}
+        for (sx, sy), perm, chi in group:
+            s_ = sx if j % 2 == 0 else sy
+            k = 2 * perm[j // 2] + j % 2
+            vec[k] = vec.get(k, 0) + chi * s_
+        vec = {k: v for k, v in vec.items() if v}
+        if not vec:
+            continue
+        first = min(vec)
+        sgn = 1 if vec[first] > 0 else -1
+        key = tuple(sorted((k, sgn * v) for k, v in vec.items()))
+        if key in seen:
+            continue
+        seen.add(key)
+        g = math.gcd(*[abs(v) for v in vec.values()])
+        out.append([(k, sgn * v // g) for k, v in sorted(vec.items())])
+    return out
+
+
+# ---------------------------------------------------------------------------------------------
+# public: closed form and its analysis
+
+def locking_ratio(name: str, variant: str = "full", state: str = "plane-stress") -> sp.Expr:
+    """theta_element / theta_continuum of a 2a x 2b rectangle in pure bending, in r = a/b and nu.
+
+    A cancelled rational function (exact); ``sympy.oo`` when the bending pattern is a
+    zero-energy mode of the element (the element offers no stiffness against it).
+    """
+    res = _solve_exact(catalog.element_info(name).name, variant, state)
+    return sp.oo if res.zero_energy else res.ratio
+
+
+@dataclass(frozen=True)
+class Analysis:
+    element: str
+    variant: str
+    state: str
+    ratio: sp.Expr | None
+    zero_energy: bool
+    strain: dict | None
+    seconds: float
+
+    @property
+    def formula(self) -> str | None:
+        return None if self.ratio is None else str(self.ratio)
+
+    def display(self) -> str:
+        return "zero-energy mode" if self.ratio is None else str(sp.factor(self.ratio))
+
+
+@lru_cache(maxsize=None)
+def analyse(name: str, variant: str = "full", state: str = "plane-stress") -> Analysis:
+    """Closed-form ratio plus the spurious-strain report (cached)."""
+    t0 = time.perf_counter()
+    name = catalog.element_info(name).name
+    res = _solve_exact(name, variant, state)
+    strain = None if res.zero_energy else strain_report(res, state)
+    return Analysis(name, variant, state, res.ratio, res.zero_energy, strain, time.perf_counter() - t0)
+
+
+def strain_report(res: Response, state: str) -> dict:
+    """Element strain field of the bending response against the continuum's, per component.
+
+    Strains in units of the continuum's peak bending strain eps0 = C_xx sigma0 (at y = b),
+    coordinates in units of b.  A component is *spurious* where the element carries a term
+    (a monomial in x, y) the continuum does not, *missing* where the continuum has a term the
+    element lacks.
+    """
+    F = res.field
+    C = compliance(state, nu)
+    cont = [sp.cancel(C[k, 0] / C[0, 0]) * y for k in range(3)]
+    per_element = []
+    X_, Y_ = sp.symbols("X_ Y_")
+    for imap, form, ue, alpha in res.element_data:
+        pt = Point(imap, state, xi, eta, E=sp.Integer(1), nu=nu, t=sp.Integer(1))
+        Su, Sa = form.strain(pt) if form.strain is not None else (pt.B, None)
+        u = sp.Matrix([F.to_sympy(v) for v in ue])
+        eps = Su * u
+        if Sa is not None and alpha is not None:
+            eps += Sa * sp.Matrix([F.to_sympy(v) for v in alpha])
+        sol = sp.solve([X_ - imap.x, Y_ - imap.y], [xi, eta], dict=True)[0]
+        back = {xi: sol[xi].subs({X_: x, Y_: y}), eta: sol[eta].subs({X_: x, Y_: y})}
+        per_element.append([sp.cancel(sp.expand(e.subs(back)) / C[0, 0]) for e in eps])
+    comps = {}
+    spurious, missing = [], []
+    for k, label in enumerate(COMPONENTS):
+        e_parts = []  # distinct fields over the patch (two triangles may differ)
+        for fields in per_element:
+            if not any(sp.cancel(fields[k] - q) == 0 for q in e_parts):
+                e_parts.append(fields[k])
+        e_support = set()
+        for part in e_parts:
+            e_support |= _support(part)
+        c_support = _support(cont[k])
+        extra = sorted(str(m) for m in e_support - c_support)
+        lack = sorted(str(m) for m in c_support - e_support)
+        comps[label] = {"element": " | ".join(str(sp.factor(p)) for p in e_parts), "continuum": str(cont[k]),
+                        "spurious_terms": extra, "missing_terms": lack}
+        if extra:
+            spurious.append(label)
+        if lack:
+            missing.append(label)
+    summary = []
+    if spurious:
+        summary.append("spurious " + ", ".join(f"{c} ({', '.join(comps[c]['spurious_terms'])})" for c in spurious))
+    if missing:
+        summary.append("missing " + ", ".join(f"{c} ({', '.join(comps[c]['missing_terms'])})" for c in missing))
+    return {"units": "strain / eps0 (eps0 = C_xx*sigma0, the continuum's peak bending strain); x, y in units of b",
+            "components": comps, "spurious": spurious, "missing": missing,
+            "summary": "; ".join(summary) if summary else "none: the element carries exactly the continuum's strain terms"}
+
+
+def _support(expr) -> set:
+    expr = sp.expand(sp.cancel(expr))
+    if expr == 0:
+        return set()
+    num, den = sp.fraction(sp.together(expr))
+    poly = sp.Poly(sp.expand(num), x, y)
+    return {x ** i * y ** j for (i, j), coeff in poly.terms() if coeff != 0}
+
+
+# ---------------------------------------------------------------------------------------------
+# evaluation, tolerance, volumetric index
+
+@lru_cache(maxsize=None)
+def ratio_function(name: str, variant: str = "full", state: str = "plane-stress"):
+    """Vectorised float function (r, nu) -> ratio from the closed form (lambdify, cached).
+
+    A zero-energy element gives a function returning +inf everywhere.
+    """
+    expr = locking_ratio(name, variant, state)
+    if expr is sp.oo:
+        return lambda rr, nn: np.full(np.broadcast(np.asarray(rr, float), np.asarray(nn, float)).shape, np.inf)
+    f = sp.lambdify((r, nu), expr, "numpy")
+
+    def g(rr, nn):
+        rr, nn = np.asarray(rr, dtype=float), np.asarray(nn, dtype=float)
+        return np.broadcast_to(np.asarray(f(rr, nn), dtype=float), np.broadcast(rr, nn).shape)
+    return g
+
+
+def check_point(aspect=None, nu_value=None, state: str = "plane-stress"):
+    if aspect is not None:
+        if not math.isfinite(float(aspect)) or float(aspect) <= 0:
+            raise InputError(f"aspect ratio must be a positive number, got {aspect}")
+    if nu_value is not None:
+        material.check_material(state, None, float(nu_value))
+
+
+def evaluate(name: str, variant: str, state: str, aspect: float, nu_value: float) -> float | None:
+    check_point(aspect, nu_value, state)
+    expr = locking_ratio(name, variant, state)
+    if expr is sp.oo:
+        return None
+    return float(ratio_function(name, variant, state)(aspect, nu_value))
+
+
+def aspect_limit(name: str, variant: str, state: str, nu_value, tolerance) -> dict:
+    """Largest aspect ratio r* with |ratio(r) - 1| <= tolerance for every 0 < r <= r*.
+
+    Exact: the band edges ratio = 1 -+ tol are polynomial equations in r (ratio rational), so
+    r* is the smallest positive real root at which the ratio leaves the band; its closed form
+    in nu is given where sympy solves the equation in radicals (with symbolic nu), else the
+    root is bracketed and refined numerically (reported as such).
+    """
+    tol = _rational(tolerance, "--tolerance")
+    if not 0 < tol < 1:
+        raise InputError(f"--tolerance must be between 0 and 1 (e.g. 0.05), got {tolerance}")
+    check_point(None, float(nu_value), state)
+    nu_q = _rational(nu_value, "--nu")
+    expr = locking_ratio(name, variant, state)
+    out = {"nu": float(nu_value), "tolerance": float(tol)}
+    if expr is sp.oo:
+        return {**out, "aspect_limit": None, "method": "zero-energy mode: no finite ratio"}
+    e = sp.cancel(expr.subs(nu, nu_q))
+    g = sp.lambdify(r, e, "numpy")
+
+    def inside(rv):
+        return abs(float(g(rv)) - 1) <= float(tol) * (1 + 1e-12)
+
+    at0 = _limit_r0(e)
+    out["ratio_at_r0"] = float(at0)
+    if not e.has(r):
+        ok = abs(float(e) - 1) <= float(tol)
+        return {**out, "aspect_limit": math.inf if ok else 0.0, "unlimited": ok,
+                "method": "ratio independent of r"}
+    if abs(float(at0) - 1) > float(tol):
+        return {**out, "aspect_limit": 0.0, "unlimited": False,
+                "method": f"ratio is {float(at0):.4g} already as r -> 0: outside the tolerance at every aspect ratio"}
+    roots = []
+    for edge in (1 - tol, 1 + tol):
+        num = sp.fraction(sp.cancel(e - edge))[0]
+        if num.has(r):
+            for rt in sp.Poly(num, r).real_roots():
+                v = float(rt)
+                if v > 0:
+                    roots.append((v, edge, rt))
+    roots.sort(key=lambda t: t[0])
+    for v, edge, rt in roots:
+        if not inside(v * (1 + 1e-7) + 1e-12):
+            closed = _closed_form_limit(expr, edge, nu_q, v)
+            res = {**out, "aspect_limit": v, "unlimited": False, "edge": float(edge),
+                   "method": "closed form" if closed else "exact polynomial root"}
+            if closed:
+                res["closed_form"] = closed
+            return res
+    # no exit: check far out (the ratio may approach a limit inside the band)
+    return {**out, "aspect_limit": math.inf, "unlimited": True, "method": "ratio stays within the tolerance for all r"}
+
+
+def _limit_r0(e):
+    num, den = sp.fraction(sp.cancel(e))
+    d0 = den.subs(r, 0)
+    if d0 != 0:
+        return num.subs(r, 0) / d0
+    return sp.limit(e, r, 0, "+")
+
+
+@lru_cache(maxsize=None)
+def _closed_form_solutions(expr, edge):
+    num = sp.fraction(sp.cancel(expr - edge))[0]
+    try:
+        deg = sp.Poly(num, r).degree()
+    except sp.PolynomialError:
+        return ()
+    if deg > 4:
+        return ()
+    try:
+        return tuple(sp.solve(num, r))
+    except NotImplementedError:
+        return ()
+
+
+def _closed_form_limit(expr, edge, nu_q, value: float) -> str | None:
+    """A closed form r*(nu) for this band edge whose value at nu_q matches, as a string."""
+    for s in _closed_form_solutions(expr, edge):
+        try:
+            val = complex(s.subs(nu, nu_q).evalf(30))
+        except (TypeError, ValueError):
+            continue
+        if abs(val.imag) < 1e-12 and abs(val.real - value) <= 1e-9 * max(1.0, value):
+            return str(s)
+    return None
+
+
+def volumetric_index(name: str, variant: str, aspect: float = 1.0, nus=None) -> dict:
+    """Plane strain: the ratio's limit as nu -> 1/2 (in r and at ``aspect``) and the curve in nu."""
+    expr = locking_ratio(name, variant, "plane-strain")
+    nus = list(nus) if nus is not None else [0.0, 0.2, 0.3, 0.4, 0.45, 0.49, 0.499, 0.4999]
+    if expr is sp.oo:
+        return {"limit": None, "zero_energy": True}
+    num, den = sp.fraction(sp.cancel(expr))
+    half = sp.Rational(1, 2)
+    dh = den.subs(nu, half)
+    lim = sp.cancel(num.subs(nu, half) / dh) if dh != 0 else sp.limit(expr, nu, half, "-")
+    f = ratio_function(name, variant, "plane-strain")
+    lim_val = float(lim.subs(r, _rational(aspect, "--aspect"))) if lim.is_finite is not False else math.inf
+    return {"limit": str(lim), "aspect": float(aspect), "limit_at_aspect": lim_val,
+            "locks": bool(lim == 0), "curve": [[float(v), float(f(aspect, v))] for v in nus]}
+
+
+# ---------------------------------------------------------------------------------------------
+# distortion
+
+def _skew_c(angle_deg: float) -> float:
+    if not math.isfinite(angle_deg) or abs(angle_deg) >= 89.0:
+        raise InputError(f"skew angle must be between -89 and 89 degrees, got {angle_deg}")
+    return math.tan(math.radians(angle_deg))
+
+
+def _check_taper(value: float) -> None:
+    if not math.isfinite(value) or abs(value) >= 0.95:
+        raise InputError(f"taper must be between -0.95 and 0.95 (1 would collapse the top edge), got {value}")
+
+
+@lru_cache(maxsize=None)
+def skew_expression(name: str, variant: str, state: str, aspect, nu_value) -> sp.Expr | None:
+    """Exact ratio of the parallelogram, symbolic in c = b tan(skew angle), for given r and nu."""
+    res = _solve_exact(catalog.element_info(name).name, variant, state,
+                       _rational(aspect, "--aspect"), _rational(nu_value, "--nu"), c_sym, sp.Integer(0))
+    return None if res.zero_energy else res.ratio
+
+
+@lru_cache(maxsize=None)
+def _load_plan(name: str, state: str):
+    """Lambdified integrands of f_x = int dN/dx y det J and of y^2 det J, general coordinates."""
+    el = element(name, "full", state)
+    imap = el.map("general")
+    pt = Point(imap, state, xi, eta)
+    yy = imap.y
+    exprs = [sp.expand(pt.adjJ[0, 0] * u + pt.adjJ[0, 1] * v) * yy for u, v in zip(*pt.dN_ref)]
+    exprs.append(yy ** 2 * pt.detJ)
+    args = [xi, eta] + list(imap.geometry.xs) + list(imap.geometry.ys)
+    return sp.lambdify(args, exprs, "numpy", cse=True)
+
+
+def numeric_ratio(name: str, variant: str, state: str, xy, nu_value: float) -> np.ndarray:
+    """Ratio for a batch of single quadrilaterals (n, nodes, 2) by the numeric route.
+
+    K from :meth:`Element.numeric_stiffness` (the element's own rules, float64); the load
+    and the second moment by a 6 x 6 Gauss rule (exact for these polynomial integrands).
+    NaN marks a zero-energy bending response.
+    """
+    el = check(name, variant, state)
+    if el.info.domain != "square":
+        raise InputError("numeric distortion ratios are for quadrilaterals (triangles are evaluated exactly)")
+    xy = np.asarray(xy, dtype=float)
+    if xy.ndim == 2:
+        xy = xy[None]
+    nb, nn = xy.shape[0], xy.shape[1]
+    K = numeric_stiffness(el.info.name, variant, state, xy, 1.0, float(nu_value), 1.0)
+    pts, wts = quadrature.gauss_square(6).numeric()
+    plan = _load_plan(el.info.name, state)
+    args = [pts[:, 0][:, None], pts[:, 1][:, None]] + [xy[None, :, i, 0] for i in range(nn)] + \
+        [xy[None, :, i, 1] for i in range(nn)]
+    vals = [np.broadcast_to(np.asarray(v, dtype=float), (len(wts), nb)) for v in plan(*args)]
+    f = np.zeros((nb, 2 * nn))
+    for i in range(nn):
+        f[:, 2 * i] = wts @ vals[i]
+    Iy = wts @ vals[-1]
+    free = [i for i in range(2 * nn) if i not in (0, 1, 3)]
+    Kf = K[:, free][:, :, free]
+    ff = f[:, free]
+    out = np.empty(nb)
+    C11 = 1.0 if state == "plane-stress" else 1.0 - float(nu_value) ** 2
+    for k in range(nb):
+        w, V = np.linalg.eigh(Kf[k])
+        tiny = w < 1e-10 * w.max()
+        proj = V.T @ ff[k]
+        if np.any(np.abs(proj[tiny]) > 1e-8 * np.linalg.norm(ff[k])):
+            out[k] = np.nan
+            continue
+        keep = ~tiny
+        work = float(np.sum(proj[keep] ** 2 / w[keep]))
+        out[k] = work / (C11 * Iy[k])
+    return out
+
+
+def distorted_nodes(name: str, kind: str, value: float, aspect: float) -> np.ndarray:
+    """Nodal coordinates of the distorted element (b = 1): skew angle in degrees, or taper."""
+    if kind == "skew":
+        cv, tv = _skew_c(value), 0.0
+    elif kind == "taper":
+        _check_taper(value)
+        cv, tv = 0.0, value
+    else:
+        raise InputError(f"unknown distortion {kind!r}; allowed: skew=DEGREES, taper=FRACTION")
+    info = catalog.element_info(name)
+    if info.domain != "square":
+        raise InputError("distorted_nodes is for quadrilaterals; triangles are analysed as a two-element patch")
+    elements, _ = _ref_patch(info.name)
+    return np.array([[aspect * float(X) * (1 - tv * float(Y)) + cv * float(Y), float(Y)] for X, Y in elements[0]])
+
+
+def distortion_curve(name: str, variant: str, state: str, kind: str, values, aspect: float = 1.0,
+                     nu_value: float = 0.3) -> tuple[np.ndarray, str]:
+    """Ratio over a range of distortion values; returns (ratios, method)."""
+    el = check(name, variant, state)
+    check_point(aspect, nu_value, state)
+    values = np.asarray(values, dtype=float)
+    if kind == "skew":
+        for v in values:
+            _skew_c(float(v))
+        expr = skew_expression(el.info.name, variant, state, _rational(float(aspect), "--aspect"),
+                               _rational(float(nu_value), "--nu"))
+        if expr is None:
+            return np.full(values.shape, np.nan), "exact, symbolic in c (zero-energy mode)"
+        f = sp.lambdify(c_sym, expr, "numpy")
+        cs = np.tan(np.radians(values))
+        return np.broadcast_to(np.asarray(f(cs), dtype=float), values.shape).copy(), "exact, symbolic in c = b tan(skew)"
+    if kind != "taper":
+        raise InputError(f"unknown distortion {kind!r}; allowed: skew, taper")
+    for v in values:
+        _check_taper(float(v))
+    if el.info.domain == "square":
+        xy = np.stack([distorted_nodes(el.info.name, "taper", float(v), aspect) for v in values])
+        return numeric_ratio(el.info.name, variant, state, xy, nu_value), "numeric, element's own rule (float64)"
+    res = _solve_exact(el.info.name, variant, state, _rational(float(aspect), "--aspect"),
+                       _rational(float(nu_value), "--nu"), sp.Integer(0), tau)
+    if res.zero_energy:
+        return np.full(values.shape, np.nan), "exact (zero-energy mode)"
+    f = sp.lambdify(tau, res.ratio, "numpy")
+    return np.broadcast_to(np.asarray(f(values), dtype=float), values.shape).copy(), "exact, symbolic in tau"
+
+
+def distortion(name: str, variant: str, state: str, kind: str, value: float, aspect: float = 1.0,
+               nu_value: float = 0.3) -> dict:
+    """Ratio of one distorted shape, with the undistorted ratio beside it."""
+    vals, method = distortion_curve(name, variant, state, kind, [value], aspect, nu_value)
+    base = evaluate(name, variant, state, aspect, nu_value)
+    out = {"kind": kind, "value": float(value), "units": "degrees" if kind == "skew" else "fraction of a",
+           "aspect": float(aspect), "nu": float(nu_value), "ratio": None if np.isnan(vals[0]) else float(vals[0]),
+           "zero_energy": bool(np.isnan(vals[0])), "undistorted_ratio": base, "method": method}
+    if kind == "skew":
+        expr = skew_expression(catalog.element_info(name).name, variant, state, _rational(float(aspect), "--aspect"),
+                               _rational(float(nu_value), "--nu"))
+        if expr is not None and sp.count_ops(expr) < 400:
+            out["formula_in_c"] = str(sp.factor(expr))
+    return out
+
+
+def parse_distortion(text: str) -> tuple[str, float]:
+    """``skew=30`` (degrees) or ``taper=0.2`` -> (kind, value)."""
+    kind, eq, value = (text or "").partition("=")
+    kind = kind.strip().lower()
+    if not eq or kind not in ("skew", "taper"):
+        raise InputError(f"--distortion {text!r}: write skew=DEGREES (e.g. skew=30) or taper=FRACTION (e.g. taper=0.2)")
+    try:
+        v = float(value)
+    except ValueError:
+        raise InputError(f"--distortion {text!r}: {value!r} is not a number") from None
+    if kind == "skew":
+        _skew_c(v)
+    else:
+        _check_taper(v)
+    return kind, v
+
+
+# ---------------------------------------------------------------------------------------------
+# report, demo section, benchmark
+
+def report(name: str, variant: str = "full", state: str = "plane-stress", aspect=None, nu_value=None,
+           tolerance=None, nus=None, distortion_spec: str | None = None) -> dict:
+    """Everything ``derive locking`` prints, as a JSON-ready dict."""
+    check(name, variant, state)
+    check_point(aspect, nu_value, state)
+    an = analyse(name, variant, state)
+    out = {"element": an.element, "variant": variant, "state": state,
+           "aspect": None if aspect is None else float(aspect), "nu": None if nu_value is None else float(nu_value),
+           "ratio": None, "zero_energy": an.zero_energy, "formula": an.formula,
+           "formula_display": an.display(), "symbols": {"r": "a/b (2a along the bending axis x, 2b deep)",
+                                                          "nu": "Poisson's ratio"},
+           "source": SOURCE, "seconds": round(an.seconds, 3)}
+    if aspect is not None and nu_value is not None:
+        out["ratio"] = evaluate(name, variant, state, float(aspect), float(nu_value))
+    out["spurious_strain"] = an.strain
+    if tolerance is not None:
+        nus_ = list(nus) if nus else ([float(nu_value)] if nu_value is not None else [0.0, 0.3])
+        out["tolerance"] = {"tolerance": float(tolerance),
+                            "limits": [aspect_limit(name, variant, state, v, tolerance) for v in nus_]}
+    if state == "plane-strain" and not an.zero_energy:
+        out["volumetric"] = volumetric_index(name, variant, 1.0 if aspect is None else float(aspect))
+    if distortion_spec:
+        kind, value = parse_distortion(distortion_spec)
+        out["distortion"] = distortion(name, variant, state, kind, value, 1.0 if aspect is None else float(aspect),
+                                       0.3 if nu_value is None else float(nu_value))
+    return out
+
+
+def demo_section(outdir) -> dict:
+    """Locking of the candidate elements at the transfer beam's aspect ratio, with charts."""
+    from pathlib import Path
+
+    from . import charts
+    from .demo import SCENARIO
+    from .output import emit_json, write_atomic
+    outdir = Path(outdir)
+    nu_b = SCENARIO["nu"]
+    aspect = 2.0  # 0.6 m x 0.3 m elements of the 12 x 4 candidate mesh: a/b = 2
+    lines, table = [], []
+    for name, variant in (("Q4", "full"), ("Q4", "incompatible-centred"), ("Q4", "eas4"), ("Q4", "hybrid5"),
+                          ("Q4", "reduced"), ("Q8", "full"), ("Q9", "full")):
+        an = analyse(name, variant, "plane-stress")
+        val = evaluate(name, variant, "plane-stress", aspect, nu_b)
+        lim = aspect_limit(name, variant, "plane-stress", nu_b, 0.05)
+        table.append({"element": name, "variant": variant, "formula": an.formula, "ratio": val, "limit_5pct": lim})
+        if val is None:
+            lines.append(f"{name} {variant}: bending is a zero-energy (hourglass) mode: unusable alone")
+        else:
+            lim_txt = "any aspect ratio" if lim.get("unlimited") else (
+                "none" if lim["aspect_limit"] == 0 else f"a/b <= {lim['aspect_limit']:.3g}")
+            lines.append(f"{name} {variant}: theta/theta_exact = {an.display()}; at a/b = {aspect:g}, nu = {nu_b}: "
+                         f"{val:.4f}; within 5 %: {lim_txt}")
+    q4 = analyse("Q4", "full", "plane-stress")
+    if q4.strain:
+        lines.append(f"Q4 full spurious strain in bending: {q4.strain['summary']}")
+    files = [write_atomic(outdir / "locking-table.json", emit_json(table) + "\n")]
+    files.append(charts.save(charts.locking_chart([("Q4", "full"), ("Q4", "incompatible-centred"), ("Q8", "full")],
+                                                  "plane-stress", [0.0, nu_b, 0.49], (1.0, 20.0), 0.05),
+                             outdir / "locking-ratio.png"))
+    files.append(charts.save(charts.contour_chart("Q4", "full", "plane-strain", (1.0, 20.0), (0.0, 0.499)),
+                             outdir / "locking-contour-q4-plane-strain.png"))
+    files.append(charts.save(charts.distortion_chart([("Q4", "full"), ("Q4", "incompatible"),
+                                                      ("Q4", "incompatible-centred"), ("Q4", "eas4")],
+                                                     "plane-stress", "taper", (0.0, 0.6), 1.0, nu_b),
+                             outdir / "locking-distortion-taper.png"))
+    lines.append("charts: ratio vs aspect (Q4 full / incompatible-centred / Q8), contour of Q4 full in plane strain, "
+                 "taper sensitivity of the Q4 variants")
+    return {"title": "Bending locking and the choice of element", "lines": lines,
+            "files": [str(Path(f).name) for f in files]}
+
+
+def _clear_caches() -> None:
+    from . import stiffness
+    for fn in (_solve_exact, analyse, ratio_function, skew_expression, compliance, element, catalog.shape_set,
+               stiffness.rule_moment):
+        fn.cache_clear()
+
+
+def benchmark(quick: bool = False) -> dict:
+    """Closed-form ratio per element (caches cleared) and a 200 x 200 chart grid, lambdify vs subs."""
+    cases = [("Q4", "full"), ("Q4", "incompatible-centred"), ("Q4", "eas4"), ("Q8", "full")]
+    if not quick:
+        cases += [("Q4", "hybrid5"), ("Q9", "full"), ("T6", "full")]
+    rows, lines = [], []
+    for name, variant in cases:
+        _clear_caches()
+        t0 = time.perf_counter()
+        locking_ratio(name, variant, "plane-stress")
+        dt = time.perf_counter() - t0
+        rows.append({"element": name, "variant": variant, "seconds": dt, "target_s": 5.0})
+        lines.append(f"closed-form ratio {name} {variant} (plane stress, caches cleared): {dt:.2f} s (target < 5 s)")
+    n = 60 if quick else 200
+    expr = locking_ratio("Q4", "full", "plane-strain")
+    ratio_function.cache_clear()
+    rr, nn = np.meshgrid(np.logspace(0, math.log10(20), n), np.linspace(0, 0.499, n))
+    t0 = time.perf_counter()
+    Z = ratio_function("Q4", "full", "plane-strain")(rr, nn)
+    t_lam = time.perf_counter() - t0
+    sample = 100 if not quick else 20
+    t0 = time.perf_counter()
+    for k in range(sample):
+        i, j = divmod(k * 37 % (n * n), n)
+        float(expr.subs({r: rr[i, j], nu: nn[i, j]}))
+    t_sub = (time.perf_counter() - t0) / sample * n * n
+    lines.append(f"{n} x {n} (aspect, nu) grid from the closed form: lambdify {t_lam * 1000:.1f} ms (incl. lambdify; "
+                 f"target < 1 s) vs point-by-point subs ~{t_sub:.1f} s (extrapolated from {sample} points), "
+                 f"ratio ~{t_sub / t_lam:.0f}x")
+    assert np.all(np.isfinite(Z))
+    return {"rows": rows, "grid": {"n": n, "lambdify_s": t_lam, "subs_estimate_s": t_sub},
+            "lines": lines, "command": "derive perf --locking"}
