@@ -23,11 +23,19 @@ generality: the ratio is dimensionless), through the exact polynomial route of
 ``simplify`` anywhere.  Triangles are analysed as the rectangle split into two along the
 diagonal from (-a, -b) to (a, b).
 
-Distortion: ``skew`` (parallelogram, side edges at angle theta from the vertical,
-c = b tan theta; exact and symbolic in c for given r and nu) and ``taper`` (trapezoid with
-bottom edge 2a (1 + tau) and top edge 2a (1 - tau); a quadrilateral is then not affine and
-is evaluated numerically with the element's own rule through the numeric batch route,
-while a two-triangle patch stays exact).
+Distortion (the same energy route on the distorted shape; sigma = sigma0 y / b is the exact
+solution of any shape loaded by its tractions sigma n, so the ratio stays defined):
+
+* ``skew=THETA``: parallelogram, end edges at THETA degrees from the vertical,
+  x = a X + c Y with c = b tan THETA; affine, so exact and symbolic in c (given r and nu);
+* ``taper=TAU``: a tapered beam segment, depth 2b (1 - TAU) at the left end and
+  2b (1 + TAU) at the right end (y = b Y (1 + TAU X)), ends vertical;
+* ``trapezoid=S``: horizontal top and bottom edges of lengths 2a (1 - S) and 2a (1 + S),
+  leaning ends (x = a X (1 - S Y)).
+
+A tapered or trapezoidal quadrilateral is not affine: it is evaluated numerically with the
+element's own rules through the numeric batch route (float64); a two-triangle patch stays
+affine and exact.
 """
 from __future__ import annotations
 
@@ -51,9 +59,16 @@ from .stiffness import exact_blocks, numeric_stiffness
 from .symbols import eta, nu, r, x, xi, y
 
 PLANE_STATES = ("plane-stress", "plane-strain")
-#: symbols of the distortion parameters: c = b tan(skew angle), tau = taper
+#: symbols of the distortion parameters: c = b tan(skew angle), s = trapezoid, tau = taper
 c_sym = sp.Symbol("c")
+s_sym = sp.Symbol("s")
 tau = sp.Symbol("tau")
+#: distortion kinds: (units, symbol, description)
+DISTORTIONS = {
+    "skew": ("degrees", c_sym, "parallelogram, ends at the angle from the vertical (c = b tan angle)"),
+    "taper": ("fraction", tau, "depth 2b(1 - tau) at the left end, 2b(1 + tau) at the right end, ends vertical"),
+    "trapezoid": ("fraction", s_sym, "top edge 2a(1 - s), bottom edge 2a(1 + s), ends leaning"),
+}
 COMPONENTS = ("eps_xx", "eps_yy", "gamma_xy")
 SOURCE = ("energy route (derive.locking): strain energy of the element's exact response to the consistent "
           "nodal load of sigma_xx = sigma0*y/b, over the continuum's")
@@ -133,21 +148,22 @@ def _ref_patch(name: str):
     return elements, nodes
 
 
-def _map_point(X, Y, r_v, c_v, tau_v):
-    """The distortion map of the patch (b = 1): x = r X (1 - tau Y) + c Y, y = Y."""
-    return sp.expand(r_v * X * (1 - tau_v * Y) + c_v * Y), sp.sympify(Y)
+def _map_point(X, Y, r_v, dist):
+    """The distortion map of the patch (b = 1): x = r X (1 - s Y) + c Y, y = Y (1 + tau X)."""
+    c_v, s_v, tau_v = dist
+    return sp.expand(r_v * X * (1 - s_v * Y) + c_v * Y), sp.expand(Y * (1 + tau_v * X))
 
 
-def _element_coords(name: str, k: int, r_v, c_v, tau_v):
+def _element_coords(name: str, k: int, r_v, dist):
     """Nodal coordinates of patch element k.  Quadrilaterals: the (bilinear) distortion map of
     every node, which keeps edges straight and mid-side nodes at mid-edge; triangles: the
     corners mapped, the other nodes by the triangle's own affine map (straight sides)."""
     elements, _ = _ref_patch(name)
     info = catalog.element_info(name)
     if info.domain == "square":
-        pts = [_map_point(X, Y, r_v, c_v, tau_v) for X, Y in elements[k]]
+        pts = [_map_point(X, Y, r_v, dist) for X, Y in elements[k]]
     else:
-        corners = [_map_point(sp.Integer(X), sp.Integer(Y), r_v, c_v, tau_v) for X, Y in _TRIANGLES[k]]
+        corners = [_map_point(sp.Integer(X), sp.Integer(Y), r_v, dist) for X, Y in _TRIANGLES[k]]
         (x1, y1), (x2, y2), (x3, y3) = corners
         pts = [(sp.expand(x1 + (x2 - x1) * p + (x3 - x1) * q), sp.expand(y1 + (y2 - y1) * p + (y3 - y1) * q))
                for p, q in catalog.shape_set(info.name).nodes]
@@ -185,12 +201,16 @@ class Response:
     element_data: tuple = field(default=(), compare=False)  # (imap, formulation, u_e, alpha) per element
 
 
+_NO_DISTORTION = (sp.Integer(0), sp.Integer(0), sp.Integer(0))
+
+
 @lru_cache(maxsize=None)
-def _solve_exact(name: str, variant: str, state: str, r_v=r, nu_v=nu, c_v=sp.Integer(0), tau_v=sp.Integer(0)) -> Response:
+def _solve_exact(name: str, variant: str, state: str, r_v=r, nu_v=nu, dist=_NO_DISTORTION) -> Response:
+    """Solve the bending problem exactly; ``dist`` = (c, s, tau), numbers or symbols."""
     el = check(name, variant, state)
     form = el.formulation
     elements, nodes = _ref_patch(el.info.name)
-    F = _field(r_v, nu_v, c_v, tau_v)
+    F = _field(r_v, nu_v, *dist)
     material_ = {"E": sp.Integer(1), "nu": nu_v, "t": sp.Integer(1)}
     n = 2 * len(nodes)
     Kg = [[F.zero] * n for _ in range(n)]
@@ -198,7 +218,7 @@ def _solve_exact(name: str, variant: str, state: str, r_v=r, nu_v=nu, c_v=sp.Int
     Iy = F.zero
     per_element = []
     for k, ref_nodes in enumerate(elements):
-        xs, ys = _element_coords(el.info.name, k, r_v, c_v, tau_v)
+        xs, ys = _element_coords(el.info.name, k, r_v, dist)
         imap = IsoMap(el.shapes, Geometry("rectangle", xs, ys))
         blocks = exact_blocks(form, imap, state, material_, lambda term: el.info.rule_name(term.rule))
         blocks = {k: v.convert_to(F) for k, v in blocks.items()}
@@ -219,7 +239,7 @@ def _solve_exact(name: str, variant: str, state: str, r_v=r, nu_v=nu, c_v=sp.Int
             for j, gj in enumerate(dofs):
                 row[gj] += Kl[i][j]
         per_element.append((imap, form, dofs, X))
-    group = _symmetry_group(elements, nodes, c_v, tau_v)
+    group = _symmetry_group(elements, nodes, dist)
     if not _invariant(Kg, fg, group):  # a formulation that breaks the symmetry: solve in full
         group = [((1, 1), list(range(len(nodes))), 1)]
     basis = _basis(group, n)
@@ -255,15 +275,17 @@ def _solve_exact(name: str, variant: str, state: str, r_v=r, nu_v=nu, c_v=sp.Int
 _REFLECTIONS = {"x": ((-1, 1), 1), "y": ((1, -1), -1), "xy": ((-1, -1), -1)}
 
 
-def _symmetry_group(elements, nodes, c_v, tau_v) -> list:
+def _symmetry_group(elements, nodes, dist) -> list:
     """Signed node permutations that map the (distorted) patch onto itself.
 
     Each entry: ((sign_u, sign_v), node permutation, character).  The identity is always in;
     a reflection is kept when it maps every element's node set onto an element's node set and
-    the distortion respects it (skew c keeps only the half-turn, taper tau only X -> -X).
+    the distortion respects it (skew c keeps only the half-turn, the trapezoid s only
+    X -> -X, the taper tau only Y -> -Y).
     """
+    c_v, s_v, tau_v = dist
     group = [((1, 1), list(range(len(nodes))), 1)]
-    allowed = {"x": c_v == 0, "y": c_v == 0 and tau_v == 0, "xy": tau_v == 0}
+    allowed = {"x": c_v == 0 and tau_v == 0, "y": c_v == 0 and s_v == 0, "xy": s_v == 0 and tau_v == 0}
     sets = [frozenset(el) for el in elements]
     for key, ((sx, sy), chi) in _REFLECTIONS.items():
         if not allowed[key]:
@@ -537,7 +559,8 @@ def aspect_limit(name: str, variant: str, state: str, nu_value, tolerance) -> di
     if not e.has(r):
         ok = abs(float(e) - 1) <= float(tol)
         return {**out, "aspect_limit": math.inf if ok else 0.0, "unlimited": ok,
-                "method": "ratio independent of r"}
+                "method": f"ratio {float(e):.4g} independent of r: " + ("within" if ok else "outside")
+                + " the tolerance at every aspect ratio"}
     if abs(float(at0) - 1) > float(tol):
         return {**out, "aspect_limit": 0.0, "unlimited": False,
                 "method": f"ratio is {float(at0):.4g} already as r -> 0: outside the tolerance at every aspect ratio"}
@@ -552,11 +575,12 @@ def aspect_limit(name: str, variant: str, state: str, nu_value, tolerance) -> di
     roots.sort(key=lambda t: t[0])
     for v, edge, rt in roots:
         if not inside(v * (1 + 1e-7) + 1e-12):
-            closed = _closed_form_limit(expr, edge, nu_q, v)
+            closed = _closed_form_limit(expr, edge, nu_q, tol, v)
             res = {**out, "aspect_limit": v, "unlimited": False, "edge": float(edge),
                    "method": "closed form" if closed else "exact polynomial root"}
             if closed:
                 res["closed_form"] = closed
+                res["closed_form_symbols"] = "r* in nu and tol (the tolerance)"
             return res
     # no exit: check far out (the ratio may approach a limit inside the band)
     return {**out, "aspect_limit": math.inf, "unlimited": True, "method": "ratio stays within the tolerance for all r"}
@@ -570,9 +594,13 @@ def _limit_r0(e):
     return sp.limit(e, r, 0, "+")
 
 
+TOL = sp.Symbol("tol")
+
+
 @lru_cache(maxsize=None)
-def _closed_form_solutions(expr, edge):
-    num = sp.fraction(sp.cancel(expr - edge))[0]
+def _closed_form_solutions(expr, sign: int):
+    """Solutions r(nu, tol) of ratio(r, nu) = 1 + sign * tol, where sympy finds radicals."""
+    num = sp.fraction(sp.cancel(expr - (1 + sign * TOL)))[0]
     try:
         deg = sp.Poly(num, r).degree()
     except sp.PolynomialError:
@@ -585,15 +613,16 @@ def _closed_form_solutions(expr, edge):
         return ()
 
 
-def _closed_form_limit(expr, edge, nu_q, value: float) -> str | None:
-    """A closed form r*(nu) for this band edge whose value at nu_q matches, as a string."""
-    for s in _closed_form_solutions(expr, edge):
+def _closed_form_limit(expr, edge, nu_q, tol, value: float) -> str | None:
+    """A closed form r*(nu, tol) for this band edge whose value at (nu_q, tol) matches."""
+    sign = 1 if edge > 1 else -1
+    for s_ in _closed_form_solutions(expr, sign):
         try:
-            val = complex(s.subs(nu, nu_q).evalf(30))
+            val = complex(s_.subs({nu: nu_q, TOL: tol}).evalf(30))
         except (TypeError, ValueError):
             continue
         if abs(val.imag) < 1e-12 and abs(val.real - value) <= 1e-9 * max(1.0, value):
-            return str(s)
+            return str(s_)
     return None
 
 
@@ -622,17 +651,41 @@ def _skew_c(angle_deg: float) -> float:
     return math.tan(math.radians(angle_deg))
 
 
-def _check_taper(value: float) -> None:
+def _check_fraction(kind: str, value: float) -> None:
     if not math.isfinite(value) or abs(value) >= 0.95:
-        raise InputError(f"taper must be between -0.95 and 0.95 (1 would collapse the top edge), got {value}")
+        raise InputError(f"{kind} must be between -0.95 and 0.95 (1 would collapse an edge), got {value}")
+
+
+def _check_distortion(kind: str, value: float) -> None:
+    if kind not in DISTORTIONS:
+        raise InputError(f"unknown distortion {kind!r}; allowed: skew=DEGREES, taper=FRACTION, trapezoid=FRACTION")
+    if kind == "skew":
+        _skew_c(value)
+    else:
+        _check_fraction(kind, value)
+
+
+def _dist_tuple(kind: str, param) -> tuple:
+    zero = sp.Integer(0)
+    return {"skew": (param, zero, zero), "trapezoid": (zero, param, zero), "taper": (zero, zero, param)}[kind]
+
+
+def _param_value(kind: str, value: float) -> float:
+    return _skew_c(value) if kind == "skew" else float(value)
 
 
 @lru_cache(maxsize=None)
-def skew_expression(name: str, variant: str, state: str, aspect, nu_value) -> sp.Expr | None:
-    """Exact ratio of the parallelogram, symbolic in c = b tan(skew angle), for given r and nu."""
-    res = _solve_exact(catalog.element_info(name).name, variant, state,
-                       _rational(aspect, "--aspect"), _rational(nu_value, "--nu"), c_sym, sp.Integer(0))
+def distortion_expression(name: str, variant: str, state: str, kind: str, aspect, nu_value) -> sp.Expr | None:
+    """Exact ratio symbolic in the distortion parameter (c = b tan angle, s or tau) for given r
+    and nu, where the patch stays affine (every skew; taper and trapezoid for triangles).
+    None for a zero-energy response."""
+    res = _solve_exact(catalog.element_info(name).name, variant, state, _rational(aspect, "--aspect"),
+                       _rational(nu_value, "--nu"), _dist_tuple(kind, DISTORTIONS[kind][1]))
     return None if res.zero_energy else res.ratio
+
+
+def _exact_applies(name: str, kind: str) -> bool:
+    return kind == "skew" or catalog.element_info(name).domain == "triangle"
 
 
 @lru_cache(maxsize=None)
@@ -651,8 +704,9 @@ def _load_plan(name: str, state: str):
 def numeric_ratio(name: str, variant: str, state: str, xy, nu_value: float) -> np.ndarray:
     """Ratio for a batch of single quadrilaterals (n, nodes, 2) by the numeric route.
 
-    K from :meth:`Element.numeric_stiffness` (the element's own rules, float64); the load
-    and the second moment by a 6 x 6 Gauss rule (exact for these polynomial integrands).
+    An independent evaluation path: K from :meth:`Element.numeric_stiffness` (the element's
+    own rules, float64), the load and the second moment by a 6 x 6 Gauss rule (exact for these
+    polynomial integrands), the energy from the eigen-decomposition of the supported K.
     NaN marks a zero-energy bending response.
     """
     el = check(name, variant, state)
@@ -672,7 +726,7 @@ def numeric_ratio(name: str, variant: str, state: str, xy, nu_value: float) -> n
     for i in range(nn):
         f[:, 2 * i] = wts @ vals[i]
     Iy = wts @ vals[-1]
-    free = [i for i in range(2 * nn) if i not in (0, 1, 3)]
+    free = [i for i in range(2 * nn) if i not in (0, 1, 3)]  # u1, v1, v2 held
     Kf = K[:, free][:, :, free]
     ff = f[:, free]
     out = np.empty(nb)
@@ -691,50 +745,37 @@ def numeric_ratio(name: str, variant: str, state: str, xy, nu_value: float) -> n
 
 
 def distorted_nodes(name: str, kind: str, value: float, aspect: float) -> np.ndarray:
-    """Nodal coordinates of the distorted element (b = 1): skew angle in degrees, or taper."""
-    if kind == "skew":
-        cv, tv = _skew_c(value), 0.0
-    elif kind == "taper":
-        _check_taper(value)
-        cv, tv = 0.0, value
-    else:
-        raise InputError(f"unknown distortion {kind!r}; allowed: skew=DEGREES, taper=FRACTION")
+    """Nodal coordinates (b = 1) of the distorted quadrilateral (skew in degrees)."""
+    _check_distortion(kind, value)
     info = catalog.element_info(name)
     if info.domain != "square":
         raise InputError("distorted_nodes is for quadrilaterals; triangles are analysed as a two-element patch")
+    c_v, s_v, t_v = (float(v) for v in _dist_tuple(kind, _param_value(kind, value)))
     elements, _ = _ref_patch(info.name)
-    return np.array([[aspect * float(X) * (1 - tv * float(Y)) + cv * float(Y), float(Y)] for X, Y in elements[0]])
+    return np.array([[aspect * float(X) * (1 - s_v * float(Y)) + c_v * float(Y), float(Y) * (1 + t_v * float(X))]
+                     for X, Y in elements[0]])
 
 
 def distortion_curve(name: str, variant: str, state: str, kind: str, values, aspect: float = 1.0,
                      nu_value: float = 0.3) -> tuple[np.ndarray, str]:
-    """Ratio over a range of distortion values; returns (ratios, method)."""
+    """Ratio over a range of distortion values; returns (ratios, method).  NaN: zero energy."""
     el = check(name, variant, state)
     check_point(aspect, nu_value, state)
-    values = np.asarray(values, dtype=float)
-    if kind == "skew":
-        for v in values:
-            _skew_c(float(v))
-        expr = skew_expression(el.info.name, variant, state, _rational(float(aspect), "--aspect"),
-                               _rational(float(nu_value), "--nu"))
-        if expr is None:
-            return np.full(values.shape, np.nan), "exact, symbolic in c (zero-energy mode)"
-        f = sp.lambdify(c_sym, expr, "numpy")
-        cs = np.tan(np.radians(values))
-        return np.broadcast_to(np.asarray(f(cs), dtype=float), values.shape).copy(), "exact, symbolic in c = b tan(skew)"
-    if kind != "taper":
-        raise InputError(f"unknown distortion {kind!r}; allowed: skew, taper")
+    values = np.atleast_1d(np.asarray(values, dtype=float))
     for v in values:
-        _check_taper(float(v))
-    if el.info.domain == "square":
-        xy = np.stack([distorted_nodes(el.info.name, "taper", float(v), aspect) for v in values])
-        return numeric_ratio(el.info.name, variant, state, xy, nu_value), "numeric, element's own rule (float64)"
-    res = _solve_exact(el.info.name, variant, state, _rational(float(aspect), "--aspect"),
-                       _rational(float(nu_value), "--nu"), sp.Integer(0), tau)
-    if res.zero_energy:
-        return np.full(values.shape, np.nan), "exact (zero-energy mode)"
-    f = sp.lambdify(tau, res.ratio, "numpy")
-    return np.broadcast_to(np.asarray(f(values), dtype=float), values.shape).copy(), "exact, symbolic in tau"
+        _check_distortion(kind, float(v))
+    if _exact_applies(el.info.name, kind):
+        expr = distortion_expression(el.info.name, variant, state, kind, _rational(float(aspect), "--aspect"),
+                                     _rational(float(nu_value), "--nu"))
+        sym = DISTORTIONS[kind][1]
+        label = f"exact, symbolic in {sym}" + (" = b tan(angle)" if kind == "skew" else "")
+        if expr is None:
+            return np.full(values.shape, np.nan), label + " (zero-energy mode)"
+        f = sp.lambdify(sym, expr, "numpy")
+        params = np.array([_param_value(kind, float(v)) for v in values])
+        return np.broadcast_to(np.asarray(f(params), dtype=float), values.shape).copy(), label
+    xy = np.stack([distorted_nodes(el.info.name, kind, float(v), aspect) for v in values])
+    return numeric_ratio(el.info.name, variant, state, xy, nu_value), "numeric, element's own rules (float64)"
 
 
 def distortion(name: str, variant: str, state: str, kind: str, value: float, aspect: float = 1.0,
@@ -742,31 +783,30 @@ def distortion(name: str, variant: str, state: str, kind: str, value: float, asp
     """Ratio of one distorted shape, with the undistorted ratio beside it."""
     vals, method = distortion_curve(name, variant, state, kind, [value], aspect, nu_value)
     base = evaluate(name, variant, state, aspect, nu_value)
-    out = {"kind": kind, "value": float(value), "units": "degrees" if kind == "skew" else "fraction of a",
+    out = {"kind": kind, "value": float(value), "units": DISTORTIONS[kind][0], "shape": DISTORTIONS[kind][2],
            "aspect": float(aspect), "nu": float(nu_value), "ratio": None if np.isnan(vals[0]) else float(vals[0]),
            "zero_energy": bool(np.isnan(vals[0])), "undistorted_ratio": base, "method": method}
-    if kind == "skew":
-        expr = skew_expression(catalog.element_info(name).name, variant, state, _rational(float(aspect), "--aspect"),
-                               _rational(float(nu_value), "--nu"))
+    if _exact_applies(catalog.element_info(name).name, kind):
+        expr = distortion_expression(catalog.element_info(name).name, variant, state, kind,
+                                     _rational(float(aspect), "--aspect"), _rational(float(nu_value), "--nu"))
         if expr is not None and sp.count_ops(expr) < 400:
-            out["formula_in_c"] = str(sp.factor(expr))
+            out["formula"] = str(expr)
+            out["formula_symbol"] = str(DISTORTIONS[kind][1])
     return out
 
 
 def parse_distortion(text: str) -> tuple[str, float]:
-    """``skew=30`` (degrees) or ``taper=0.2`` -> (kind, value)."""
+    """``skew=30`` (degrees), ``taper=0.2`` or ``trapezoid=0.2`` -> (kind, value)."""
     kind, eq, value = (text or "").partition("=")
     kind = kind.strip().lower()
-    if not eq or kind not in ("skew", "taper"):
-        raise InputError(f"--distortion {text!r}: write skew=DEGREES (e.g. skew=30) or taper=FRACTION (e.g. taper=0.2)")
+    if not eq or kind not in DISTORTIONS:
+        raise InputError(f"--distortion {text!r}: write skew=DEGREES (e.g. skew=30), taper=FRACTION (e.g. "
+                         "taper=0.2) or trapezoid=FRACTION")
     try:
         v = float(value)
     except ValueError:
         raise InputError(f"--distortion {text!r}: {value!r} is not a number") from None
-    if kind == "skew":
-        _skew_c(v)
-    else:
-        _check_taper(v)
+    _check_distortion(kind, v)
     return kind, v
 
 
@@ -835,7 +875,7 @@ def demo_section(outdir) -> dict:
     files.append(charts.save(charts.contour_chart("Q4", "full", "plane-strain", (1.0, 20.0), (0.0, 0.499)),
                              outdir / "locking-contour-q4-plane-strain.png"))
     files.append(charts.save(charts.distortion_chart([("Q4", "full"), ("Q4", "incompatible"),
-                                                      ("Q4", "incompatible-centred"), ("Q4", "eas4")],
+                                                      ("Q4", "incompatible-centred"), ("Q4", "eas4"), ("Q8", "full")],
                                                      "plane-stress", "taper", (0.0, 0.6), 1.0, nu_b),
                              outdir / "locking-distortion-taper.png"))
     lines.append("charts: ratio vs aspect (Q4 full / incompatible-centred / Q8), contour of Q4 full in plane strain, "
@@ -846,7 +886,7 @@ def demo_section(outdir) -> dict:
 
 def _clear_caches() -> None:
     from . import stiffness
-    for fn in (_solve_exact, analyse, ratio_function, skew_expression, compliance, element, catalog.shape_set,
+    for fn in (_solve_exact, analyse, ratio_function, distortion_expression, compliance, element, catalog.shape_set,
                stiffness.rule_moment):
         fn.cache_clear()
 
