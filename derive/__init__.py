@@ -8,5 +8,6 @@ Public contract (see README and DESIGN.md):
 from __future__ import annotations
 
 from .element import Element, element
+from .locking import locking_ratio
 
 __version__ = "0.1.0"
