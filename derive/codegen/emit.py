@@ -27,6 +27,9 @@ LANGS = ("numpy", "c", "fortran")
 #: index is the innermost (unit-stride, vectorisable) dimension.
 C_LANES = 8
 NUMPY_CHUNK = 2048
+#: C/Fortran lowering: points unrolled with constants folded for small rules, a loop over
+#: point tables for larger ones (see lower.UNROLL_MAX)
+NATIVE_MODE = "mixed"
 
 
 @lru_cache(maxsize=1)
@@ -144,7 +147,7 @@ def header_lines(ir: KernelIR, meta: dict, lang: str) -> list[str]:
 # ---------------------------------------------------------------------------------------------
 # C
 
-def _c_stmt_lines(low_block, indent: str, out_fmt) -> list[str]:
+def _c_stmt_lines(low_block, indent: str, out_fmt, rolled: bool = False) -> list[str]:
     lines = []
     for s, e in low_block.stmts:
         lines += wrap_c(f"{indent}const double {s} = {c_expr(e)};", indent)
@@ -155,7 +158,7 @@ def _c_stmt_lines(low_block, indent: str, out_fmt) -> list[str]:
             text = f"{s} = {c_expr(e)};" if first else f"{s} = fmin({s}, {c_expr(e)});"
         lines += wrap_c(indent + text, indent)
     for name, idx, e in low_block.outs:
-        lines += wrap_c(f"{indent}{out_fmt(name, idx)} = {c_expr(e)};", indent)
+        lines += wrap_c(f"{indent}{out_fmt(name, ('p',) + tuple(idx) if rolled else idx)} = {c_expr(e)};", indent)
     return lines
 
 
@@ -180,17 +183,18 @@ def _flat(shape, idx) -> int:
     return k
 
 
-def _c_body(low: Lowered, ir: KernelIR, inputs: dict, outputs: dict, indent="    ") -> list[str]:
-    """Statements of one kernel body.  inputs: name -> C accessor format; outputs likewise."""
-    lines = []
+def _c_body(low: Lowered, ir: KernelIR, inputs: dict, outputs: dict, tag: str, indent="    "):
+    """Statements of one kernel body and the file-scope point tables it needs.
+
+    inputs: name -> C accessor format; outputs likewise ("__point__" for per-point outputs).
+    """
+    lines, consts = [], []
     used = low.used_inputs
-    nodal = []
     for i in range(ir.n_nodes):
         for k, c in enumerate(("x", "y")):
             nm = f"{c}{i + 1}"
             if nm in used:
-                nodal.append(f"{indent}const double {nm} = {inputs['xy'](2 * i + k)};")
-    lines += nodal
+                lines.append(f"{indent}const double {nm} = {inputs['xy'](2 * i + k)};")
     if "u" in inputs:
         for j in range(ir.ndof):
             if f"u{j + 1}" in used:
@@ -205,19 +209,32 @@ def _c_body(low: Lowered, ir: KernelIR, inputs: dict, outputs: dict, indent="   
         lines.append(f"{indent}/* element quantities: map coefficients, centre Jacobian */")
     for s, e in low.elem:
         lines += wrap_c(f"{indent}const double {s} = {c_expr(e)};", indent)
-    if low.accumulators:
-        lines += _decl([str(s) for s, _ in low.accumulators], indent)
-    for blk in low.pre:
-        lines.append(f"{indent}{{   /* {blk.title} */")
-        lines += _c_stmt_lines(blk, indent + "    ", outputs.get("__point__"))
-        lines.append(f"{indent}}}")
-    if low.tail:
-        lines.append(f"{indent}/* static condensation of the internal unknowns */")
-        for s, e in low.tail:
-            lines += wrap_c(f"{indent}const double {s} = {c_expr(e)};", indent)
-    for blk in low.post:
-        lines.append(f"{indent}{{   /* {blk.title} */")
-        lines += _c_stmt_lines(blk, indent + "    ", outputs["__point__"])
+    init = getattr(low, "init", set())
+    plain = [str(s) for s, _ in low.accumulators if s not in init]
+    if plain:
+        lines += _decl(plain, indent)
+    zero = [f"{s} = {'HUGE_VAL' if op == 'min' else '0.0'}" for s, op in low.accumulators if s in init]
+    if zero:
+        lines += _decl(zero, indent)
+    for bi, blk in enumerate(low.pre + [None] + low.post):
+        if blk is None:
+            if low.tail:
+                lines.append(f"{indent}/* static condensation of the internal unknowns */")
+            for s, e in low.tail:
+                lines += wrap_c(f"{indent}const double {s} = {c_expr(e)};", indent)
+            continue
+        if not blk.rolled:
+            lines.append(f"{indent}{{   /* {blk.title} */")
+            lines += _c_stmt_lines(blk, indent + "    ", outputs.get("__point__"))
+            lines.append(f"{indent}}}")
+            continue
+        lines.append(f"{indent}for (int p = 0; p < {blk.npoints}; ++p) {{   /* {blk.title} */")
+        inner = indent + "    "
+        for sym, vals in blk.pc.items():
+            tname = f"{tag}{bi}_{sym}"
+            consts += _c_table(tname, vals)
+            lines.append(f"{inner}const double {sym} = {tname}[p];")
+        lines += _c_stmt_lines(blk, inner, outputs.get("__point__"), rolled=True)
         lines.append(f"{indent}}}")
     for name, items in low.outputs.items():
         shape = low.shapes[name]
@@ -225,7 +242,22 @@ def _c_body(low: Lowered, ir: KernelIR, inputs: dict, outputs: dict, indent="   
             if isinstance(e, tuple):
                 e = _mirror_expr(items, e[1], shape)
             lines += wrap_c(f"{indent}{outputs[name](_flat(shape, idx))} = {c_expr(e)};", indent)
-    return lines
+    return lines, consts
+
+
+def _c_table(name: str, vals) -> list[str]:
+    items = [float_literal(v) for v in vals]
+    out = [f"static const double {name}[{len(items)}] = {{"]
+    cur = "   "
+    for it in items:
+        piece = f" {it},"
+        if len(cur) + len(piece) > 100:
+            out.append(cur)
+            cur = "   "
+        cur += piece
+    out.append(cur.rstrip(","))
+    out.append("};")
+    return out
 
 
 def _mirror_expr(items, idx, shape):
@@ -251,17 +283,23 @@ def render_c(ir: KernelIR, lows: dict, meta: dict, name: str) -> list[Source]:
         _remap_mats(low, mats)
     nin = 2 * ir.n_nodes
     nk = ir.ndof * ir.ndof
-    stiff_body = _c_body(K, ir, {"xy": lambda k: f"xy[{k} * sx]"}, {"K": lambda k: f"K[{k} * sk]"})
-    valid_body = _c_body(V, ir, {"xy": lambda k: f"xy[{k}]"}, {"detJ_min": lambda k: "*detJ_min"})
+    stiff_body, c1 = _c_body(K, ir, {"xy": lambda k: f"xy[{k} * sx]"}, {"K": lambda k: f"K[{k} * sk]"}, "KS")
+    valid_body, c2 = _c_body(V, ir, {"xy": lambda k: f"xy[{k}]"}, {"detJ_min": lambda k: "*detJ_min"}, "KV")
     nstr = ir.nstrain
-    rec_body = _c_body(R, ir, {"xy": lambda k: f"xy[{k}]", "u": lambda k: f"u[{k}]"},
-                       {"__point__": lambda nm, idx: f"{nm}[{idx[0] * nstr + idx[1]}]"})
+
+    def point_out(nm, idx):
+        if idx[0] == "p":
+            return f"{nm}[p * {nstr} + {idx[1]}]"
+        return f"{nm}[{idx[0] * nstr + idx[1]}]"
+
+    rec_body, c3 = _c_body(R, ir, {"xy": lambda k: f"xy[{k}]", "u": lambda k: f"u[{k}]"},
+                           {"__point__": point_out}, "KR")
     ctx = {
         "header": header_lines(ir, meta, "c"), "prefix": prefix, "name": name, "guard": prefix.upper() + "_H",
         "nin": nin, "nk": nk, "ndof": ir.ndof, "nodes": ir.n_nodes, "nmat": 3 + len(mats), "lanes": C_LANES,
         "mat_lines": _mat_lines(_MatView(mats)), "stiff_body": stiff_body, "valid_body": valid_body,
         "rec_body": rec_body, "nrec": meta["recovery_points"] * nstr, "nstrain": nstr,
-        "npoints": meta["recovery_points"], "version": GENERATOR_VERSION,
+        "npoints": meta["recovery_points"], "version": GENERATOR_VERSION, "tables": c1 + c2 + c3,
     }
     env = _env()
     return [Source(f"c/{name}.c", env.get_template("kernel.c.j2").render(**ctx)),
@@ -315,8 +353,8 @@ def _f_stmt(indent, lhs, rhs) -> list[str]:
     return wrap_fortran(f"{indent}{lhs} = {f_expr(rhs)}", indent)
 
 
-def _f_body(low: Lowered, ir: KernelIR, out_fmt, point_fmt=None, indent="    ") -> tuple[list, list]:
-    decl, lines = [], []
+def _f_body(low: Lowered, ir: KernelIR, out_fmt, point_fmt=None, tag: str = "T", indent="    "):
+    decl, lines, tables = [], [], []
     used = low.used_inputs
     names = []
     for i in range(ir.n_nodes):
@@ -337,40 +375,78 @@ def _f_body(low: Lowered, ir: KernelIR, out_fmt, point_fmt=None, indent="    ") 
         lines += _f_stmt(indent, s, e)
     top, _ = _f_names(low)
     names += top
-    for blk in low.pre + [None] + low.post:
+    init = getattr(low, "init", set())
+    for s, op in low.accumulators:
+        if s in init:
+            lines.append(f"{indent}{s} = {'huge(1.0_dp)' if op == 'min' else '0.0_dp'}")
+    rolled_any = False
+    local_names = []
+    for bi, blk in enumerate(low.pre + [None] + low.post):
         if blk is None:
             if low.tail:
                 lines.append(f"{indent}! static condensation of the internal unknowns")
             for s, e in low.tail:
                 lines += _f_stmt(indent, s, e)
             continue
-        lines.append(f"{indent}block   ! {blk.title}")
-        bn = [str(s) for s, _ in blk.stmts]
+        ind = indent
+        if blk.rolled:
+            rolled_any = True
+            lines.append(f"{indent}do p = 1, {blk.npoints}   ! {blk.title}")
+            ind = indent + "  "
+            lines.append(f"{ind}block")
+        else:
+            lines.append(f"{indent}block   ! {blk.title}")
+        inner = ind + "  "
+        bn = ([str(s) for s in blk.pc] if blk.rolled else []) + [str(s) for s, _ in blk.stmts]
+        local_names += bn
         if bn:
-            lines += _f_decl(bn, indent + "  ")
+            lines += _f_decl(bn, inner)
+        if blk.rolled:
+            for sym, vals in blk.pc.items():
+                tname = f"{tag}{bi}_{sym}"
+                tables += _f_table(tname, vals, indent)
+                lines.append(f"{inner}{sym} = {tname}(p)")
         for s, e in blk.stmts:
-            lines += _f_stmt(indent + "  ", s, e)
+            lines += _f_stmt(inner, s, e)
         for s, e, op, first in blk.accs:
             if op == "add":
-                rhs = e if first else sp.Symbol(str(s)) + e
-                lines += _f_stmt(indent + "  ", s, rhs) if first else wrap_fortran(
-                    f"{indent}  {s} = {s} + ({f_expr(e)})", indent + "  ")
+                lines += (_f_stmt(inner, s, e) if first else
+                          wrap_fortran(f"{inner}{s} = {s} + ({f_expr(e)})", inner))
             else:
-                lines += (_f_stmt(indent + "  ", s, e) if first else
-                          wrap_fortran(f"{indent}  {s} = min({s}, {f_expr(e)})", indent + "  "))
+                lines += (_f_stmt(inner, s, e) if first else
+                          wrap_fortran(f"{inner}{s} = min({s}, {f_expr(e)})", inner))
         for nm, idx, e in blk.outs:
-            lines += wrap_fortran(f"{indent}  {point_fmt(nm, idx)} = {f_expr(e)}", indent + "  ")
-        lines.append(f"{indent}end block")
+            where = point_fmt(nm, ("p",) + tuple(idx) if blk.rolled else idx)
+            lines += wrap_fortran(f"{inner}{where} = {f_expr(e)}", inner)
+        lines.append(f"{ind}end block")
+        if blk.rolled:
+            lines.append(f"{indent}end do")
     for name, items in low.outputs.items():
         shape = low.shapes[name]
         for idx, e in items:
             if isinstance(e, tuple):
                 e = _mirror_expr(items, e[1], shape)
             lines += wrap_fortran(f"{indent}{out_fmt(name, idx)} = {f_expr(e)}", indent)
-    decl = _f_decl(names, indent)
-    _check_case(names + [n for blk in low.pre + low.post for n in (str(s) for s, _ in blk.stmts)] +
-                ["xy", "u", "E", "nu", "t", "K", "detJ_min", "strain", "stress", "mat", "n", "iel"])
+    decl = tables + _f_decl(names, indent)
+    if rolled_any:
+        decl.append(f"{indent}integer :: p")
+    _check_case(names + local_names + [t.split("::")[1].split("(")[0].strip() for t in tables if "::" in t] +
+                ["xy", "u", "E", "nu", "t", "K", "detJ_min", "strain", "stress", "mat", "n", "iel", "p"])
     return decl, lines
+
+
+def _f_table(name: str, vals, indent: str) -> list[str]:
+    items = [float_literal(v) + "_dp" for v in vals]
+    head = f"{indent}real(dp), parameter :: {name}({len(items)}) = ["
+    out, cur = [], head
+    for k, it in enumerate(items):
+        piece = it + (", " if k + 1 < len(items) else "]")
+        if len(cur) + len(piece) > 98:
+            out.append(cur.rstrip() + " &")
+            cur = indent + "    "
+        cur += piece
+    out.append(cur)
+    return out
 
 
 def _check_case(names):
@@ -384,9 +460,15 @@ def _check_case(names):
 
 def render_fortran(ir: KernelIR, lows: dict, meta: dict, name: str) -> list[Source]:
     K, V, R = lows["stiffness"], lows["validity"], lows["recovery"]
-    sd, sl = _f_body(K, ir, lambda nm, idx: f"K({idx[0] + 1}, {idx[1] + 1})")
-    vd, vl = _f_body(V, ir, lambda nm, idx: "detJ_min")
-    rd, rl = _f_body(R, ir, None, lambda nm, idx: f"{nm}({idx[1] + 1}, {idx[0] + 1})")
+    sd, sl = _f_body(K, ir, lambda nm, idx: f"K({idx[0] + 1}, {idx[1] + 1})", tag="KS")
+    vd, vl = _f_body(V, ir, lambda nm, idx: "detJ_min", tag="KV")
+
+    def point_out(nm, idx):
+        if idx[0] == "p":
+            return f"{nm}({idx[1] + 1}, p)"
+        return f"{nm}({idx[1] + 1}, {idx[0] + 1})"
+
+    rd, rl = _f_body(R, ir, None, point_out, tag="KR")
     ctx = {"header": header_lines(ir, meta, "fortran"), "module": f"derive_{name}", "name": name,
            "nodes": ir.n_nodes, "ndof": ir.ndof, "nstrain": ir.nstrain, "npoints": meta["recovery_points"],
            "stiff_decl": sd, "stiff_lines": sl, "valid_decl": vd, "valid_lines": vl,
@@ -506,7 +588,7 @@ def generate(element: str, variant: str = "full", state: str = "plane-stress", l
     for lang in langs:
         if lang in ("c", "fortran"):
             if unrolled is None:
-                unrolled = lowered(ir, "unrolled")
+                unrolled = lowered(ir, NATIVE_MODE)
             lows = unrolled
         elif lang == "numpy":
             if vector is None:
@@ -515,7 +597,7 @@ def generate(element: str, variant: str = "full", state: str = "plane-stress", l
         else:
             raise ValueError(f"unknown language {lang!r}")
         if unrolled is None:
-            unrolled = lowered(ir, "unrolled")
+            unrolled = lowered(ir, NATIVE_MODE)
         meta = describe(ir, unrolled)
         render = {"c": render_c, "fortran": render_fortran, "numpy": render_numpy}[lang]
         sources = render(ir, lows, meta, name)

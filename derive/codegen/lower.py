@@ -32,6 +32,7 @@ class Block:
     outs: list                       # (name, index tuple, expr)
     pc: dict = field(default_factory=dict)   # vector mode: symbol -> list of point values
     npoints: int = 1
+    rolled: bool = False                     # one template for all points (vector / loop)
 
 
 @dataclass
@@ -157,10 +158,21 @@ def lower(ir: KernelIR, fn: Function, mode: str, cse: bool = True) -> Lowered:
     return low
 
 
+#: C/Fortran ("mixed" mode): a rule is unrolled (constants folded per point) when
+#: points x (accumulators + outputs) stays below this, else it becomes a loop over point
+#: tables (same speed for larger elements, a fraction of the code and compile time)
+UNROLL_MAX = 160
+
+
 def _lower_group(g, pv: PointValues, mode: str, cse: bool) -> list:
-    if mode == "vector":
-        blk = Block(f"{g.rule}: all {g.npoints} points at once", list(g.stmts),
-                    [(s, e, op, False) for s, e, op in g.accs], list(g.outs), npoints=g.npoints)
+    work = g.npoints * (len(g.accs) + len(g.outs))
+    if mode == "vector" or (mode == "mixed" and work > UNROLL_MAX):
+        title = (f"{g.rule}: all {g.npoints} points at once" if mode == "vector"
+                 else f"{g.rule}: loop over the {g.npoints} points")
+        blk = Block(title, list(g.stmts), [(s, e, op, False) for s, e, op in g.accs], list(g.outs),
+                    npoints=g.npoints, rolled=True)
+        if cse and mode == "mixed":
+            _cse_block(blk)
         pcs = set()
         for _, e in blk.stmts:
             pcs |= _free(e)
@@ -325,7 +337,7 @@ def _dce(low: Lowered):
     low.mat = keep[::-1]
     # vector mode: the point constants each block needs
     for blk in low.pre + low.post:
-        if low.mode != "vector":
+        if not blk.rolled:
             continue
         pcs = set()
         for _, e in blk.stmts:
@@ -344,10 +356,17 @@ def _dce(low: Lowered):
 
 
 def _mark_first(low: Lowered):
+    """First contribution assigns; a loop over points needs its accumulators initialised."""
     seen = set()
+    low.init = set()
     for blk in low.pre:
         new = []
         for s, e, op, _ in blk.accs:
-            new.append((s, e, op, s not in seen))
+            first = s not in seen
+            if blk.rolled and low.mode != "vector":
+                if first:
+                    low.init.add(s)
+                first = False
+            new.append((s, e, op, first))
             seen.add(s)
         blk.accs = new

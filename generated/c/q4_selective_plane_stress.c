@@ -1,0 +1,821 @@
+/*
+ * derive generated kernel: Q4 selective plane-stress
+ * 
+ * element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
+ * formulation  selective integration: volumetric part of D with the reduced rule [Doherty, Wilson & Taylor (1969); Hughes (1987) Sec. 4.4]
+ * integration  B^T D_dev B: gauss-2x2 (4 points); B^T D_vol B (reduced rule): gauss-1x1 (1 point)
+ * flops        stiffness 991, validity 89, recovery 373 per element (add, mul, div, sqrt)
+ * 
+ * arguments (units-agnostic; any consistent set of units):
+ *   xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+ *   E       Young's modulus (> 0), scalar
+ *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
+ *   t       thickness t (the out-of-plane thickness)
+ *   u       nodal displacements for recovery, shape (n, 8), interleaved u1, v1, u2, v2, ...
+ *   K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric
+ *   detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted or degenerate element
+ *   strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
+ *   stress  recovery: stress D strain at the same points, shape (n, 4, 3), [sigma_xx, sigma_yy, tau_xy]
+ * 
+ * The kernels do not check their inputs; derive.kernel() checks shapes, finite
+ * coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
+ * generator    derive.codegen 1.0; regenerate with
+ *              derive kernel Q4 --variant selective --state plane-stress --lang c
+ *
+ * C99.  Compile e.g. with: cc -O3 -march=native -fopenmp-simd -c q4_selective_plane_stress.c
+ * Data layout: every array is dense, row-major (C order), float64.  The batch kernel
+ * copies 8 elements at a time into element-innermost scratch arrays so that the
+ * per-element body is vectorised across elements (one SIMD lane per element).
+ */
+#include <math.h>
+#include <stddef.h>
+#include "q4_selective_plane_stress.h"
+
+#define NIN 8
+#define NK 64
+#define NMAT 10
+#define LANES 8
+#if defined(__GNUC__)
+/* inlined into the lane loop so that the loop over elements vectorises */
+#define DERIVE_INLINE static inline __attribute__((always_inline))
+#else
+#define DERIVE_INLINE static inline
+#endif
+
+/* material table: E, nu, t, then the material constants the kernels use */
+static inline void q4_selective_plane_stress_material(double E, double nu, double t, double *restrict mat)
+{
+    mat[0] = E;
+    mat[1] = nu;
+    mat[2] = t;
+    mat[3] = 2.0*E/(3.0 + 3.0*nu);   /* m0 */
+    mat[4] = -E/(3.0 + 3.0*nu);   /* m1 */
+    mat[5] = E/(2.0 + 2.0*nu);   /* m2 */
+    mat[6] = (-E - 2.0*E*nu)/(-3.0 + 3.0*nu*nu);   /* m3 */
+    mat[7] = E/(1.0 - nu*nu);   /* m4 */
+    mat[8] = E*nu/(1.0 - nu*nu);   /* m5 */
+    mat[9] = E*(0.5 - 0.5*nu)/(1.0 - nu*nu);   /* m6 */
+}
+
+/* stiffness of one element; xy[k * sx] is input k, K[k * sk] output k (row-major) */
+DERIVE_INLINE void q4_selective_plane_stress_stiffness_body(const double *restrict xy, const ptrdiff_t sx,
+                                             const double *restrict mat, double *restrict K,
+                                             const ptrdiff_t sk)
+{
+    const double x1 = xy[0 * sx];
+    const double y1 = xy[1 * sx];
+    const double x2 = xy[2 * sx];
+    const double y2 = xy[3 * sx];
+    const double x3 = xy[4 * sx];
+    const double y3 = xy[5 * sx];
+    const double x4 = xy[6 * sx];
+    const double y4 = xy[7 * sx];
+    const double t = mat[2];
+    const double m0 = mat[3];
+    const double m1 = mat[4];
+    const double m2 = mat[5];
+    const double m3 = mat[6];
+    /* element quantities: map coefficients, centre Jacobian */
+    const double gx_0_1 = -0.25*x1 - 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gx_1_0 = -0.25*x1 - 0.25*x4 + 0.25*x2 + 0.25*x3;
+    const double gx_1_1 = -0.25*x2 - 0.25*x4 + 0.25*x1 + 0.25*x3;
+    const double gy_0_1 = -0.25*y1 - 0.25*y2 + 0.25*y3 + 0.25*y4;
+    const double gy_1_0 = -0.25*y1 - 0.25*y4 + 0.25*y2 + 0.25*y3;
+    const double gy_1_1 = -0.25*y2 - 0.25*y4 + 0.25*y1 + 0.25*y3;
+    double K_0_0, K_0_1, K_0_2, K_0_3, K_0_4, K_0_5, K_0_6, K_0_7, K_1_1, K_1_2, K_1_3, K_1_4, K_1_5;
+    double K_1_6, K_1_7, K_2_2, K_2_3, K_2_4, K_2_5, K_2_6, K_2_7, K_3_3, K_3_4, K_3_5, K_3_6, K_3_7;
+    double K_4_4, K_4_5, K_4_6, K_4_7, K_5_5, K_5_6, K_5_7, K_6_6, K_6_7, K_7_7;
+    {   /* gauss-2x2 point 1 of 4: xi = -0.5773502691896257, eta = -0.5773502691896257, weight = 1 */
+        const double q0 = -0.5773502691896257*gx_1_1;
+        const double J00 = gx_1_0 + q0;
+        const double q1 = -0.5773502691896257*gy_1_1;
+        const double J01 = gy_1_0 + q1;
+        const double J10 = gx_0_1 + q0;
+        const double J11 = gy_0_1 + q1;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = -0.39433756729740643*Ji00 - 0.39433756729740643*Ji01;
+        const double dNdy1 = -0.39433756729740643*Ji10 - 0.39433756729740643*Ji11;
+        const double dNdx2 = 0.39433756729740643*Ji00 - 0.10566243270259355*Ji01;
+        const double dNdy2 = 0.39433756729740643*Ji10 - 0.10566243270259355*Ji11;
+        const double dNdx3 = 0.10566243270259355*Ji00 + 0.10566243270259355*Ji01;
+        const double dNdy3 = 0.10566243270259355*Ji10 + 0.10566243270259355*Ji11;
+        const double dNdx4 = 0.39433756729740643*Ji01 - 0.10566243270259355*Ji00;
+        const double dNdy4 = 0.39433756729740643*Ji11 - 0.10566243270259355*Ji10;
+        const double sc0 = detJ*t;
+        const double s1 = m0*sc0;
+        const double s2 = m1*sc0;
+        const double s3 = m2*sc0;
+        const double T4 = dNdx1*s1;
+        const double T6 = dNdy1*s3;
+        const double T7 = dNdy1*s2;
+        const double T8 = dNdy1*s1;
+        const double T9 = dNdx1*s3;
+        const double T10 = dNdx2*s1;
+        const double T11 = dNdx2*s2;
+        const double T12 = dNdy2*s3;
+        const double T13 = dNdy2*s2;
+        const double T14 = dNdy2*s1;
+        const double T15 = dNdx2*s3;
+        const double T16 = dNdx3*s1;
+        const double T17 = dNdx3*s2;
+        const double T18 = dNdy3*s3;
+        const double T19 = dNdy3*s2;
+        const double T20 = dNdy3*s1;
+        const double T21 = dNdx3*s3;
+        const double T22 = dNdx4*s1;
+        const double T23 = dNdx4*s2;
+        const double T24 = dNdy4*s3;
+        const double T25 = dNdy4*s2;
+        const double T26 = dNdy4*s1;
+        const double T27 = dNdx4*s3;
+        K_0_0 = T4*dNdx1 + T6*dNdy1;
+        K_0_1 = T7*dNdx1 + T9*dNdy1;
+        K_0_2 = T10*dNdx1 + T12*dNdy1;
+        K_0_3 = T13*dNdx1 + T15*dNdy1;
+        K_0_4 = T16*dNdx1 + T18*dNdy1;
+        K_0_5 = T19*dNdx1 + T21*dNdy1;
+        K_0_6 = T22*dNdx1 + T24*dNdy1;
+        K_0_7 = T25*dNdx1 + T27*dNdy1;
+        K_1_1 = T8*dNdy1 + T9*dNdx1;
+        K_1_2 = T11*dNdy1 + T12*dNdx1;
+        K_1_3 = T14*dNdy1 + T15*dNdx1;
+        K_1_4 = T17*dNdy1 + T18*dNdx1;
+        K_1_5 = T20*dNdy1 + T21*dNdx1;
+        K_1_6 = T23*dNdy1 + T24*dNdx1;
+        K_1_7 = T26*dNdy1 + T27*dNdx1;
+        K_2_2 = T10*dNdx2 + T12*dNdy2;
+        K_2_3 = T13*dNdx2 + T15*dNdy2;
+        K_2_4 = T16*dNdx2 + T18*dNdy2;
+        K_2_5 = T19*dNdx2 + T21*dNdy2;
+        K_2_6 = T22*dNdx2 + T24*dNdy2;
+        K_2_7 = T25*dNdx2 + T27*dNdy2;
+        K_3_3 = T14*dNdy2 + T15*dNdx2;
+        K_3_4 = T17*dNdy2 + T18*dNdx2;
+        K_3_5 = T20*dNdy2 + T21*dNdx2;
+        K_3_6 = T23*dNdy2 + T24*dNdx2;
+        K_3_7 = T26*dNdy2 + T27*dNdx2;
+        K_4_4 = T16*dNdx3 + T18*dNdy3;
+        K_4_5 = T19*dNdx3 + T21*dNdy3;
+        K_4_6 = T22*dNdx3 + T24*dNdy3;
+        K_4_7 = T25*dNdx3 + T27*dNdy3;
+        K_5_5 = T20*dNdy3 + T21*dNdx3;
+        K_5_6 = T23*dNdy3 + T24*dNdx3;
+        K_5_7 = T26*dNdy3 + T27*dNdx3;
+        K_6_6 = T22*dNdx4 + T24*dNdy4;
+        K_6_7 = T25*dNdx4 + T27*dNdy4;
+        K_7_7 = T26*dNdy4 + T27*dNdx4;
+    }
+    {   /* gauss-2x2 point 2 of 4: xi = 0.5773502691896257, eta = -0.5773502691896257, weight = 1 */
+        const double J00 = gx_1_0 - 0.5773502691896257*gx_1_1;
+        const double J01 = gy_1_0 - 0.5773502691896257*gy_1_1;
+        const double J10 = gx_0_1 + 0.5773502691896257*gx_1_1;
+        const double J11 = gy_0_1 + 0.5773502691896257*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = -0.10566243270259355*Ji01 - 0.39433756729740643*Ji00;
+        const double dNdy1 = -0.10566243270259355*Ji11 - 0.39433756729740643*Ji10;
+        const double dNdx2 = 0.39433756729740643*Ji00 - 0.39433756729740643*Ji01;
+        const double dNdy2 = 0.39433756729740643*Ji10 - 0.39433756729740643*Ji11;
+        const double dNdx3 = 0.10566243270259355*Ji00 + 0.39433756729740643*Ji01;
+        const double dNdy3 = 0.10566243270259355*Ji10 + 0.39433756729740643*Ji11;
+        const double dNdx4 = 0.10566243270259355*Ji01 - 0.10566243270259355*Ji00;
+        const double dNdy4 = 0.10566243270259355*Ji11 - 0.10566243270259355*Ji10;
+        const double sc0 = detJ*t;
+        const double s1 = m0*sc0;
+        const double s2 = m1*sc0;
+        const double s3 = m2*sc0;
+        const double T4 = dNdx1*s1;
+        const double T6 = dNdy1*s3;
+        const double T7 = dNdy1*s2;
+        const double T8 = dNdy1*s1;
+        const double T9 = dNdx1*s3;
+        const double T10 = dNdx2*s1;
+        const double T11 = dNdx2*s2;
+        const double T12 = dNdy2*s3;
+        const double T13 = dNdy2*s2;
+        const double T14 = dNdy2*s1;
+        const double T15 = dNdx2*s3;
+        const double T16 = dNdx3*s1;
+        const double T17 = dNdx3*s2;
+        const double T18 = dNdy3*s3;
+        const double T19 = dNdy3*s2;
+        const double T20 = dNdy3*s1;
+        const double T21 = dNdx3*s3;
+        const double T22 = dNdx4*s1;
+        const double T23 = dNdx4*s2;
+        const double T24 = dNdy4*s3;
+        const double T25 = dNdy4*s2;
+        const double T26 = dNdy4*s1;
+        const double T27 = dNdx4*s3;
+        K_0_0 += T4*dNdx1 + T6*dNdy1;
+        K_0_1 += T7*dNdx1 + T9*dNdy1;
+        K_0_2 += T10*dNdx1 + T12*dNdy1;
+        K_0_3 += T13*dNdx1 + T15*dNdy1;
+        K_0_4 += T16*dNdx1 + T18*dNdy1;
+        K_0_5 += T19*dNdx1 + T21*dNdy1;
+        K_0_6 += T22*dNdx1 + T24*dNdy1;
+        K_0_7 += T25*dNdx1 + T27*dNdy1;
+        K_1_1 += T8*dNdy1 + T9*dNdx1;
+        K_1_2 += T11*dNdy1 + T12*dNdx1;
+        K_1_3 += T14*dNdy1 + T15*dNdx1;
+        K_1_4 += T17*dNdy1 + T18*dNdx1;
+        K_1_5 += T20*dNdy1 + T21*dNdx1;
+        K_1_6 += T23*dNdy1 + T24*dNdx1;
+        K_1_7 += T26*dNdy1 + T27*dNdx1;
+        K_2_2 += T10*dNdx2 + T12*dNdy2;
+        K_2_3 += T13*dNdx2 + T15*dNdy2;
+        K_2_4 += T16*dNdx2 + T18*dNdy2;
+        K_2_5 += T19*dNdx2 + T21*dNdy2;
+        K_2_6 += T22*dNdx2 + T24*dNdy2;
+        K_2_7 += T25*dNdx2 + T27*dNdy2;
+        K_3_3 += T14*dNdy2 + T15*dNdx2;
+        K_3_4 += T17*dNdy2 + T18*dNdx2;
+        K_3_5 += T20*dNdy2 + T21*dNdx2;
+        K_3_6 += T23*dNdy2 + T24*dNdx2;
+        K_3_7 += T26*dNdy2 + T27*dNdx2;
+        K_4_4 += T16*dNdx3 + T18*dNdy3;
+        K_4_5 += T19*dNdx3 + T21*dNdy3;
+        K_4_6 += T22*dNdx3 + T24*dNdy3;
+        K_4_7 += T25*dNdx3 + T27*dNdy3;
+        K_5_5 += T20*dNdy3 + T21*dNdx3;
+        K_5_6 += T23*dNdy3 + T24*dNdx3;
+        K_5_7 += T26*dNdy3 + T27*dNdx3;
+        K_6_6 += T22*dNdx4 + T24*dNdy4;
+        K_6_7 += T25*dNdx4 + T27*dNdy4;
+        K_7_7 += T26*dNdy4 + T27*dNdx4;
+    }
+    {   /* gauss-2x2 point 3 of 4: xi = -0.5773502691896257, eta = 0.5773502691896257, weight = 1 */
+        const double J00 = gx_1_0 + 0.5773502691896257*gx_1_1;
+        const double J01 = gy_1_0 + 0.5773502691896257*gy_1_1;
+        const double J10 = gx_0_1 - 0.5773502691896257*gx_1_1;
+        const double J11 = gy_0_1 - 0.5773502691896257*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = -0.10566243270259355*Ji00 - 0.39433756729740643*Ji01;
+        const double dNdy1 = -0.10566243270259355*Ji10 - 0.39433756729740643*Ji11;
+        const double dNdx2 = 0.10566243270259355*Ji00 - 0.10566243270259355*Ji01;
+        const double dNdy2 = 0.10566243270259355*Ji10 - 0.10566243270259355*Ji11;
+        const double dNdx3 = 0.10566243270259355*Ji01 + 0.39433756729740643*Ji00;
+        const double dNdy3 = 0.10566243270259355*Ji11 + 0.39433756729740643*Ji10;
+        const double dNdx4 = 0.39433756729740643*Ji01 - 0.39433756729740643*Ji00;
+        const double dNdy4 = 0.39433756729740643*Ji11 - 0.39433756729740643*Ji10;
+        const double sc0 = detJ*t;
+        const double s1 = m0*sc0;
+        const double s2 = m1*sc0;
+        const double s3 = m2*sc0;
+        const double T4 = dNdx1*s1;
+        const double T6 = dNdy1*s3;
+        const double T7 = dNdy1*s2;
+        const double T8 = dNdy1*s1;
+        const double T9 = dNdx1*s3;
+        const double T10 = dNdx2*s1;
+        const double T11 = dNdx2*s2;
+        const double T12 = dNdy2*s3;
+        const double T13 = dNdy2*s2;
+        const double T14 = dNdy2*s1;
+        const double T15 = dNdx2*s3;
+        const double T16 = dNdx3*s1;
+        const double T17 = dNdx3*s2;
+        const double T18 = dNdy3*s3;
+        const double T19 = dNdy3*s2;
+        const double T20 = dNdy3*s1;
+        const double T21 = dNdx3*s3;
+        const double T22 = dNdx4*s1;
+        const double T23 = dNdx4*s2;
+        const double T24 = dNdy4*s3;
+        const double T25 = dNdy4*s2;
+        const double T26 = dNdy4*s1;
+        const double T27 = dNdx4*s3;
+        K_0_0 += T4*dNdx1 + T6*dNdy1;
+        K_0_1 += T7*dNdx1 + T9*dNdy1;
+        K_0_2 += T10*dNdx1 + T12*dNdy1;
+        K_0_3 += T13*dNdx1 + T15*dNdy1;
+        K_0_4 += T16*dNdx1 + T18*dNdy1;
+        K_0_5 += T19*dNdx1 + T21*dNdy1;
+        K_0_6 += T22*dNdx1 + T24*dNdy1;
+        K_0_7 += T25*dNdx1 + T27*dNdy1;
+        K_1_1 += T8*dNdy1 + T9*dNdx1;
+        K_1_2 += T11*dNdy1 + T12*dNdx1;
+        K_1_3 += T14*dNdy1 + T15*dNdx1;
+        K_1_4 += T17*dNdy1 + T18*dNdx1;
+        K_1_5 += T20*dNdy1 + T21*dNdx1;
+        K_1_6 += T23*dNdy1 + T24*dNdx1;
+        K_1_7 += T26*dNdy1 + T27*dNdx1;
+        K_2_2 += T10*dNdx2 + T12*dNdy2;
+        K_2_3 += T13*dNdx2 + T15*dNdy2;
+        K_2_4 += T16*dNdx2 + T18*dNdy2;
+        K_2_5 += T19*dNdx2 + T21*dNdy2;
+        K_2_6 += T22*dNdx2 + T24*dNdy2;
+        K_2_7 += T25*dNdx2 + T27*dNdy2;
+        K_3_3 += T14*dNdy2 + T15*dNdx2;
+        K_3_4 += T17*dNdy2 + T18*dNdx2;
+        K_3_5 += T20*dNdy2 + T21*dNdx2;
+        K_3_6 += T23*dNdy2 + T24*dNdx2;
+        K_3_7 += T26*dNdy2 + T27*dNdx2;
+        K_4_4 += T16*dNdx3 + T18*dNdy3;
+        K_4_5 += T19*dNdx3 + T21*dNdy3;
+        K_4_6 += T22*dNdx3 + T24*dNdy3;
+        K_4_7 += T25*dNdx3 + T27*dNdy3;
+        K_5_5 += T20*dNdy3 + T21*dNdx3;
+        K_5_6 += T23*dNdy3 + T24*dNdx3;
+        K_5_7 += T26*dNdy3 + T27*dNdx3;
+        K_6_6 += T22*dNdx4 + T24*dNdy4;
+        K_6_7 += T25*dNdx4 + T27*dNdy4;
+        K_7_7 += T26*dNdy4 + T27*dNdx4;
+    }
+    {   /* gauss-2x2 point 4 of 4: xi = 0.5773502691896257, eta = 0.5773502691896257, weight = 1 */
+        const double q0 = 0.5773502691896257*gx_1_1;
+        const double J00 = gx_1_0 + q0;
+        const double q1 = 0.5773502691896257*gy_1_1;
+        const double J01 = gy_1_0 + q1;
+        const double J10 = gx_0_1 + q0;
+        const double J11 = gy_0_1 + q1;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = -0.10566243270259355*Ji00 - 0.10566243270259355*Ji01;
+        const double dNdy1 = -0.10566243270259355*Ji10 - 0.10566243270259355*Ji11;
+        const double dNdx2 = 0.10566243270259355*Ji00 - 0.39433756729740643*Ji01;
+        const double dNdy2 = 0.10566243270259355*Ji10 - 0.39433756729740643*Ji11;
+        const double dNdx3 = 0.39433756729740643*Ji00 + 0.39433756729740643*Ji01;
+        const double dNdy3 = 0.39433756729740643*Ji10 + 0.39433756729740643*Ji11;
+        const double dNdx4 = 0.10566243270259355*Ji01 - 0.39433756729740643*Ji00;
+        const double dNdy4 = 0.10566243270259355*Ji11 - 0.39433756729740643*Ji10;
+        const double sc0 = detJ*t;
+        const double s1 = m0*sc0;
+        const double s2 = m1*sc0;
+        const double s3 = m2*sc0;
+        const double T4 = dNdx1*s1;
+        const double T6 = dNdy1*s3;
+        const double T7 = dNdy1*s2;
+        const double T8 = dNdy1*s1;
+        const double T9 = dNdx1*s3;
+        const double T10 = dNdx2*s1;
+        const double T11 = dNdx2*s2;
+        const double T12 = dNdy2*s3;
+        const double T13 = dNdy2*s2;
+        const double T14 = dNdy2*s1;
+        const double T15 = dNdx2*s3;
+        const double T16 = dNdx3*s1;
+        const double T17 = dNdx3*s2;
+        const double T18 = dNdy3*s3;
+        const double T19 = dNdy3*s2;
+        const double T20 = dNdy3*s1;
+        const double T21 = dNdx3*s3;
+        const double T22 = dNdx4*s1;
+        const double T23 = dNdx4*s2;
+        const double T24 = dNdy4*s3;
+        const double T25 = dNdy4*s2;
+        const double T26 = dNdy4*s1;
+        const double T27 = dNdx4*s3;
+        K_0_0 += T4*dNdx1 + T6*dNdy1;
+        K_0_1 += T7*dNdx1 + T9*dNdy1;
+        K_0_2 += T10*dNdx1 + T12*dNdy1;
+        K_0_3 += T13*dNdx1 + T15*dNdy1;
+        K_0_4 += T16*dNdx1 + T18*dNdy1;
+        K_0_5 += T19*dNdx1 + T21*dNdy1;
+        K_0_6 += T22*dNdx1 + T24*dNdy1;
+        K_0_7 += T25*dNdx1 + T27*dNdy1;
+        K_1_1 += T8*dNdy1 + T9*dNdx1;
+        K_1_2 += T11*dNdy1 + T12*dNdx1;
+        K_1_3 += T14*dNdy1 + T15*dNdx1;
+        K_1_4 += T17*dNdy1 + T18*dNdx1;
+        K_1_5 += T20*dNdy1 + T21*dNdx1;
+        K_1_6 += T23*dNdy1 + T24*dNdx1;
+        K_1_7 += T26*dNdy1 + T27*dNdx1;
+        K_2_2 += T10*dNdx2 + T12*dNdy2;
+        K_2_3 += T13*dNdx2 + T15*dNdy2;
+        K_2_4 += T16*dNdx2 + T18*dNdy2;
+        K_2_5 += T19*dNdx2 + T21*dNdy2;
+        K_2_6 += T22*dNdx2 + T24*dNdy2;
+        K_2_7 += T25*dNdx2 + T27*dNdy2;
+        K_3_3 += T14*dNdy2 + T15*dNdx2;
+        K_3_4 += T17*dNdy2 + T18*dNdx2;
+        K_3_5 += T20*dNdy2 + T21*dNdx2;
+        K_3_6 += T23*dNdy2 + T24*dNdx2;
+        K_3_7 += T26*dNdy2 + T27*dNdx2;
+        K_4_4 += T16*dNdx3 + T18*dNdy3;
+        K_4_5 += T19*dNdx3 + T21*dNdy3;
+        K_4_6 += T22*dNdx3 + T24*dNdy3;
+        K_4_7 += T25*dNdx3 + T27*dNdy3;
+        K_5_5 += T20*dNdy3 + T21*dNdx3;
+        K_5_6 += T23*dNdy3 + T24*dNdx3;
+        K_5_7 += T26*dNdy3 + T27*dNdx3;
+        K_6_6 += T22*dNdx4 + T24*dNdy4;
+        K_6_7 += T25*dNdx4 + T27*dNdy4;
+        K_7_7 += T26*dNdy4 + T27*dNdx4;
+    }
+    {   /* gauss-1x1 point 1 of 1: xi = 0, eta = 0, weight = 4 */
+        const double detJ = gx_1_0*gy_0_1 - gx_0_1*gy_1_0;
+        const double idet = 1.0/detJ;
+        const double Ji00 = gy_0_1*idet;
+        const double Ji01 = -gy_1_0*idet;
+        const double Ji10 = -gx_0_1*idet;
+        const double Ji11 = gx_1_0*idet;
+        const double q0 = -0.25*Ji00;
+        const double q1 = -0.25*Ji01;
+        const double dNdx1 = q0 + q1;
+        const double q2 = -0.25*Ji10;
+        const double q3 = -0.25*Ji11;
+        const double dNdy1 = q2 + q3;
+        const double q4 = 0.25*Ji00;
+        const double dNdx2 = q1 + q4;
+        const double q5 = 0.25*Ji10;
+        const double dNdy2 = q3 + q5;
+        const double q6 = 0.25*Ji01;
+        const double dNdx3 = q4 + q6;
+        const double q7 = 0.25*Ji11;
+        const double dNdy3 = q5 + q7;
+        const double dNdx4 = q0 + q6;
+        const double dNdy4 = q2 + q7;
+        const double sc28 = 4.0*detJ*t;
+        const double s29 = m3*sc28;
+        const double T30 = dNdx1*s29;
+        const double T31 = dNdy1*s29;
+        const double T32 = dNdx2*s29;
+        const double T33 = dNdy2*s29;
+        const double T34 = dNdx3*s29;
+        const double T35 = dNdy3*s29;
+        const double T36 = dNdx4*s29;
+        const double T37 = dNdy4*s29;
+        K_0_0 += T30*dNdx1;
+        K_0_1 += T31*dNdx1;
+        K_0_2 += T32*dNdx1;
+        K_0_3 += T33*dNdx1;
+        K_0_4 += T34*dNdx1;
+        K_0_5 += T35*dNdx1;
+        K_0_6 += T36*dNdx1;
+        K_0_7 += T37*dNdx1;
+        K_1_1 += T31*dNdy1;
+        K_1_2 += T32*dNdy1;
+        K_1_3 += T33*dNdy1;
+        K_1_4 += T34*dNdy1;
+        K_1_5 += T35*dNdy1;
+        K_1_6 += T36*dNdy1;
+        K_1_7 += T37*dNdy1;
+        K_2_2 += T32*dNdx2;
+        K_2_3 += T33*dNdx2;
+        K_2_4 += T34*dNdx2;
+        K_2_5 += T35*dNdx2;
+        K_2_6 += T36*dNdx2;
+        K_2_7 += T37*dNdx2;
+        K_3_3 += T33*dNdy2;
+        K_3_4 += T34*dNdy2;
+        K_3_5 += T35*dNdy2;
+        K_3_6 += T36*dNdy2;
+        K_3_7 += T37*dNdy2;
+        K_4_4 += T34*dNdx3;
+        K_4_5 += T35*dNdx3;
+        K_4_6 += T36*dNdx3;
+        K_4_7 += T37*dNdx3;
+        K_5_5 += T35*dNdy3;
+        K_5_6 += T36*dNdy3;
+        K_5_7 += T37*dNdy3;
+        K_6_6 += T36*dNdx4;
+        K_6_7 += T37*dNdx4;
+        K_7_7 += T37*dNdy4;
+    }
+    K[0 * sk] = K_0_0;
+    K[1 * sk] = K_0_1;
+    K[2 * sk] = K_0_2;
+    K[3 * sk] = K_0_3;
+    K[4 * sk] = K_0_4;
+    K[5 * sk] = K_0_5;
+    K[6 * sk] = K_0_6;
+    K[7 * sk] = K_0_7;
+    K[8 * sk] = K_0_1;
+    K[9 * sk] = K_1_1;
+    K[10 * sk] = K_1_2;
+    K[11 * sk] = K_1_3;
+    K[12 * sk] = K_1_4;
+    K[13 * sk] = K_1_5;
+    K[14 * sk] = K_1_6;
+    K[15 * sk] = K_1_7;
+    K[16 * sk] = K_0_2;
+    K[17 * sk] = K_1_2;
+    K[18 * sk] = K_2_2;
+    K[19 * sk] = K_2_3;
+    K[20 * sk] = K_2_4;
+    K[21 * sk] = K_2_5;
+    K[22 * sk] = K_2_6;
+    K[23 * sk] = K_2_7;
+    K[24 * sk] = K_0_3;
+    K[25 * sk] = K_1_3;
+    K[26 * sk] = K_2_3;
+    K[27 * sk] = K_3_3;
+    K[28 * sk] = K_3_4;
+    K[29 * sk] = K_3_5;
+    K[30 * sk] = K_3_6;
+    K[31 * sk] = K_3_7;
+    K[32 * sk] = K_0_4;
+    K[33 * sk] = K_1_4;
+    K[34 * sk] = K_2_4;
+    K[35 * sk] = K_3_4;
+    K[36 * sk] = K_4_4;
+    K[37 * sk] = K_4_5;
+    K[38 * sk] = K_4_6;
+    K[39 * sk] = K_4_7;
+    K[40 * sk] = K_0_5;
+    K[41 * sk] = K_1_5;
+    K[42 * sk] = K_2_5;
+    K[43 * sk] = K_3_5;
+    K[44 * sk] = K_4_5;
+    K[45 * sk] = K_5_5;
+    K[46 * sk] = K_5_6;
+    K[47 * sk] = K_5_7;
+    K[48 * sk] = K_0_6;
+    K[49 * sk] = K_1_6;
+    K[50 * sk] = K_2_6;
+    K[51 * sk] = K_3_6;
+    K[52 * sk] = K_4_6;
+    K[53 * sk] = K_5_6;
+    K[54 * sk] = K_6_6;
+    K[55 * sk] = K_6_7;
+    K[56 * sk] = K_0_7;
+    K[57 * sk] = K_1_7;
+    K[58 * sk] = K_2_7;
+    K[59 * sk] = K_3_7;
+    K[60 * sk] = K_4_7;
+    K[61 * sk] = K_5_7;
+    K[62 * sk] = K_6_7;
+    K[63 * sk] = K_7_7;
+}
+
+void derive_q4_selective_plane_stress_stiffness(const double *restrict xy, double E, double nu, double t, double *restrict K)
+{
+    double mat[NMAT];
+    q4_selective_plane_stress_material(E, nu, t, mat);
+    q4_selective_plane_stress_stiffness_body(xy, 1, mat, K, 1);
+}
+
+void derive_q4_selective_plane_stress_stiffness_batch(long n, const double *restrict xy, double E, double nu, double t,
+                                  double *restrict K)
+{
+    double mat[NMAT];
+    double in[NIN * LANES];
+    double out[NK * LANES];
+    q4_selective_plane_stress_material(E, nu, t, mat);
+    for (long b = 0; b < n; b += LANES) {
+        const long m = (n - b < LANES) ? (n - b) : LANES;
+        for (long l = 0; l < LANES; ++l) {
+            const double *restrict src = xy + (size_t)(b + (l < m ? l : 0)) * NIN;
+            for (int k = 0; k < NIN; ++k)
+                in[k * LANES + l] = src[k];
+        }
+#pragma omp simd
+        for (int l = 0; l < LANES; ++l)
+            q4_selective_plane_stress_stiffness_body(in + l, LANES, mat, out + l, LANES);
+        for (long l = 0; l < m; ++l) {
+            double *restrict dst = K + (size_t)(b + l) * NK;
+            for (int k = 0; k < NK; ++k)
+                dst[k] = out[k * LANES + l];
+        }
+    }
+}
+
+/* minimum of det J over the points of the full rule, one element */
+static inline void q4_selective_plane_stress_validity_body(const double *restrict xy, double *restrict detJ_min)
+{
+    const double x1 = xy[0];
+    const double y1 = xy[1];
+    const double x2 = xy[2];
+    const double y2 = xy[3];
+    const double x3 = xy[4];
+    const double y3 = xy[5];
+    const double x4 = xy[6];
+    const double y4 = xy[7];
+    /* element quantities: map coefficients, centre Jacobian */
+    const double gx_0_1 = -0.25*x1 - 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gx_1_0 = -0.25*x1 - 0.25*x4 + 0.25*x2 + 0.25*x3;
+    const double gx_1_1 = -0.25*x2 - 0.25*x4 + 0.25*x1 + 0.25*x3;
+    const double gy_0_1 = -0.25*y1 - 0.25*y2 + 0.25*y3 + 0.25*y4;
+    const double gy_1_0 = -0.25*y1 - 0.25*y4 + 0.25*y2 + 0.25*y3;
+    const double gy_1_1 = -0.25*y2 - 0.25*y4 + 0.25*y1 + 0.25*y3;
+    double dmin;
+    {   /* gauss-2x2 point 1 of 4: xi = -0.5773502691896257, eta = -0.5773502691896257, weight = 1 */
+        const double q0 = -0.5773502691896257*gx_1_1;
+        const double J00 = gx_1_0 + q0;
+        const double q1 = -0.5773502691896257*gy_1_1;
+        const double J01 = gy_1_0 + q1;
+        const double J10 = gx_0_1 + q0;
+        const double J11 = gy_0_1 + q1;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = detJ;
+    }
+    {   /* gauss-2x2 point 2 of 4: xi = 0.5773502691896257, eta = -0.5773502691896257, weight = 1 */
+        const double J00 = gx_1_0 - 0.5773502691896257*gx_1_1;
+        const double J01 = gy_1_0 - 0.5773502691896257*gy_1_1;
+        const double J10 = gx_0_1 + 0.5773502691896257*gx_1_1;
+        const double J11 = gy_0_1 + 0.5773502691896257*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    {   /* gauss-2x2 point 3 of 4: xi = -0.5773502691896257, eta = 0.5773502691896257, weight = 1 */
+        const double J00 = gx_1_0 + 0.5773502691896257*gx_1_1;
+        const double J01 = gy_1_0 + 0.5773502691896257*gy_1_1;
+        const double J10 = gx_0_1 - 0.5773502691896257*gx_1_1;
+        const double J11 = gy_0_1 - 0.5773502691896257*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    {   /* gauss-2x2 point 4 of 4: xi = 0.5773502691896257, eta = 0.5773502691896257, weight = 1 */
+        const double q0 = 0.5773502691896257*gx_1_1;
+        const double J00 = gx_1_0 + q0;
+        const double q1 = 0.5773502691896257*gy_1_1;
+        const double J01 = gy_1_0 + q1;
+        const double J10 = gx_0_1 + q0;
+        const double J11 = gy_0_1 + q1;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    *detJ_min = dmin;
+}
+
+void derive_q4_selective_plane_stress_validity(long n, const double *restrict xy, double *restrict detJ_min)
+{
+    for (long e = 0; e < n; ++e)
+        q4_selective_plane_stress_validity_body(xy + (size_t)e * NIN, detJ_min + e);
+}
+
+/* strain and stress at the 4 points of the full rule, one element */
+static inline void q4_selective_plane_stress_recovery_body(const double *restrict xy, const double *restrict u,
+                                            const double *restrict mat, double *restrict strain,
+                                            double *restrict stress)
+{
+    const double x1 = xy[0];
+    const double y1 = xy[1];
+    const double x2 = xy[2];
+    const double y2 = xy[3];
+    const double x3 = xy[4];
+    const double y3 = xy[5];
+    const double x4 = xy[6];
+    const double y4 = xy[7];
+    const double u1 = u[0];
+    const double u2 = u[1];
+    const double u3 = u[2];
+    const double u4 = u[3];
+    const double u5 = u[4];
+    const double u6 = u[5];
+    const double u7 = u[6];
+    const double u8 = u[7];
+    const double m4 = mat[7];
+    const double m5 = mat[8];
+    const double m6 = mat[9];
+    /* element quantities: map coefficients, centre Jacobian */
+    const double gx_0_1 = -0.25*x1 - 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gx_1_0 = -0.25*x1 - 0.25*x4 + 0.25*x2 + 0.25*x3;
+    const double gx_1_1 = -0.25*x2 - 0.25*x4 + 0.25*x1 + 0.25*x3;
+    const double gy_0_1 = -0.25*y1 - 0.25*y2 + 0.25*y3 + 0.25*y4;
+    const double gy_1_0 = -0.25*y1 - 0.25*y4 + 0.25*y2 + 0.25*y3;
+    const double gy_1_1 = -0.25*y2 - 0.25*y4 + 0.25*y1 + 0.25*y3;
+    {   /* gauss-2x2 point 1 of 4: xi = -0.5773502691896257, eta = -0.5773502691896257, weight = 1 */
+        const double q0 = -0.5773502691896257*gx_1_1;
+        const double J00 = gx_1_0 + q0;
+        const double q1 = -0.5773502691896257*gy_1_1;
+        const double J01 = gy_1_0 + q1;
+        const double J10 = gx_0_1 + q0;
+        const double J11 = gy_0_1 + q1;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = -0.39433756729740643*Ji00 - 0.39433756729740643*Ji01;
+        const double dNdy1 = -0.39433756729740643*Ji10 - 0.39433756729740643*Ji11;
+        const double dNdx2 = 0.39433756729740643*Ji00 - 0.10566243270259355*Ji01;
+        const double dNdy2 = 0.39433756729740643*Ji10 - 0.10566243270259355*Ji11;
+        const double dNdx3 = 0.10566243270259355*Ji00 + 0.10566243270259355*Ji01;
+        const double dNdy3 = 0.10566243270259355*Ji10 + 0.10566243270259355*Ji11;
+        const double dNdx4 = 0.39433756729740643*Ji01 - 0.10566243270259355*Ji00;
+        const double dNdy4 = 0.39433756729740643*Ji11 - 0.10566243270259355*Ji10;
+        const double eps38 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7;
+        const double eps39 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8;
+        const double eps40 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5
+            + dNdy4*u7;
+        strain[0] = eps38;
+        strain[1] = eps39;
+        strain[2] = eps40;
+        stress[0] = eps38*m4 + eps39*m5;
+        stress[1] = eps38*m5 + eps39*m4;
+        stress[2] = eps40*m6;
+    }
+    {   /* gauss-2x2 point 2 of 4: xi = 0.5773502691896257, eta = -0.5773502691896257, weight = 1 */
+        const double J00 = gx_1_0 - 0.5773502691896257*gx_1_1;
+        const double J01 = gy_1_0 - 0.5773502691896257*gy_1_1;
+        const double J10 = gx_0_1 + 0.5773502691896257*gx_1_1;
+        const double J11 = gy_0_1 + 0.5773502691896257*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = -0.10566243270259355*Ji01 - 0.39433756729740643*Ji00;
+        const double dNdy1 = -0.10566243270259355*Ji11 - 0.39433756729740643*Ji10;
+        const double dNdx2 = 0.39433756729740643*Ji00 - 0.39433756729740643*Ji01;
+        const double dNdy2 = 0.39433756729740643*Ji10 - 0.39433756729740643*Ji11;
+        const double dNdx3 = 0.10566243270259355*Ji00 + 0.39433756729740643*Ji01;
+        const double dNdy3 = 0.10566243270259355*Ji10 + 0.39433756729740643*Ji11;
+        const double dNdx4 = 0.10566243270259355*Ji01 - 0.10566243270259355*Ji00;
+        const double dNdy4 = 0.10566243270259355*Ji11 - 0.10566243270259355*Ji10;
+        const double eps38 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7;
+        const double eps39 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8;
+        const double eps40 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5
+            + dNdy4*u7;
+        strain[3] = eps38;
+        strain[4] = eps39;
+        strain[5] = eps40;
+        stress[3] = eps38*m4 + eps39*m5;
+        stress[4] = eps38*m5 + eps39*m4;
+        stress[5] = eps40*m6;
+    }
+    {   /* gauss-2x2 point 3 of 4: xi = -0.5773502691896257, eta = 0.5773502691896257, weight = 1 */
+        const double J00 = gx_1_0 + 0.5773502691896257*gx_1_1;
+        const double J01 = gy_1_0 + 0.5773502691896257*gy_1_1;
+        const double J10 = gx_0_1 - 0.5773502691896257*gx_1_1;
+        const double J11 = gy_0_1 - 0.5773502691896257*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = -0.10566243270259355*Ji00 - 0.39433756729740643*Ji01;
+        const double dNdy1 = -0.10566243270259355*Ji10 - 0.39433756729740643*Ji11;
+        const double dNdx2 = 0.10566243270259355*Ji00 - 0.10566243270259355*Ji01;
+        const double dNdy2 = 0.10566243270259355*Ji10 - 0.10566243270259355*Ji11;
+        const double dNdx3 = 0.10566243270259355*Ji01 + 0.39433756729740643*Ji00;
+        const double dNdy3 = 0.10566243270259355*Ji11 + 0.39433756729740643*Ji10;
+        const double dNdx4 = 0.39433756729740643*Ji01 - 0.39433756729740643*Ji00;
+        const double dNdy4 = 0.39433756729740643*Ji11 - 0.39433756729740643*Ji10;
+        const double eps38 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7;
+        const double eps39 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8;
+        const double eps40 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5
+            + dNdy4*u7;
+        strain[6] = eps38;
+        strain[7] = eps39;
+        strain[8] = eps40;
+        stress[6] = eps38*m4 + eps39*m5;
+        stress[7] = eps38*m5 + eps39*m4;
+        stress[8] = eps40*m6;
+    }
+    {   /* gauss-2x2 point 4 of 4: xi = 0.5773502691896257, eta = 0.5773502691896257, weight = 1 */
+        const double q0 = 0.5773502691896257*gx_1_1;
+        const double J00 = gx_1_0 + q0;
+        const double q1 = 0.5773502691896257*gy_1_1;
+        const double J01 = gy_1_0 + q1;
+        const double J10 = gx_0_1 + q0;
+        const double J11 = gy_0_1 + q1;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = -0.10566243270259355*Ji00 - 0.10566243270259355*Ji01;
+        const double dNdy1 = -0.10566243270259355*Ji10 - 0.10566243270259355*Ji11;
+        const double dNdx2 = 0.10566243270259355*Ji00 - 0.39433756729740643*Ji01;
+        const double dNdy2 = 0.10566243270259355*Ji10 - 0.39433756729740643*Ji11;
+        const double dNdx3 = 0.39433756729740643*Ji00 + 0.39433756729740643*Ji01;
+        const double dNdy3 = 0.39433756729740643*Ji10 + 0.39433756729740643*Ji11;
+        const double dNdx4 = 0.10566243270259355*Ji01 - 0.39433756729740643*Ji00;
+        const double dNdy4 = 0.10566243270259355*Ji11 - 0.39433756729740643*Ji10;
+        const double eps38 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7;
+        const double eps39 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8;
+        const double eps40 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5
+            + dNdy4*u7;
+        strain[9] = eps38;
+        strain[10] = eps39;
+        strain[11] = eps40;
+        stress[9] = eps38*m4 + eps39*m5;
+        stress[10] = eps38*m5 + eps39*m4;
+        stress[11] = eps40*m6;
+    }
+}
+
+void derive_q4_selective_plane_stress_recovery(long n, const double *restrict xy, const double *restrict u, double E, double nu,
+                           double *restrict strain, double *restrict stress)
+{
+    double mat[NMAT];
+    q4_selective_plane_stress_material(E, nu, 1.0, mat);
+    for (long e = 0; e < n; ++e)
+        q4_selective_plane_stress_recovery_body(xy + (size_t)e * NIN, u + (size_t)e * 8, mat,
+                                 strain + (size_t)e * 12, stress + (size_t)e * 12);
+}

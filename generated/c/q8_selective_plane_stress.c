@@ -1,0 +1,1594 @@
+/*
+ * derive generated kernel: Q8 selective plane-stress
+ * 
+ * element      Q8, 8 nodes, 16 DOFs interleaved u1, v1, u2, v2, ...
+ * formulation  selective integration: volumetric part of D with the reduced rule [Doherty, Wilson & Taylor (1969); Hughes (1987) Sec. 4.4]
+ * integration  B^T D_dev B: gauss-3x3 (9 points); B^T D_vol B (reduced rule): gauss-2x2 (4 points)
+ * flops        stiffness 1206, validity 330, recovery 1312 per element (add, mul, div, sqrt)
+ * 
+ * arguments (units-agnostic; any consistent set of units):
+ *   xy      nodal coordinates, shape (n, 8, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+ *   E       Young's modulus (> 0), scalar
+ *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
+ *   t       thickness t (the out-of-plane thickness)
+ *   u       nodal displacements for recovery, shape (n, 16), interleaved u1, v1, u2, v2, ...
+ *   K       stiffness, shape (n, 16, 16), DOFs interleaved u1, v1, u2, v2, ...; symmetric
+ *   detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted or degenerate element
+ *   strain  recovery: strain at the 9 points of gauss-3x3, shape (n, 9, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
+ *   stress  recovery: stress D strain at the same points, shape (n, 9, 3), [sigma_xx, sigma_yy, tau_xy]
+ * 
+ * The kernels do not check their inputs; derive.kernel() checks shapes, finite
+ * coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
+ * generator    derive.codegen 1.0; regenerate with
+ *              derive kernel Q8 --variant selective --state plane-stress --lang c
+ *
+ * C99.  Compile e.g. with: cc -O3 -march=native -fopenmp-simd -c q8_selective_plane_stress.c
+ * Data layout: every array is dense, row-major (C order), float64.  The batch kernel
+ * copies 8 elements at a time into element-innermost scratch arrays so that the
+ * per-element body is vectorised across elements (one SIMD lane per element).
+ */
+#include <math.h>
+#include <stddef.h>
+#include "q8_selective_plane_stress.h"
+
+#define NIN 16
+#define NK 256
+#define NMAT 10
+#define LANES 8
+#if defined(__GNUC__)
+/* inlined into the lane loop so that the loop over elements vectorises */
+#define DERIVE_INLINE static inline __attribute__((always_inline))
+#else
+#define DERIVE_INLINE static inline
+#endif
+
+/* point tables of the rules evaluated in a loop: shape-function derivatives, weights, ... */
+static const double KS0_c0[9] = {
+    0.6, 0.6, 0.6, 0.0, 0.0, 0.0, 0.6, 0.6, 0.6
+};
+static const double KS0_c1[9] = {
+    -1.5491933384829668, 0.0, 1.5491933384829668, -1.5491933384829668, 0.0, 1.5491933384829668,
+    -1.5491933384829668, 0.0, 1.5491933384829668
+};
+static const double KS0_c10[9] = {
+    -0.13094750193111254, -0.3872983346207417, -0.3436491673103708, -0.04364916731037084, 0.0,
+    0.3436491673103708, 0.04364916731037084, 0.3872983346207417, 1.0309475019311125
+};
+static const double KS0_c11[9] = {
+    -0.04364916731037084, 0.04364916731037084, 0.13094750193111254, -0.3872983346207417, 0.0,
+    0.3872983346207417, -1.0309475019311125, -0.3436491673103708, 0.3436491673103708
+};
+static const double KS0_c12[9] = {
+    -0.3436491673103708, -0.3872983346207417, -0.13094750193111254, 0.3436491673103708, 0.0,
+    -0.04364916731037084, 1.0309475019311125, 0.3872983346207417, 0.04364916731037084
+};
+static const double KS0_c13[9] = {
+    1.3745966692414833, 0.0, -1.3745966692414833, 0.7745966692414834, 0.0, -0.7745966692414834,
+    0.17459666924148337, 0.0, -0.17459666924148337
+};
+static const double KS0_c14[9] = {
+    -0.2, -0.5, -0.2, -0.2, -0.5, -0.2, -0.2, -0.5, -0.2
+};
+static const double KS0_c15[9] = {
+    0.2, 0.2, 0.2, 0.5, 0.5, 0.5, 0.2, 0.2, 0.2
+};
+static const double KS0_c16[9] = {
+    0.17459666924148337, 0.7745966692414834, 1.3745966692414833, 0.0, 0.0, 0.0,
+    -0.17459666924148337, -0.7745966692414834, -1.3745966692414833
+};
+static const double KS0_c17[9] = {
+    0.17459666924148337, 0.0, -0.17459666924148337, 0.7745966692414834, 0.0, -0.7745966692414834,
+    1.3745966692414833, 0.0, -1.3745966692414833
+};
+static const double KS0_c18[9] = {
+    0.2, 0.5, 0.2, 0.2, 0.5, 0.2, 0.2, 0.5, 0.2
+};
+static const double KS0_c19[9] = {
+    -0.2, -0.2, -0.2, -0.5, -0.5, -0.5, -0.2, -0.2, -0.2
+};
+static const double KS0_c2[9] = {
+    1.2, 0.0, -1.2, 0.0, 0.0, 0.0, -1.2, 0.0, 1.2
+};
+static const double KS0_c20[9] = {
+    1.3745966692414833, 0.7745966692414834, 0.17459666924148337, 0.0, 0.0, 0.0, -1.3745966692414833,
+    -0.7745966692414834, -0.17459666924148337
+};
+static const double KS0_c3[9] = {
+    -1.5491933384829668, -1.5491933384829668, -1.5491933384829668, 0.0, 0.0, 0.0,
+    1.5491933384829668, 1.5491933384829668, 1.5491933384829668
+};
+static const double KS0_c4[9] = {
+    0.6, 0.0, 0.6, 0.6, 0.0, 0.6, 0.6, 0.0, 0.6
+};
+static const double KS0_c5[9] = {
+    -1.0309475019311125, -0.3436491673103708, 0.3436491673103708, -0.3872983346207417, 0.0,
+    0.3872983346207417, -0.04364916731037084, 0.04364916731037084, 0.13094750193111254
+};
+static const double KS0_c6[9] = {
+    -1.0309475019311125, -0.3872983346207417, -0.04364916731037084, -0.3436491673103708, 0.0,
+    0.04364916731037084, 0.3436491673103708, 0.3872983346207417, 0.13094750193111254
+};
+static const double KS0_c7[9] = {
+    -0.3436491673103708, 0.3436491673103708, 1.0309475019311125, -0.3872983346207417, 0.0,
+    0.3872983346207417, -0.13094750193111254, -0.04364916731037084, 0.04364916731037084
+};
+static const double KS0_c8[9] = {
+    -0.04364916731037084, -0.3872983346207417, -1.0309475019311125, 0.04364916731037084, 0.0,
+    -0.3436491673103708, 0.13094750193111254, 0.3872983346207417, 0.3436491673103708
+};
+static const double KS0_c9[9] = {
+    -0.13094750193111254, -0.04364916731037084, 0.04364916731037084, -0.3872983346207417, 0.0,
+    0.3872983346207417, -0.3436491673103708, 0.3436491673103708, 1.0309475019311125
+};
+static const double KS0_eta[9] = {
+    -0.7745966692414834, -0.7745966692414834, -0.7745966692414834, 0.0, 0.0, 0.0,
+    0.7745966692414834, 0.7745966692414834, 0.7745966692414834
+};
+static const double KS0_w[9] = {
+    0.30864197530864196, 0.49382716049382713, 0.30864197530864196, 0.49382716049382713,
+    0.7901234567901234, 0.49382716049382713, 0.30864197530864196, 0.49382716049382713,
+    0.30864197530864196
+};
+static const double KS0_xi[9] = {
+    -0.7745966692414834, 0.0, 0.7745966692414834, -0.7745966692414834, 0.0, 0.7745966692414834,
+    -0.7745966692414834, 0.0, 0.7745966692414834
+};
+static const double KS1_c0[4] = {
+    0.3333333333333333, 0.3333333333333333, 0.3333333333333333, 0.3333333333333333
+};
+static const double KS1_c1[4] = {
+    -1.1547005383792515, 1.1547005383792515, -1.1547005383792515, 1.1547005383792515
+};
+static const double KS1_c10[4] = {
+    -0.18301270189221933, -0.22767090063073978, 0.06100423396407311, 0.6830127018922193
+};
+static const double KS1_c11[4] = {
+    -0.06100423396407311, 0.18301270189221933, -0.6830127018922193, 0.22767090063073978
+};
+static const double KS1_c12[4] = {
+    -0.22767090063073978, -0.18301270189221933, 0.6830127018922193, 0.06100423396407311
+};
+static const double KS1_c13[4] = {
+    0.9106836025229591, -0.9106836025229591, 0.24401693585629244, -0.24401693585629244
+};
+static const double KS1_c14[4] = {
+    -0.3333333333333333, -0.3333333333333333, -0.3333333333333333, -0.3333333333333333
+};
+static const double KS1_c15[4] = {
+    0.3333333333333333, 0.3333333333333333, 0.3333333333333333, 0.3333333333333333
+};
+static const double KS1_c16[4] = {
+    0.24401693585629244, 0.9106836025229591, -0.24401693585629244, -0.9106836025229591
+};
+static const double KS1_c17[4] = {
+    0.24401693585629244, -0.24401693585629244, 0.9106836025229591, -0.9106836025229591
+};
+static const double KS1_c18[4] = {
+    0.3333333333333333, 0.3333333333333333, 0.3333333333333333, 0.3333333333333333
+};
+static const double KS1_c19[4] = {
+    -0.3333333333333333, -0.3333333333333333, -0.3333333333333333, -0.3333333333333333
+};
+static const double KS1_c2[4] = {
+    0.6666666666666666, -0.6666666666666666, -0.6666666666666666, 0.6666666666666666
+};
+static const double KS1_c20[4] = {
+    0.9106836025229591, 0.24401693585629244, -0.9106836025229591, -0.24401693585629244
+};
+static const double KS1_c3[4] = {
+    -1.1547005383792515, -1.1547005383792515, 1.1547005383792515, 1.1547005383792515
+};
+static const double KS1_c4[4] = {
+    0.3333333333333333, 0.3333333333333333, 0.3333333333333333, 0.3333333333333333
+};
+static const double KS1_c5[4] = {
+    -0.6830127018922193, 0.22767090063073978, -0.06100423396407311, 0.18301270189221933
+};
+static const double KS1_c6[4] = {
+    -0.6830127018922193, -0.06100423396407311, 0.22767090063073978, 0.18301270189221933
+};
+static const double KS1_c7[4] = {
+    -0.22767090063073978, 0.6830127018922193, -0.18301270189221933, 0.06100423396407311
+};
+static const double KS1_c8[4] = {
+    -0.06100423396407311, -0.6830127018922193, 0.18301270189221933, 0.22767090063073978
+};
+static const double KS1_c9[4] = {
+    -0.18301270189221933, 0.06100423396407311, -0.22767090063073978, 0.6830127018922193
+};
+static const double KS1_eta[4] = {
+    -0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257
+};
+static const double KS1_w[4] = {
+    1.0, 1.0, 1.0, 1.0
+};
+static const double KS1_xi[4] = {
+    -0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257
+};
+
+/* material table: E, nu, t, then the material constants the kernels use */
+static inline void q8_selective_plane_stress_material(double E, double nu, double t, double *restrict mat)
+{
+    mat[0] = E;
+    mat[1] = nu;
+    mat[2] = t;
+    mat[3] = 2.0*E/(3.0 + 3.0*nu);   /* m0 */
+    mat[4] = -E/(3.0 + 3.0*nu);   /* m1 */
+    mat[5] = E/(2.0 + 2.0*nu);   /* m2 */
+    mat[6] = (-E - 2.0*E*nu)/(-3.0 + 3.0*nu*nu);   /* m3 */
+    mat[7] = E/(1.0 - nu*nu);   /* m4 */
+    mat[8] = E*nu/(1.0 - nu*nu);   /* m5 */
+    mat[9] = E*(0.5 - 0.5*nu)/(1.0 - nu*nu);   /* m6 */
+}
+
+/* stiffness of one element; xy[k * sx] is input k, K[k * sk] output k (row-major) */
+DERIVE_INLINE void q8_selective_plane_stress_stiffness_body(const double *restrict xy, const ptrdiff_t sx,
+                                             const double *restrict mat, double *restrict K,
+                                             const ptrdiff_t sk)
+{
+    const double x1 = xy[0 * sx];
+    const double y1 = xy[1 * sx];
+    const double x2 = xy[2 * sx];
+    const double y2 = xy[3 * sx];
+    const double x3 = xy[4 * sx];
+    const double y3 = xy[5 * sx];
+    const double x4 = xy[6 * sx];
+    const double y4 = xy[7 * sx];
+    const double x5 = xy[8 * sx];
+    const double y5 = xy[9 * sx];
+    const double x6 = xy[10 * sx];
+    const double y6 = xy[11 * sx];
+    const double x7 = xy[12 * sx];
+    const double y7 = xy[13 * sx];
+    const double x8 = xy[14 * sx];
+    const double y8 = xy[15 * sx];
+    const double t = mat[2];
+    const double m0 = mat[3];
+    const double m1 = mat[4];
+    const double m2 = mat[5];
+    const double m3 = mat[6];
+    /* element quantities: map coefficients, centre Jacobian */
+    const double gx_0_1 = 0.5*x7 - 0.5*x5;
+    const double gx_0_2 = -0.5*x6 - 0.5*x8 + 0.25*x1 + 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gx_1_0 = 0.5*x6 - 0.5*x8;
+    const double gx_1_1 = -0.25*x2 - 0.25*x4 + 0.25*x1 + 0.25*x3;
+    const double gx_1_2 = 0.5*x8 - 0.5*x6 - 0.25*x1 - 0.25*x4 + 0.25*x2 + 0.25*x3;
+    const double gx_2_0 = -0.5*x5 - 0.5*x7 + 0.25*x1 + 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gx_2_1 = 0.5*x5 - 0.5*x7 - 0.25*x1 - 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gy_0_1 = 0.5*y7 - 0.5*y5;
+    const double gy_0_2 = -0.5*y6 - 0.5*y8 + 0.25*y1 + 0.25*y2 + 0.25*y3 + 0.25*y4;
+    const double gy_1_0 = 0.5*y6 - 0.5*y8;
+    const double gy_1_1 = -0.25*y2 - 0.25*y4 + 0.25*y1 + 0.25*y3;
+    const double gy_1_2 = 0.5*y8 - 0.5*y6 - 0.25*y1 - 0.25*y4 + 0.25*y2 + 0.25*y3;
+    const double gy_2_0 = -0.5*y5 - 0.5*y7 + 0.25*y1 + 0.25*y2 + 0.25*y3 + 0.25*y4;
+    const double gy_2_1 = 0.5*y5 - 0.5*y7 - 0.25*y1 - 0.25*y2 + 0.25*y3 + 0.25*y4;
+    double K_0_0 = 0.0, K_0_1 = 0.0, K_0_2 = 0.0, K_0_3 = 0.0, K_0_4 = 0.0, K_0_5 = 0.0, K_0_6 = 0.0;
+    double K_0_7 = 0.0, K_0_8 = 0.0, K_0_9 = 0.0, K_0_10 = 0.0, K_0_11 = 0.0, K_0_12 = 0.0;
+    double K_0_13 = 0.0, K_0_14 = 0.0, K_0_15 = 0.0, K_1_1 = 0.0, K_1_2 = 0.0, K_1_3 = 0.0;
+    double K_1_4 = 0.0, K_1_5 = 0.0, K_1_6 = 0.0, K_1_7 = 0.0, K_1_8 = 0.0, K_1_9 = 0.0;
+    double K_1_10 = 0.0, K_1_11 = 0.0, K_1_12 = 0.0, K_1_13 = 0.0, K_1_14 = 0.0, K_1_15 = 0.0;
+    double K_2_2 = 0.0, K_2_3 = 0.0, K_2_4 = 0.0, K_2_5 = 0.0, K_2_6 = 0.0, K_2_7 = 0.0, K_2_8 = 0.0;
+    double K_2_9 = 0.0, K_2_10 = 0.0, K_2_11 = 0.0, K_2_12 = 0.0, K_2_13 = 0.0, K_2_14 = 0.0;
+    double K_2_15 = 0.0, K_3_3 = 0.0, K_3_4 = 0.0, K_3_5 = 0.0, K_3_6 = 0.0, K_3_7 = 0.0;
+    double K_3_8 = 0.0, K_3_9 = 0.0, K_3_10 = 0.0, K_3_11 = 0.0, K_3_12 = 0.0, K_3_13 = 0.0;
+    double K_3_14 = 0.0, K_3_15 = 0.0, K_4_4 = 0.0, K_4_5 = 0.0, K_4_6 = 0.0, K_4_7 = 0.0;
+    double K_4_8 = 0.0, K_4_9 = 0.0, K_4_10 = 0.0, K_4_11 = 0.0, K_4_12 = 0.0, K_4_13 = 0.0;
+    double K_4_14 = 0.0, K_4_15 = 0.0, K_5_5 = 0.0, K_5_6 = 0.0, K_5_7 = 0.0, K_5_8 = 0.0;
+    double K_5_9 = 0.0, K_5_10 = 0.0, K_5_11 = 0.0, K_5_12 = 0.0, K_5_13 = 0.0, K_5_14 = 0.0;
+    double K_5_15 = 0.0, K_6_6 = 0.0, K_6_7 = 0.0, K_6_8 = 0.0, K_6_9 = 0.0, K_6_10 = 0.0;
+    double K_6_11 = 0.0, K_6_12 = 0.0, K_6_13 = 0.0, K_6_14 = 0.0, K_6_15 = 0.0, K_7_7 = 0.0;
+    double K_7_8 = 0.0, K_7_9 = 0.0, K_7_10 = 0.0, K_7_11 = 0.0, K_7_12 = 0.0, K_7_13 = 0.0;
+    double K_7_14 = 0.0, K_7_15 = 0.0, K_8_8 = 0.0, K_8_9 = 0.0, K_8_10 = 0.0, K_8_11 = 0.0;
+    double K_8_12 = 0.0, K_8_13 = 0.0, K_8_14 = 0.0, K_8_15 = 0.0, K_9_9 = 0.0, K_9_10 = 0.0;
+    double K_9_11 = 0.0, K_9_12 = 0.0, K_9_13 = 0.0, K_9_14 = 0.0, K_9_15 = 0.0, K_10_10 = 0.0;
+    double K_10_11 = 0.0, K_10_12 = 0.0, K_10_13 = 0.0, K_10_14 = 0.0, K_10_15 = 0.0, K_11_11 = 0.0;
+    double K_11_12 = 0.0, K_11_13 = 0.0, K_11_14 = 0.0, K_11_15 = 0.0, K_12_12 = 0.0, K_12_13 = 0.0;
+    double K_12_14 = 0.0, K_12_15 = 0.0, K_13_13 = 0.0, K_13_14 = 0.0, K_13_15 = 0.0, K_14_14 = 0.0;
+    double K_14_15 = 0.0, K_15_15 = 0.0;
+    for (int p = 0; p < 9; ++p) {   /* gauss-3x3: loop over the 9 points */
+        const double c0 = KS0_c0[p];
+        const double c1 = KS0_c1[p];
+        const double c10 = KS0_c10[p];
+        const double c11 = KS0_c11[p];
+        const double c12 = KS0_c12[p];
+        const double c13 = KS0_c13[p];
+        const double c14 = KS0_c14[p];
+        const double c15 = KS0_c15[p];
+        const double c16 = KS0_c16[p];
+        const double c17 = KS0_c17[p];
+        const double c18 = KS0_c18[p];
+        const double c19 = KS0_c19[p];
+        const double c2 = KS0_c2[p];
+        const double c20 = KS0_c20[p];
+        const double c3 = KS0_c3[p];
+        const double c4 = KS0_c4[p];
+        const double c5 = KS0_c5[p];
+        const double c6 = KS0_c6[p];
+        const double c7 = KS0_c7[p];
+        const double c8 = KS0_c8[p];
+        const double c9 = KS0_c9[p];
+        const double eta = KS0_eta[p];
+        const double w = KS0_w[p];
+        const double xi = KS0_xi[p];
+        const double J00 = gx_1_0 + c0*gx_1_2 + c1*gx_2_0 + c2*gx_2_1 + eta*gx_1_1;
+        const double J01 = gy_1_0 + c0*gy_1_2 + c1*gy_2_0 + c2*gy_2_1 + eta*gy_1_1;
+        const double J10 = gx_0_1 + c2*gx_1_2 + c3*gx_0_2 + c4*gx_2_1 + gx_1_1*xi;
+        const double J11 = gy_0_1 + c2*gy_1_2 + c3*gy_0_2 + c4*gy_2_1 + gy_1_1*xi;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = Ji00*c5 + Ji01*c6;
+        const double dNdy1 = Ji10*c5 + Ji11*c6;
+        const double dNdx2 = Ji00*c7 + Ji01*c8;
+        const double dNdy2 = Ji10*c7 + Ji11*c8;
+        const double dNdx3 = Ji00*c9 + Ji01*c10;
+        const double dNdy3 = Ji10*c9 + Ji11*c10;
+        const double dNdx4 = Ji00*c11 + Ji01*c12;
+        const double dNdy4 = Ji10*c11 + Ji11*c12;
+        const double dNdx5 = Ji00*c13 + Ji01*c14;
+        const double dNdy5 = Ji10*c13 + Ji11*c14;
+        const double dNdx6 = Ji00*c15 + Ji01*c16;
+        const double dNdy6 = Ji10*c15 + Ji11*c16;
+        const double dNdx7 = Ji00*c17 + Ji01*c18;
+        const double dNdy7 = Ji10*c17 + Ji11*c18;
+        const double dNdx8 = Ji00*c19 + Ji01*c20;
+        const double dNdy8 = Ji10*c19 + Ji11*c20;
+        const double sc0 = detJ*t*w;
+        const double s1 = m0*sc0;
+        const double s2 = m1*sc0;
+        const double s3 = m2*sc0;
+        const double T4 = dNdx1*s1;
+        const double T6 = dNdy1*s3;
+        const double T7 = dNdy1*s2;
+        const double T8 = dNdy1*s1;
+        const double T9 = dNdx1*s3;
+        const double T10 = dNdx2*s1;
+        const double T11 = dNdx2*s2;
+        const double T12 = dNdy2*s3;
+        const double T13 = dNdy2*s2;
+        const double T14 = dNdy2*s1;
+        const double T15 = dNdx2*s3;
+        const double T16 = dNdx3*s1;
+        const double T17 = dNdx3*s2;
+        const double T18 = dNdy3*s3;
+        const double T19 = dNdy3*s2;
+        const double T20 = dNdy3*s1;
+        const double T21 = dNdx3*s3;
+        const double T22 = dNdx4*s1;
+        const double T23 = dNdx4*s2;
+        const double T24 = dNdy4*s3;
+        const double T25 = dNdy4*s2;
+        const double T26 = dNdy4*s1;
+        const double T27 = dNdx4*s3;
+        const double T28 = dNdx5*s1;
+        const double T29 = dNdx5*s2;
+        const double T30 = dNdy5*s3;
+        const double T31 = dNdy5*s2;
+        const double T32 = dNdy5*s1;
+        const double T33 = dNdx5*s3;
+        const double T34 = dNdx6*s1;
+        const double T35 = dNdx6*s2;
+        const double T36 = dNdy6*s3;
+        const double T37 = dNdy6*s2;
+        const double T38 = dNdy6*s1;
+        const double T39 = dNdx6*s3;
+        const double T40 = dNdx7*s1;
+        const double T41 = dNdx7*s2;
+        const double T42 = dNdy7*s3;
+        const double T43 = dNdy7*s2;
+        const double T44 = dNdy7*s1;
+        const double T45 = dNdx7*s3;
+        const double T46 = dNdx8*s1;
+        const double T47 = dNdx8*s2;
+        const double T48 = dNdy8*s3;
+        const double T49 = dNdy8*s2;
+        const double T50 = dNdy8*s1;
+        const double T51 = dNdx8*s3;
+        K_0_0 += T4*dNdx1 + T6*dNdy1;
+        K_0_1 += T7*dNdx1 + T9*dNdy1;
+        K_0_2 += T10*dNdx1 + T12*dNdy1;
+        K_0_3 += T13*dNdx1 + T15*dNdy1;
+        K_0_4 += T16*dNdx1 + T18*dNdy1;
+        K_0_5 += T19*dNdx1 + T21*dNdy1;
+        K_0_6 += T22*dNdx1 + T24*dNdy1;
+        K_0_7 += T25*dNdx1 + T27*dNdy1;
+        K_0_8 += T28*dNdx1 + T30*dNdy1;
+        K_0_9 += T31*dNdx1 + T33*dNdy1;
+        K_0_10 += T34*dNdx1 + T36*dNdy1;
+        K_0_11 += T37*dNdx1 + T39*dNdy1;
+        K_0_12 += T40*dNdx1 + T42*dNdy1;
+        K_0_13 += T43*dNdx1 + T45*dNdy1;
+        K_0_14 += T46*dNdx1 + T48*dNdy1;
+        K_0_15 += T49*dNdx1 + T51*dNdy1;
+        K_1_1 += T8*dNdy1 + T9*dNdx1;
+        K_1_2 += T11*dNdy1 + T12*dNdx1;
+        K_1_3 += T14*dNdy1 + T15*dNdx1;
+        K_1_4 += T17*dNdy1 + T18*dNdx1;
+        K_1_5 += T20*dNdy1 + T21*dNdx1;
+        K_1_6 += T23*dNdy1 + T24*dNdx1;
+        K_1_7 += T26*dNdy1 + T27*dNdx1;
+        K_1_8 += T29*dNdy1 + T30*dNdx1;
+        K_1_9 += T32*dNdy1 + T33*dNdx1;
+        K_1_10 += T35*dNdy1 + T36*dNdx1;
+        K_1_11 += T38*dNdy1 + T39*dNdx1;
+        K_1_12 += T41*dNdy1 + T42*dNdx1;
+        K_1_13 += T44*dNdy1 + T45*dNdx1;
+        K_1_14 += T47*dNdy1 + T48*dNdx1;
+        K_1_15 += T50*dNdy1 + T51*dNdx1;
+        K_2_2 += T10*dNdx2 + T12*dNdy2;
+        K_2_3 += T13*dNdx2 + T15*dNdy2;
+        K_2_4 += T16*dNdx2 + T18*dNdy2;
+        K_2_5 += T19*dNdx2 + T21*dNdy2;
+        K_2_6 += T22*dNdx2 + T24*dNdy2;
+        K_2_7 += T25*dNdx2 + T27*dNdy2;
+        K_2_8 += T28*dNdx2 + T30*dNdy2;
+        K_2_9 += T31*dNdx2 + T33*dNdy2;
+        K_2_10 += T34*dNdx2 + T36*dNdy2;
+        K_2_11 += T37*dNdx2 + T39*dNdy2;
+        K_2_12 += T40*dNdx2 + T42*dNdy2;
+        K_2_13 += T43*dNdx2 + T45*dNdy2;
+        K_2_14 += T46*dNdx2 + T48*dNdy2;
+        K_2_15 += T49*dNdx2 + T51*dNdy2;
+        K_3_3 += T14*dNdy2 + T15*dNdx2;
+        K_3_4 += T17*dNdy2 + T18*dNdx2;
+        K_3_5 += T20*dNdy2 + T21*dNdx2;
+        K_3_6 += T23*dNdy2 + T24*dNdx2;
+        K_3_7 += T26*dNdy2 + T27*dNdx2;
+        K_3_8 += T29*dNdy2 + T30*dNdx2;
+        K_3_9 += T32*dNdy2 + T33*dNdx2;
+        K_3_10 += T35*dNdy2 + T36*dNdx2;
+        K_3_11 += T38*dNdy2 + T39*dNdx2;
+        K_3_12 += T41*dNdy2 + T42*dNdx2;
+        K_3_13 += T44*dNdy2 + T45*dNdx2;
+        K_3_14 += T47*dNdy2 + T48*dNdx2;
+        K_3_15 += T50*dNdy2 + T51*dNdx2;
+        K_4_4 += T16*dNdx3 + T18*dNdy3;
+        K_4_5 += T19*dNdx3 + T21*dNdy3;
+        K_4_6 += T22*dNdx3 + T24*dNdy3;
+        K_4_7 += T25*dNdx3 + T27*dNdy3;
+        K_4_8 += T28*dNdx3 + T30*dNdy3;
+        K_4_9 += T31*dNdx3 + T33*dNdy3;
+        K_4_10 += T34*dNdx3 + T36*dNdy3;
+        K_4_11 += T37*dNdx3 + T39*dNdy3;
+        K_4_12 += T40*dNdx3 + T42*dNdy3;
+        K_4_13 += T43*dNdx3 + T45*dNdy3;
+        K_4_14 += T46*dNdx3 + T48*dNdy3;
+        K_4_15 += T49*dNdx3 + T51*dNdy3;
+        K_5_5 += T20*dNdy3 + T21*dNdx3;
+        K_5_6 += T23*dNdy3 + T24*dNdx3;
+        K_5_7 += T26*dNdy3 + T27*dNdx3;
+        K_5_8 += T29*dNdy3 + T30*dNdx3;
+        K_5_9 += T32*dNdy3 + T33*dNdx3;
+        K_5_10 += T35*dNdy3 + T36*dNdx3;
+        K_5_11 += T38*dNdy3 + T39*dNdx3;
+        K_5_12 += T41*dNdy3 + T42*dNdx3;
+        K_5_13 += T44*dNdy3 + T45*dNdx3;
+        K_5_14 += T47*dNdy3 + T48*dNdx3;
+        K_5_15 += T50*dNdy3 + T51*dNdx3;
+        K_6_6 += T22*dNdx4 + T24*dNdy4;
+        K_6_7 += T25*dNdx4 + T27*dNdy4;
+        K_6_8 += T28*dNdx4 + T30*dNdy4;
+        K_6_9 += T31*dNdx4 + T33*dNdy4;
+        K_6_10 += T34*dNdx4 + T36*dNdy4;
+        K_6_11 += T37*dNdx4 + T39*dNdy4;
+        K_6_12 += T40*dNdx4 + T42*dNdy4;
+        K_6_13 += T43*dNdx4 + T45*dNdy4;
+        K_6_14 += T46*dNdx4 + T48*dNdy4;
+        K_6_15 += T49*dNdx4 + T51*dNdy4;
+        K_7_7 += T26*dNdy4 + T27*dNdx4;
+        K_7_8 += T29*dNdy4 + T30*dNdx4;
+        K_7_9 += T32*dNdy4 + T33*dNdx4;
+        K_7_10 += T35*dNdy4 + T36*dNdx4;
+        K_7_11 += T38*dNdy4 + T39*dNdx4;
+        K_7_12 += T41*dNdy4 + T42*dNdx4;
+        K_7_13 += T44*dNdy4 + T45*dNdx4;
+        K_7_14 += T47*dNdy4 + T48*dNdx4;
+        K_7_15 += T50*dNdy4 + T51*dNdx4;
+        K_8_8 += T28*dNdx5 + T30*dNdy5;
+        K_8_9 += T31*dNdx5 + T33*dNdy5;
+        K_8_10 += T34*dNdx5 + T36*dNdy5;
+        K_8_11 += T37*dNdx5 + T39*dNdy5;
+        K_8_12 += T40*dNdx5 + T42*dNdy5;
+        K_8_13 += T43*dNdx5 + T45*dNdy5;
+        K_8_14 += T46*dNdx5 + T48*dNdy5;
+        K_8_15 += T49*dNdx5 + T51*dNdy5;
+        K_9_9 += T32*dNdy5 + T33*dNdx5;
+        K_9_10 += T35*dNdy5 + T36*dNdx5;
+        K_9_11 += T38*dNdy5 + T39*dNdx5;
+        K_9_12 += T41*dNdy5 + T42*dNdx5;
+        K_9_13 += T44*dNdy5 + T45*dNdx5;
+        K_9_14 += T47*dNdy5 + T48*dNdx5;
+        K_9_15 += T50*dNdy5 + T51*dNdx5;
+        K_10_10 += T34*dNdx6 + T36*dNdy6;
+        K_10_11 += T37*dNdx6 + T39*dNdy6;
+        K_10_12 += T40*dNdx6 + T42*dNdy6;
+        K_10_13 += T43*dNdx6 + T45*dNdy6;
+        K_10_14 += T46*dNdx6 + T48*dNdy6;
+        K_10_15 += T49*dNdx6 + T51*dNdy6;
+        K_11_11 += T38*dNdy6 + T39*dNdx6;
+        K_11_12 += T41*dNdy6 + T42*dNdx6;
+        K_11_13 += T44*dNdy6 + T45*dNdx6;
+        K_11_14 += T47*dNdy6 + T48*dNdx6;
+        K_11_15 += T50*dNdy6 + T51*dNdx6;
+        K_12_12 += T40*dNdx7 + T42*dNdy7;
+        K_12_13 += T43*dNdx7 + T45*dNdy7;
+        K_12_14 += T46*dNdx7 + T48*dNdy7;
+        K_12_15 += T49*dNdx7 + T51*dNdy7;
+        K_13_13 += T44*dNdy7 + T45*dNdx7;
+        K_13_14 += T47*dNdy7 + T48*dNdx7;
+        K_13_15 += T50*dNdy7 + T51*dNdx7;
+        K_14_14 += T46*dNdx8 + T48*dNdy8;
+        K_14_15 += T49*dNdx8 + T51*dNdy8;
+        K_15_15 += T50*dNdy8 + T51*dNdx8;
+    }
+    for (int p = 0; p < 4; ++p) {   /* gauss-2x2: loop over the 4 points */
+        const double c0 = KS1_c0[p];
+        const double c1 = KS1_c1[p];
+        const double c10 = KS1_c10[p];
+        const double c11 = KS1_c11[p];
+        const double c12 = KS1_c12[p];
+        const double c13 = KS1_c13[p];
+        const double c14 = KS1_c14[p];
+        const double c15 = KS1_c15[p];
+        const double c16 = KS1_c16[p];
+        const double c17 = KS1_c17[p];
+        const double c18 = KS1_c18[p];
+        const double c19 = KS1_c19[p];
+        const double c2 = KS1_c2[p];
+        const double c20 = KS1_c20[p];
+        const double c3 = KS1_c3[p];
+        const double c4 = KS1_c4[p];
+        const double c5 = KS1_c5[p];
+        const double c6 = KS1_c6[p];
+        const double c7 = KS1_c7[p];
+        const double c8 = KS1_c8[p];
+        const double c9 = KS1_c9[p];
+        const double eta = KS1_eta[p];
+        const double w = KS1_w[p];
+        const double xi = KS1_xi[p];
+        const double J00 = gx_1_0 + c0*gx_1_2 + c1*gx_2_0 + c2*gx_2_1 + eta*gx_1_1;
+        const double J01 = gy_1_0 + c0*gy_1_2 + c1*gy_2_0 + c2*gy_2_1 + eta*gy_1_1;
+        const double J10 = gx_0_1 + c2*gx_1_2 + c3*gx_0_2 + c4*gx_2_1 + gx_1_1*xi;
+        const double J11 = gy_0_1 + c2*gy_1_2 + c3*gy_0_2 + c4*gy_2_1 + gy_1_1*xi;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = Ji00*c5 + Ji01*c6;
+        const double dNdy1 = Ji10*c5 + Ji11*c6;
+        const double dNdx2 = Ji00*c7 + Ji01*c8;
+        const double dNdy2 = Ji10*c7 + Ji11*c8;
+        const double dNdx3 = Ji00*c9 + Ji01*c10;
+        const double dNdy3 = Ji10*c9 + Ji11*c10;
+        const double dNdx4 = Ji00*c11 + Ji01*c12;
+        const double dNdy4 = Ji10*c11 + Ji11*c12;
+        const double dNdx5 = Ji00*c13 + Ji01*c14;
+        const double dNdy5 = Ji10*c13 + Ji11*c14;
+        const double dNdx6 = Ji00*c15 + Ji01*c16;
+        const double dNdy6 = Ji10*c15 + Ji11*c16;
+        const double dNdx7 = Ji00*c17 + Ji01*c18;
+        const double dNdy7 = Ji10*c17 + Ji11*c18;
+        const double dNdx8 = Ji00*c19 + Ji01*c20;
+        const double dNdy8 = Ji10*c19 + Ji11*c20;
+        const double sc52 = detJ*t*w;
+        const double s53 = m3*sc52;
+        const double T54 = dNdx1*s53;
+        const double T55 = dNdy1*s53;
+        const double T56 = dNdx2*s53;
+        const double T57 = dNdy2*s53;
+        const double T58 = dNdx3*s53;
+        const double T59 = dNdy3*s53;
+        const double T60 = dNdx4*s53;
+        const double T61 = dNdy4*s53;
+        const double T62 = dNdx5*s53;
+        const double T63 = dNdy5*s53;
+        const double T64 = dNdx6*s53;
+        const double T65 = dNdy6*s53;
+        const double T66 = dNdx7*s53;
+        const double T67 = dNdy7*s53;
+        const double T68 = dNdx8*s53;
+        const double T69 = dNdy8*s53;
+        K_0_0 += T54*dNdx1;
+        K_0_1 += T55*dNdx1;
+        K_0_2 += T56*dNdx1;
+        K_0_3 += T57*dNdx1;
+        K_0_4 += T58*dNdx1;
+        K_0_5 += T59*dNdx1;
+        K_0_6 += T60*dNdx1;
+        K_0_7 += T61*dNdx1;
+        K_0_8 += T62*dNdx1;
+        K_0_9 += T63*dNdx1;
+        K_0_10 += T64*dNdx1;
+        K_0_11 += T65*dNdx1;
+        K_0_12 += T66*dNdx1;
+        K_0_13 += T67*dNdx1;
+        K_0_14 += T68*dNdx1;
+        K_0_15 += T69*dNdx1;
+        K_1_1 += T55*dNdy1;
+        K_1_2 += T56*dNdy1;
+        K_1_3 += T57*dNdy1;
+        K_1_4 += T58*dNdy1;
+        K_1_5 += T59*dNdy1;
+        K_1_6 += T60*dNdy1;
+        K_1_7 += T61*dNdy1;
+        K_1_8 += T62*dNdy1;
+        K_1_9 += T63*dNdy1;
+        K_1_10 += T64*dNdy1;
+        K_1_11 += T65*dNdy1;
+        K_1_12 += T66*dNdy1;
+        K_1_13 += T67*dNdy1;
+        K_1_14 += T68*dNdy1;
+        K_1_15 += T69*dNdy1;
+        K_2_2 += T56*dNdx2;
+        K_2_3 += T57*dNdx2;
+        K_2_4 += T58*dNdx2;
+        K_2_5 += T59*dNdx2;
+        K_2_6 += T60*dNdx2;
+        K_2_7 += T61*dNdx2;
+        K_2_8 += T62*dNdx2;
+        K_2_9 += T63*dNdx2;
+        K_2_10 += T64*dNdx2;
+        K_2_11 += T65*dNdx2;
+        K_2_12 += T66*dNdx2;
+        K_2_13 += T67*dNdx2;
+        K_2_14 += T68*dNdx2;
+        K_2_15 += T69*dNdx2;
+        K_3_3 += T57*dNdy2;
+        K_3_4 += T58*dNdy2;
+        K_3_5 += T59*dNdy2;
+        K_3_6 += T60*dNdy2;
+        K_3_7 += T61*dNdy2;
+        K_3_8 += T62*dNdy2;
+        K_3_9 += T63*dNdy2;
+        K_3_10 += T64*dNdy2;
+        K_3_11 += T65*dNdy2;
+        K_3_12 += T66*dNdy2;
+        K_3_13 += T67*dNdy2;
+        K_3_14 += T68*dNdy2;
+        K_3_15 += T69*dNdy2;
+        K_4_4 += T58*dNdx3;
+        K_4_5 += T59*dNdx3;
+        K_4_6 += T60*dNdx3;
+        K_4_7 += T61*dNdx3;
+        K_4_8 += T62*dNdx3;
+        K_4_9 += T63*dNdx3;
+        K_4_10 += T64*dNdx3;
+        K_4_11 += T65*dNdx3;
+        K_4_12 += T66*dNdx3;
+        K_4_13 += T67*dNdx3;
+        K_4_14 += T68*dNdx3;
+        K_4_15 += T69*dNdx3;
+        K_5_5 += T59*dNdy3;
+        K_5_6 += T60*dNdy3;
+        K_5_7 += T61*dNdy3;
+        K_5_8 += T62*dNdy3;
+        K_5_9 += T63*dNdy3;
+        K_5_10 += T64*dNdy3;
+        K_5_11 += T65*dNdy3;
+        K_5_12 += T66*dNdy3;
+        K_5_13 += T67*dNdy3;
+        K_5_14 += T68*dNdy3;
+        K_5_15 += T69*dNdy3;
+        K_6_6 += T60*dNdx4;
+        K_6_7 += T61*dNdx4;
+        K_6_8 += T62*dNdx4;
+        K_6_9 += T63*dNdx4;
+        K_6_10 += T64*dNdx4;
+        K_6_11 += T65*dNdx4;
+        K_6_12 += T66*dNdx4;
+        K_6_13 += T67*dNdx4;
+        K_6_14 += T68*dNdx4;
+        K_6_15 += T69*dNdx4;
+        K_7_7 += T61*dNdy4;
+        K_7_8 += T62*dNdy4;
+        K_7_9 += T63*dNdy4;
+        K_7_10 += T64*dNdy4;
+        K_7_11 += T65*dNdy4;
+        K_7_12 += T66*dNdy4;
+        K_7_13 += T67*dNdy4;
+        K_7_14 += T68*dNdy4;
+        K_7_15 += T69*dNdy4;
+        K_8_8 += T62*dNdx5;
+        K_8_9 += T63*dNdx5;
+        K_8_10 += T64*dNdx5;
+        K_8_11 += T65*dNdx5;
+        K_8_12 += T66*dNdx5;
+        K_8_13 += T67*dNdx5;
+        K_8_14 += T68*dNdx5;
+        K_8_15 += T69*dNdx5;
+        K_9_9 += T63*dNdy5;
+        K_9_10 += T64*dNdy5;
+        K_9_11 += T65*dNdy5;
+        K_9_12 += T66*dNdy5;
+        K_9_13 += T67*dNdy5;
+        K_9_14 += T68*dNdy5;
+        K_9_15 += T69*dNdy5;
+        K_10_10 += T64*dNdx6;
+        K_10_11 += T65*dNdx6;
+        K_10_12 += T66*dNdx6;
+        K_10_13 += T67*dNdx6;
+        K_10_14 += T68*dNdx6;
+        K_10_15 += T69*dNdx6;
+        K_11_11 += T65*dNdy6;
+        K_11_12 += T66*dNdy6;
+        K_11_13 += T67*dNdy6;
+        K_11_14 += T68*dNdy6;
+        K_11_15 += T69*dNdy6;
+        K_12_12 += T66*dNdx7;
+        K_12_13 += T67*dNdx7;
+        K_12_14 += T68*dNdx7;
+        K_12_15 += T69*dNdx7;
+        K_13_13 += T67*dNdy7;
+        K_13_14 += T68*dNdy7;
+        K_13_15 += T69*dNdy7;
+        K_14_14 += T68*dNdx8;
+        K_14_15 += T69*dNdx8;
+        K_15_15 += T69*dNdy8;
+    }
+    K[0 * sk] = K_0_0;
+    K[1 * sk] = K_0_1;
+    K[2 * sk] = K_0_2;
+    K[3 * sk] = K_0_3;
+    K[4 * sk] = K_0_4;
+    K[5 * sk] = K_0_5;
+    K[6 * sk] = K_0_6;
+    K[7 * sk] = K_0_7;
+    K[8 * sk] = K_0_8;
+    K[9 * sk] = K_0_9;
+    K[10 * sk] = K_0_10;
+    K[11 * sk] = K_0_11;
+    K[12 * sk] = K_0_12;
+    K[13 * sk] = K_0_13;
+    K[14 * sk] = K_0_14;
+    K[15 * sk] = K_0_15;
+    K[16 * sk] = K_0_1;
+    K[17 * sk] = K_1_1;
+    K[18 * sk] = K_1_2;
+    K[19 * sk] = K_1_3;
+    K[20 * sk] = K_1_4;
+    K[21 * sk] = K_1_5;
+    K[22 * sk] = K_1_6;
+    K[23 * sk] = K_1_7;
+    K[24 * sk] = K_1_8;
+    K[25 * sk] = K_1_9;
+    K[26 * sk] = K_1_10;
+    K[27 * sk] = K_1_11;
+    K[28 * sk] = K_1_12;
+    K[29 * sk] = K_1_13;
+    K[30 * sk] = K_1_14;
+    K[31 * sk] = K_1_15;
+    K[32 * sk] = K_0_2;
+    K[33 * sk] = K_1_2;
+    K[34 * sk] = K_2_2;
+    K[35 * sk] = K_2_3;
+    K[36 * sk] = K_2_4;
+    K[37 * sk] = K_2_5;
+    K[38 * sk] = K_2_6;
+    K[39 * sk] = K_2_7;
+    K[40 * sk] = K_2_8;
+    K[41 * sk] = K_2_9;
+    K[42 * sk] = K_2_10;
+    K[43 * sk] = K_2_11;
+    K[44 * sk] = K_2_12;
+    K[45 * sk] = K_2_13;
+    K[46 * sk] = K_2_14;
+    K[47 * sk] = K_2_15;
+    K[48 * sk] = K_0_3;
+    K[49 * sk] = K_1_3;
+    K[50 * sk] = K_2_3;
+    K[51 * sk] = K_3_3;
+    K[52 * sk] = K_3_4;
+    K[53 * sk] = K_3_5;
+    K[54 * sk] = K_3_6;
+    K[55 * sk] = K_3_7;
+    K[56 * sk] = K_3_8;
+    K[57 * sk] = K_3_9;
+    K[58 * sk] = K_3_10;
+    K[59 * sk] = K_3_11;
+    K[60 * sk] = K_3_12;
+    K[61 * sk] = K_3_13;
+    K[62 * sk] = K_3_14;
+    K[63 * sk] = K_3_15;
+    K[64 * sk] = K_0_4;
+    K[65 * sk] = K_1_4;
+    K[66 * sk] = K_2_4;
+    K[67 * sk] = K_3_4;
+    K[68 * sk] = K_4_4;
+    K[69 * sk] = K_4_5;
+    K[70 * sk] = K_4_6;
+    K[71 * sk] = K_4_7;
+    K[72 * sk] = K_4_8;
+    K[73 * sk] = K_4_9;
+    K[74 * sk] = K_4_10;
+    K[75 * sk] = K_4_11;
+    K[76 * sk] = K_4_12;
+    K[77 * sk] = K_4_13;
+    K[78 * sk] = K_4_14;
+    K[79 * sk] = K_4_15;
+    K[80 * sk] = K_0_5;
+    K[81 * sk] = K_1_5;
+    K[82 * sk] = K_2_5;
+    K[83 * sk] = K_3_5;
+    K[84 * sk] = K_4_5;
+    K[85 * sk] = K_5_5;
+    K[86 * sk] = K_5_6;
+    K[87 * sk] = K_5_7;
+    K[88 * sk] = K_5_8;
+    K[89 * sk] = K_5_9;
+    K[90 * sk] = K_5_10;
+    K[91 * sk] = K_5_11;
+    K[92 * sk] = K_5_12;
+    K[93 * sk] = K_5_13;
+    K[94 * sk] = K_5_14;
+    K[95 * sk] = K_5_15;
+    K[96 * sk] = K_0_6;
+    K[97 * sk] = K_1_6;
+    K[98 * sk] = K_2_6;
+    K[99 * sk] = K_3_6;
+    K[100 * sk] = K_4_6;
+    K[101 * sk] = K_5_6;
+    K[102 * sk] = K_6_6;
+    K[103 * sk] = K_6_7;
+    K[104 * sk] = K_6_8;
+    K[105 * sk] = K_6_9;
+    K[106 * sk] = K_6_10;
+    K[107 * sk] = K_6_11;
+    K[108 * sk] = K_6_12;
+    K[109 * sk] = K_6_13;
+    K[110 * sk] = K_6_14;
+    K[111 * sk] = K_6_15;
+    K[112 * sk] = K_0_7;
+    K[113 * sk] = K_1_7;
+    K[114 * sk] = K_2_7;
+    K[115 * sk] = K_3_7;
+    K[116 * sk] = K_4_7;
+    K[117 * sk] = K_5_7;
+    K[118 * sk] = K_6_7;
+    K[119 * sk] = K_7_7;
+    K[120 * sk] = K_7_8;
+    K[121 * sk] = K_7_9;
+    K[122 * sk] = K_7_10;
+    K[123 * sk] = K_7_11;
+    K[124 * sk] = K_7_12;
+    K[125 * sk] = K_7_13;
+    K[126 * sk] = K_7_14;
+    K[127 * sk] = K_7_15;
+    K[128 * sk] = K_0_8;
+    K[129 * sk] = K_1_8;
+    K[130 * sk] = K_2_8;
+    K[131 * sk] = K_3_8;
+    K[132 * sk] = K_4_8;
+    K[133 * sk] = K_5_8;
+    K[134 * sk] = K_6_8;
+    K[135 * sk] = K_7_8;
+    K[136 * sk] = K_8_8;
+    K[137 * sk] = K_8_9;
+    K[138 * sk] = K_8_10;
+    K[139 * sk] = K_8_11;
+    K[140 * sk] = K_8_12;
+    K[141 * sk] = K_8_13;
+    K[142 * sk] = K_8_14;
+    K[143 * sk] = K_8_15;
+    K[144 * sk] = K_0_9;
+    K[145 * sk] = K_1_9;
+    K[146 * sk] = K_2_9;
+    K[147 * sk] = K_3_9;
+    K[148 * sk] = K_4_9;
+    K[149 * sk] = K_5_9;
+    K[150 * sk] = K_6_9;
+    K[151 * sk] = K_7_9;
+    K[152 * sk] = K_8_9;
+    K[153 * sk] = K_9_9;
+    K[154 * sk] = K_9_10;
+    K[155 * sk] = K_9_11;
+    K[156 * sk] = K_9_12;
+    K[157 * sk] = K_9_13;
+    K[158 * sk] = K_9_14;
+    K[159 * sk] = K_9_15;
+    K[160 * sk] = K_0_10;
+    K[161 * sk] = K_1_10;
+    K[162 * sk] = K_2_10;
+    K[163 * sk] = K_3_10;
+    K[164 * sk] = K_4_10;
+    K[165 * sk] = K_5_10;
+    K[166 * sk] = K_6_10;
+    K[167 * sk] = K_7_10;
+    K[168 * sk] = K_8_10;
+    K[169 * sk] = K_9_10;
+    K[170 * sk] = K_10_10;
+    K[171 * sk] = K_10_11;
+    K[172 * sk] = K_10_12;
+    K[173 * sk] = K_10_13;
+    K[174 * sk] = K_10_14;
+    K[175 * sk] = K_10_15;
+    K[176 * sk] = K_0_11;
+    K[177 * sk] = K_1_11;
+    K[178 * sk] = K_2_11;
+    K[179 * sk] = K_3_11;
+    K[180 * sk] = K_4_11;
+    K[181 * sk] = K_5_11;
+    K[182 * sk] = K_6_11;
+    K[183 * sk] = K_7_11;
+    K[184 * sk] = K_8_11;
+    K[185 * sk] = K_9_11;
+    K[186 * sk] = K_10_11;
+    K[187 * sk] = K_11_11;
+    K[188 * sk] = K_11_12;
+    K[189 * sk] = K_11_13;
+    K[190 * sk] = K_11_14;
+    K[191 * sk] = K_11_15;
+    K[192 * sk] = K_0_12;
+    K[193 * sk] = K_1_12;
+    K[194 * sk] = K_2_12;
+    K[195 * sk] = K_3_12;
+    K[196 * sk] = K_4_12;
+    K[197 * sk] = K_5_12;
+    K[198 * sk] = K_6_12;
+    K[199 * sk] = K_7_12;
+    K[200 * sk] = K_8_12;
+    K[201 * sk] = K_9_12;
+    K[202 * sk] = K_10_12;
+    K[203 * sk] = K_11_12;
+    K[204 * sk] = K_12_12;
+    K[205 * sk] = K_12_13;
+    K[206 * sk] = K_12_14;
+    K[207 * sk] = K_12_15;
+    K[208 * sk] = K_0_13;
+    K[209 * sk] = K_1_13;
+    K[210 * sk] = K_2_13;
+    K[211 * sk] = K_3_13;
+    K[212 * sk] = K_4_13;
+    K[213 * sk] = K_5_13;
+    K[214 * sk] = K_6_13;
+    K[215 * sk] = K_7_13;
+    K[216 * sk] = K_8_13;
+    K[217 * sk] = K_9_13;
+    K[218 * sk] = K_10_13;
+    K[219 * sk] = K_11_13;
+    K[220 * sk] = K_12_13;
+    K[221 * sk] = K_13_13;
+    K[222 * sk] = K_13_14;
+    K[223 * sk] = K_13_15;
+    K[224 * sk] = K_0_14;
+    K[225 * sk] = K_1_14;
+    K[226 * sk] = K_2_14;
+    K[227 * sk] = K_3_14;
+    K[228 * sk] = K_4_14;
+    K[229 * sk] = K_5_14;
+    K[230 * sk] = K_6_14;
+    K[231 * sk] = K_7_14;
+    K[232 * sk] = K_8_14;
+    K[233 * sk] = K_9_14;
+    K[234 * sk] = K_10_14;
+    K[235 * sk] = K_11_14;
+    K[236 * sk] = K_12_14;
+    K[237 * sk] = K_13_14;
+    K[238 * sk] = K_14_14;
+    K[239 * sk] = K_14_15;
+    K[240 * sk] = K_0_15;
+    K[241 * sk] = K_1_15;
+    K[242 * sk] = K_2_15;
+    K[243 * sk] = K_3_15;
+    K[244 * sk] = K_4_15;
+    K[245 * sk] = K_5_15;
+    K[246 * sk] = K_6_15;
+    K[247 * sk] = K_7_15;
+    K[248 * sk] = K_8_15;
+    K[249 * sk] = K_9_15;
+    K[250 * sk] = K_10_15;
+    K[251 * sk] = K_11_15;
+    K[252 * sk] = K_12_15;
+    K[253 * sk] = K_13_15;
+    K[254 * sk] = K_14_15;
+    K[255 * sk] = K_15_15;
+}
+
+void derive_q8_selective_plane_stress_stiffness(const double *restrict xy, double E, double nu, double t, double *restrict K)
+{
+    double mat[NMAT];
+    q8_selective_plane_stress_material(E, nu, t, mat);
+    q8_selective_plane_stress_stiffness_body(xy, 1, mat, K, 1);
+}
+
+void derive_q8_selective_plane_stress_stiffness_batch(long n, const double *restrict xy, double E, double nu, double t,
+                                  double *restrict K)
+{
+    double mat[NMAT];
+    double in[NIN * LANES];
+    double out[NK * LANES];
+    q8_selective_plane_stress_material(E, nu, t, mat);
+    for (long b = 0; b < n; b += LANES) {
+        const long m = (n - b < LANES) ? (n - b) : LANES;
+        for (long l = 0; l < LANES; ++l) {
+            const double *restrict src = xy + (size_t)(b + (l < m ? l : 0)) * NIN;
+            for (int k = 0; k < NIN; ++k)
+                in[k * LANES + l] = src[k];
+        }
+#pragma omp simd
+        for (int l = 0; l < LANES; ++l)
+            q8_selective_plane_stress_stiffness_body(in + l, LANES, mat, out + l, LANES);
+        for (long l = 0; l < m; ++l) {
+            double *restrict dst = K + (size_t)(b + l) * NK;
+            for (int k = 0; k < NK; ++k)
+                dst[k] = out[k * LANES + l];
+        }
+    }
+}
+
+/* minimum of det J over the points of the full rule, one element */
+static inline void q8_selective_plane_stress_validity_body(const double *restrict xy, double *restrict detJ_min)
+{
+    const double x1 = xy[0];
+    const double y1 = xy[1];
+    const double x2 = xy[2];
+    const double y2 = xy[3];
+    const double x3 = xy[4];
+    const double y3 = xy[5];
+    const double x4 = xy[6];
+    const double y4 = xy[7];
+    const double x5 = xy[8];
+    const double y5 = xy[9];
+    const double x6 = xy[10];
+    const double y6 = xy[11];
+    const double x7 = xy[12];
+    const double y7 = xy[13];
+    const double x8 = xy[14];
+    const double y8 = xy[15];
+    /* element quantities: map coefficients, centre Jacobian */
+    const double gx_0_1 = 0.5*x7 - 0.5*x5;
+    const double gx_0_2 = -0.5*x6 - 0.5*x8 + 0.25*x1 + 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gx_1_0 = 0.5*x6 - 0.5*x8;
+    const double gx_1_1 = -0.25*x2 - 0.25*x4 + 0.25*x1 + 0.25*x3;
+    const double gx_1_2 = 0.5*x8 - 0.5*x6 - 0.25*x1 - 0.25*x4 + 0.25*x2 + 0.25*x3;
+    const double gx_2_0 = -0.5*x5 - 0.5*x7 + 0.25*x1 + 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gx_2_1 = 0.5*x5 - 0.5*x7 - 0.25*x1 - 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gy_0_1 = 0.5*y7 - 0.5*y5;
+    const double gy_0_2 = -0.5*y6 - 0.5*y8 + 0.25*y1 + 0.25*y2 + 0.25*y3 + 0.25*y4;
+    const double gy_1_0 = 0.5*y6 - 0.5*y8;
+    const double gy_1_1 = -0.25*y2 - 0.25*y4 + 0.25*y1 + 0.25*y3;
+    const double gy_1_2 = 0.5*y8 - 0.5*y6 - 0.25*y1 - 0.25*y4 + 0.25*y2 + 0.25*y3;
+    const double gy_2_0 = -0.5*y5 - 0.5*y7 + 0.25*y1 + 0.25*y2 + 0.25*y3 + 0.25*y4;
+    const double gy_2_1 = 0.5*y5 - 0.5*y7 - 0.25*y1 - 0.25*y2 + 0.25*y3 + 0.25*y4;
+    double dmin;
+    {   /* gauss-3x3 point 1 of 9: xi = -0.7745966692414834, eta = -0.7745966692414834, weight = 25/81 */
+        const double q0 = -0.7745966692414834*gx_1_1;
+        const double J00 = gx_1_0 + q0 + 0.6*gx_1_2 + 1.2*gx_2_1 - 1.5491933384829668*gx_2_0;
+        const double q1 = -0.7745966692414834*gy_1_1;
+        const double J01 = gy_1_0 + q1 + 0.6*gy_1_2 + 1.2*gy_2_1 - 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 + q0 + 0.6*gx_2_1 + 1.2*gx_1_2 - 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 + q1 + 0.6*gy_2_1 + 1.2*gy_1_2 - 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = detJ;
+    }
+    {   /* gauss-3x3 point 2 of 9: xi = 0, eta = -0.7745966692414834, weight = 40/81 */
+        const double J00 = gx_1_0 + 0.6*gx_1_2 - 0.7745966692414834*gx_1_1;
+        const double J01 = gy_1_0 + 0.6*gy_1_2 - 0.7745966692414834*gy_1_1;
+        const double J10 = gx_0_1 - 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 - 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    {   /* gauss-3x3 point 3 of 9: xi = 0.7745966692414834, eta = -0.7745966692414834, weight = 25/81 */
+        const double J00 = gx_1_0 - 1.2*gx_2_1 + 0.6*gx_1_2 + 1.5491933384829668*gx_2_0
+            - 0.7745966692414834*gx_1_1;
+        const double J01 = gy_1_0 - 1.2*gy_2_1 + 0.6*gy_1_2 + 1.5491933384829668*gy_2_0
+            - 0.7745966692414834*gy_1_1;
+        const double J10 = gx_0_1 - 1.2*gx_1_2 + 0.6*gx_2_1 + 0.7745966692414834*gx_1_1
+            - 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 - 1.2*gy_1_2 + 0.6*gy_2_1 + 0.7745966692414834*gy_1_1
+            - 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    {   /* gauss-3x3 point 4 of 9: xi = -0.7745966692414834, eta = 0, weight = 40/81 */
+        const double J00 = gx_1_0 - 1.5491933384829668*gx_2_0;
+        const double J01 = gy_1_0 - 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 + 0.6*gx_2_1 - 0.7745966692414834*gx_1_1;
+        const double J11 = gy_0_1 + 0.6*gy_2_1 - 0.7745966692414834*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    {   /* gauss-3x3 point 5 of 9: xi = 0, eta = 0, weight = 64/81 */
+        const double detJ = gx_1_0*gy_0_1 - gx_0_1*gy_1_0;
+        dmin = fmin(dmin, detJ);
+    }
+    {   /* gauss-3x3 point 6 of 9: xi = 0.7745966692414834, eta = 0, weight = 40/81 */
+        const double J00 = gx_1_0 + 1.5491933384829668*gx_2_0;
+        const double J01 = gy_1_0 + 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 + 0.6*gx_2_1 + 0.7745966692414834*gx_1_1;
+        const double J11 = gy_0_1 + 0.6*gy_2_1 + 0.7745966692414834*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    {   /* gauss-3x3 point 7 of 9: xi = -0.7745966692414834, eta = 0.7745966692414834, weight = 25/81 */
+        const double J00 = gx_1_0 - 1.2*gx_2_1 + 0.6*gx_1_2 + 0.7745966692414834*gx_1_1
+            - 1.5491933384829668*gx_2_0;
+        const double J01 = gy_1_0 - 1.2*gy_2_1 + 0.6*gy_1_2 + 0.7745966692414834*gy_1_1
+            - 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 - 1.2*gx_1_2 + 0.6*gx_2_1 + 1.5491933384829668*gx_0_2
+            - 0.7745966692414834*gx_1_1;
+        const double J11 = gy_0_1 - 1.2*gy_1_2 + 0.6*gy_2_1 + 1.5491933384829668*gy_0_2
+            - 0.7745966692414834*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    {   /* gauss-3x3 point 8 of 9: xi = 0, eta = 0.7745966692414834, weight = 40/81 */
+        const double J00 = gx_1_0 + 0.6*gx_1_2 + 0.7745966692414834*gx_1_1;
+        const double J01 = gy_1_0 + 0.6*gy_1_2 + 0.7745966692414834*gy_1_1;
+        const double J10 = gx_0_1 + 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 + 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    {   /* gauss-3x3 point 9 of 9: xi = 0.7745966692414834, eta = 0.7745966692414834, weight = 25/81 */
+        const double q0 = 0.7745966692414834*gx_1_1;
+        const double J00 = gx_1_0 + q0 + 0.6*gx_1_2 + 1.2*gx_2_1 + 1.5491933384829668*gx_2_0;
+        const double q1 = 0.7745966692414834*gy_1_1;
+        const double J01 = gy_1_0 + q1 + 0.6*gy_1_2 + 1.2*gy_2_1 + 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 + q0 + 0.6*gx_2_1 + 1.2*gx_1_2 + 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 + q1 + 0.6*gy_2_1 + 1.2*gy_1_2 + 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    *detJ_min = dmin;
+}
+
+void derive_q8_selective_plane_stress_validity(long n, const double *restrict xy, double *restrict detJ_min)
+{
+    for (long e = 0; e < n; ++e)
+        q8_selective_plane_stress_validity_body(xy + (size_t)e * NIN, detJ_min + e);
+}
+
+/* strain and stress at the 9 points of the full rule, one element */
+static inline void q8_selective_plane_stress_recovery_body(const double *restrict xy, const double *restrict u,
+                                            const double *restrict mat, double *restrict strain,
+                                            double *restrict stress)
+{
+    const double x1 = xy[0];
+    const double y1 = xy[1];
+    const double x2 = xy[2];
+    const double y2 = xy[3];
+    const double x3 = xy[4];
+    const double y3 = xy[5];
+    const double x4 = xy[6];
+    const double y4 = xy[7];
+    const double x5 = xy[8];
+    const double y5 = xy[9];
+    const double x6 = xy[10];
+    const double y6 = xy[11];
+    const double x7 = xy[12];
+    const double y7 = xy[13];
+    const double x8 = xy[14];
+    const double y8 = xy[15];
+    const double u1 = u[0];
+    const double u2 = u[1];
+    const double u3 = u[2];
+    const double u4 = u[3];
+    const double u5 = u[4];
+    const double u6 = u[5];
+    const double u7 = u[6];
+    const double u8 = u[7];
+    const double u9 = u[8];
+    const double u10 = u[9];
+    const double u11 = u[10];
+    const double u12 = u[11];
+    const double u13 = u[12];
+    const double u14 = u[13];
+    const double u15 = u[14];
+    const double u16 = u[15];
+    const double m4 = mat[7];
+    const double m5 = mat[8];
+    const double m6 = mat[9];
+    /* element quantities: map coefficients, centre Jacobian */
+    const double gx_0_1 = 0.5*x7 - 0.5*x5;
+    const double gx_0_2 = -0.5*x6 - 0.5*x8 + 0.25*x1 + 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gx_1_0 = 0.5*x6 - 0.5*x8;
+    const double gx_1_1 = -0.25*x2 - 0.25*x4 + 0.25*x1 + 0.25*x3;
+    const double gx_1_2 = 0.5*x8 - 0.5*x6 - 0.25*x1 - 0.25*x4 + 0.25*x2 + 0.25*x3;
+    const double gx_2_0 = -0.5*x5 - 0.5*x7 + 0.25*x1 + 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gx_2_1 = 0.5*x5 - 0.5*x7 - 0.25*x1 - 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gy_0_1 = 0.5*y7 - 0.5*y5;
+    const double gy_0_2 = -0.5*y6 - 0.5*y8 + 0.25*y1 + 0.25*y2 + 0.25*y3 + 0.25*y4;
+    const double gy_1_0 = 0.5*y6 - 0.5*y8;
+    const double gy_1_1 = -0.25*y2 - 0.25*y4 + 0.25*y1 + 0.25*y3;
+    const double gy_1_2 = 0.5*y8 - 0.5*y6 - 0.25*y1 - 0.25*y4 + 0.25*y2 + 0.25*y3;
+    const double gy_2_0 = -0.5*y5 - 0.5*y7 + 0.25*y1 + 0.25*y2 + 0.25*y3 + 0.25*y4;
+    const double gy_2_1 = 0.5*y5 - 0.5*y7 - 0.25*y1 - 0.25*y2 + 0.25*y3 + 0.25*y4;
+    {   /* gauss-3x3 point 1 of 9: xi = -0.7745966692414834, eta = -0.7745966692414834, weight = 25/81 */
+        const double q0 = -0.7745966692414834*gx_1_1;
+        const double J00 = gx_1_0 + q0 + 0.6*gx_1_2 + 1.2*gx_2_1 - 1.5491933384829668*gx_2_0;
+        const double q1 = -0.7745966692414834*gy_1_1;
+        const double J01 = gy_1_0 + q1 + 0.6*gy_1_2 + 1.2*gy_2_1 - 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 + q0 + 0.6*gx_2_1 + 1.2*gx_1_2 - 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 + q1 + 0.6*gy_2_1 + 1.2*gy_1_2 - 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = -1.0309475019311125*Ji00 - 1.0309475019311125*Ji01;
+        const double dNdy1 = -1.0309475019311125*Ji10 - 1.0309475019311125*Ji11;
+        const double dNdx2 = -0.04364916731037084*Ji01 - 0.3436491673103708*Ji00;
+        const double dNdy2 = -0.04364916731037084*Ji11 - 0.3436491673103708*Ji10;
+        const double dNdx3 = -0.13094750193111254*Ji00 - 0.13094750193111254*Ji01;
+        const double dNdy3 = -0.13094750193111254*Ji10 - 0.13094750193111254*Ji11;
+        const double dNdx4 = -0.04364916731037084*Ji00 - 0.3436491673103708*Ji01;
+        const double dNdy4 = -0.04364916731037084*Ji10 - 0.3436491673103708*Ji11;
+        const double dNdx5 = -0.2*Ji01 + 1.3745966692414833*Ji00;
+        const double dNdy5 = -0.2*Ji11 + 1.3745966692414833*Ji10;
+        const double dNdx6 = 0.2*Ji00 + 0.17459666924148337*Ji01;
+        const double dNdy6 = 0.2*Ji10 + 0.17459666924148337*Ji11;
+        const double dNdx7 = 0.2*Ji01 + 0.17459666924148337*Ji00;
+        const double dNdy7 = 0.2*Ji11 + 0.17459666924148337*Ji10;
+        const double dNdx8 = -0.2*Ji00 + 1.3745966692414833*Ji01;
+        const double dNdy8 = -0.2*Ji10 + 1.3745966692414833*Ji11;
+        const double eps70 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11 + dNdx7*u13
+            + dNdx8*u15;
+        const double eps71 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12 + dNdy7*u14
+            + dNdy8*u16;
+        const double eps72 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+            + dNdx8*u16 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
+            + dNdy8*u15;
+        strain[0] = eps70;
+        strain[1] = eps71;
+        strain[2] = eps72;
+        stress[0] = eps70*m4 + eps71*m5;
+        stress[1] = eps70*m5 + eps71*m4;
+        stress[2] = eps72*m6;
+    }
+    {   /* gauss-3x3 point 2 of 9: xi = 0, eta = -0.7745966692414834, weight = 40/81 */
+        const double J00 = gx_1_0 + 0.6*gx_1_2 - 0.7745966692414834*gx_1_1;
+        const double J01 = gy_1_0 + 0.6*gy_1_2 - 0.7745966692414834*gy_1_1;
+        const double J10 = gx_0_1 - 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 - 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double q0 = -0.3872983346207417*Ji01;
+        const double dNdx1 = q0 - 0.3436491673103708*Ji00;
+        const double q1 = -0.3872983346207417*Ji11;
+        const double dNdy1 = q1 - 0.3436491673103708*Ji10;
+        const double dNdx2 = q0 + 0.3436491673103708*Ji00;
+        const double dNdy2 = q1 + 0.3436491673103708*Ji10;
+        const double dNdx3 = q0 - 0.04364916731037084*Ji00;
+        const double dNdy3 = q1 - 0.04364916731037084*Ji10;
+        const double dNdx4 = q0 + 0.04364916731037084*Ji00;
+        const double dNdy4 = q1 + 0.04364916731037084*Ji10;
+        const double dNdx5 = -0.5*Ji01;
+        const double dNdy5 = -0.5*Ji11;
+        const double q2 = 0.7745966692414834*Ji01;
+        const double dNdx6 = q2 + 0.2*Ji00;
+        const double q3 = 0.7745966692414834*Ji11;
+        const double dNdy6 = q3 + 0.2*Ji10;
+        const double dNdx7 = 0.5*Ji01;
+        const double dNdy7 = 0.5*Ji11;
+        const double dNdx8 = q2 - 0.2*Ji00;
+        const double dNdy8 = q3 - 0.2*Ji10;
+        const double eps70 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11 + dNdx7*u13
+            + dNdx8*u15;
+        const double eps71 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12 + dNdy7*u14
+            + dNdy8*u16;
+        const double eps72 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+            + dNdx8*u16 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
+            + dNdy8*u15;
+        strain[3] = eps70;
+        strain[4] = eps71;
+        strain[5] = eps72;
+        stress[3] = eps70*m4 + eps71*m5;
+        stress[4] = eps70*m5 + eps71*m4;
+        stress[5] = eps72*m6;
+    }
+    {   /* gauss-3x3 point 3 of 9: xi = 0.7745966692414834, eta = -0.7745966692414834, weight = 25/81 */
+        const double J00 = gx_1_0 - 1.2*gx_2_1 + 0.6*gx_1_2 + 1.5491933384829668*gx_2_0
+            - 0.7745966692414834*gx_1_1;
+        const double J01 = gy_1_0 - 1.2*gy_2_1 + 0.6*gy_1_2 + 1.5491933384829668*gy_2_0
+            - 0.7745966692414834*gy_1_1;
+        const double J10 = gx_0_1 - 1.2*gx_1_2 + 0.6*gx_2_1 + 0.7745966692414834*gx_1_1
+            - 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 - 1.2*gy_1_2 + 0.6*gy_2_1 + 0.7745966692414834*gy_1_1
+            - 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = 0.3436491673103708*Ji00 - 0.04364916731037084*Ji01;
+        const double dNdy1 = 0.3436491673103708*Ji10 - 0.04364916731037084*Ji11;
+        const double dNdx2 = 1.0309475019311125*Ji00 - 1.0309475019311125*Ji01;
+        const double dNdy2 = 1.0309475019311125*Ji10 - 1.0309475019311125*Ji11;
+        const double dNdx3 = 0.04364916731037084*Ji00 - 0.3436491673103708*Ji01;
+        const double dNdy3 = 0.04364916731037084*Ji10 - 0.3436491673103708*Ji11;
+        const double dNdx4 = 0.13094750193111254*Ji00 - 0.13094750193111254*Ji01;
+        const double dNdy4 = 0.13094750193111254*Ji10 - 0.13094750193111254*Ji11;
+        const double dNdx5 = -0.2*Ji01 - 1.3745966692414833*Ji00;
+        const double dNdy5 = -0.2*Ji11 - 1.3745966692414833*Ji10;
+        const double dNdx6 = 0.2*Ji00 + 1.3745966692414833*Ji01;
+        const double dNdy6 = 0.2*Ji10 + 1.3745966692414833*Ji11;
+        const double dNdx7 = 0.2*Ji01 - 0.17459666924148337*Ji00;
+        const double dNdy7 = 0.2*Ji11 - 0.17459666924148337*Ji10;
+        const double dNdx8 = -0.2*Ji00 + 0.17459666924148337*Ji01;
+        const double dNdy8 = -0.2*Ji10 + 0.17459666924148337*Ji11;
+        const double eps70 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11 + dNdx7*u13
+            + dNdx8*u15;
+        const double eps71 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12 + dNdy7*u14
+            + dNdy8*u16;
+        const double eps72 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+            + dNdx8*u16 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
+            + dNdy8*u15;
+        strain[6] = eps70;
+        strain[7] = eps71;
+        strain[8] = eps72;
+        stress[6] = eps70*m4 + eps71*m5;
+        stress[7] = eps70*m5 + eps71*m4;
+        stress[8] = eps72*m6;
+    }
+    {   /* gauss-3x3 point 4 of 9: xi = -0.7745966692414834, eta = 0, weight = 40/81 */
+        const double J00 = gx_1_0 - 1.5491933384829668*gx_2_0;
+        const double J01 = gy_1_0 - 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 + 0.6*gx_2_1 - 0.7745966692414834*gx_1_1;
+        const double J11 = gy_0_1 + 0.6*gy_2_1 - 0.7745966692414834*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double q0 = -0.3872983346207417*Ji00;
+        const double dNdx1 = q0 - 0.3436491673103708*Ji01;
+        const double q1 = -0.3872983346207417*Ji10;
+        const double dNdy1 = q1 - 0.3436491673103708*Ji11;
+        const double dNdx2 = q0 + 0.04364916731037084*Ji01;
+        const double dNdy2 = q1 + 0.04364916731037084*Ji11;
+        const double dNdx3 = q0 - 0.04364916731037084*Ji01;
+        const double dNdy3 = q1 - 0.04364916731037084*Ji11;
+        const double dNdx4 = q0 + 0.3436491673103708*Ji01;
+        const double dNdy4 = q1 + 0.3436491673103708*Ji11;
+        const double q2 = 0.7745966692414834*Ji00;
+        const double dNdx5 = q2 - 0.2*Ji01;
+        const double q3 = 0.7745966692414834*Ji10;
+        const double dNdy5 = q3 - 0.2*Ji11;
+        const double dNdx6 = 0.5*Ji00;
+        const double dNdy6 = 0.5*Ji10;
+        const double dNdx7 = q2 + 0.2*Ji01;
+        const double dNdy7 = q3 + 0.2*Ji11;
+        const double dNdx8 = -0.5*Ji00;
+        const double dNdy8 = -0.5*Ji10;
+        const double eps70 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11 + dNdx7*u13
+            + dNdx8*u15;
+        const double eps71 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12 + dNdy7*u14
+            + dNdy8*u16;
+        const double eps72 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+            + dNdx8*u16 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
+            + dNdy8*u15;
+        strain[9] = eps70;
+        strain[10] = eps71;
+        strain[11] = eps72;
+        stress[9] = eps70*m4 + eps71*m5;
+        stress[10] = eps70*m5 + eps71*m4;
+        stress[11] = eps72*m6;
+    }
+    {   /* gauss-3x3 point 5 of 9: xi = 0, eta = 0, weight = 64/81 */
+        const double detJ = gx_1_0*gy_0_1 - gx_0_1*gy_1_0;
+        const double idet = 1.0/detJ;
+        const double Ji00 = gy_0_1*idet;
+        const double Ji01 = -gy_1_0*idet;
+        const double Ji10 = -gx_0_1*idet;
+        const double Ji11 = gx_1_0*idet;
+        const double dNdx5 = -0.5*Ji01;
+        const double dNdy5 = -0.5*Ji11;
+        const double dNdx6 = 0.5*Ji00;
+        const double dNdy6 = 0.5*Ji10;
+        const double dNdx7 = 0.5*Ji01;
+        const double dNdy7 = 0.5*Ji11;
+        const double dNdx8 = -0.5*Ji00;
+        const double dNdy8 = -0.5*Ji10;
+        const double eps70 = dNdx5*u9 + dNdx6*u11 + dNdx7*u13 + dNdx8*u15;
+        const double eps71 = dNdy5*u10 + dNdy6*u12 + dNdy7*u14 + dNdy8*u16;
+        const double eps72 = dNdx5*u10 + dNdx6*u12 + dNdx7*u14 + dNdx8*u16 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
+            + dNdy8*u15;
+        strain[12] = eps70;
+        strain[13] = eps71;
+        strain[14] = eps72;
+        stress[12] = eps70*m4 + eps71*m5;
+        stress[13] = eps70*m5 + eps71*m4;
+        stress[14] = eps72*m6;
+    }
+    {   /* gauss-3x3 point 6 of 9: xi = 0.7745966692414834, eta = 0, weight = 40/81 */
+        const double J00 = gx_1_0 + 1.5491933384829668*gx_2_0;
+        const double J01 = gy_1_0 + 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 + 0.6*gx_2_1 + 0.7745966692414834*gx_1_1;
+        const double J11 = gy_0_1 + 0.6*gy_2_1 + 0.7745966692414834*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double q0 = 0.3872983346207417*Ji00;
+        const double dNdx1 = q0 + 0.04364916731037084*Ji01;
+        const double q1 = 0.3872983346207417*Ji10;
+        const double dNdy1 = q1 + 0.04364916731037084*Ji11;
+        const double dNdx2 = q0 - 0.3436491673103708*Ji01;
+        const double dNdy2 = q1 - 0.3436491673103708*Ji11;
+        const double dNdx3 = q0 + 0.3436491673103708*Ji01;
+        const double dNdy3 = q1 + 0.3436491673103708*Ji11;
+        const double dNdx4 = q0 - 0.04364916731037084*Ji01;
+        const double dNdy4 = q1 - 0.04364916731037084*Ji11;
+        const double q2 = -0.7745966692414834*Ji00;
+        const double dNdx5 = q2 - 0.2*Ji01;
+        const double q3 = -0.7745966692414834*Ji10;
+        const double dNdy5 = q3 - 0.2*Ji11;
+        const double dNdx6 = 0.5*Ji00;
+        const double dNdy6 = 0.5*Ji10;
+        const double dNdx7 = q2 + 0.2*Ji01;
+        const double dNdy7 = q3 + 0.2*Ji11;
+        const double dNdx8 = -0.5*Ji00;
+        const double dNdy8 = -0.5*Ji10;
+        const double eps70 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11 + dNdx7*u13
+            + dNdx8*u15;
+        const double eps71 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12 + dNdy7*u14
+            + dNdy8*u16;
+        const double eps72 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+            + dNdx8*u16 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
+            + dNdy8*u15;
+        strain[15] = eps70;
+        strain[16] = eps71;
+        strain[17] = eps72;
+        stress[15] = eps70*m4 + eps71*m5;
+        stress[16] = eps70*m5 + eps71*m4;
+        stress[17] = eps72*m6;
+    }
+    {   /* gauss-3x3 point 7 of 9: xi = -0.7745966692414834, eta = 0.7745966692414834, weight = 25/81 */
+        const double J00 = gx_1_0 - 1.2*gx_2_1 + 0.6*gx_1_2 + 0.7745966692414834*gx_1_1
+            - 1.5491933384829668*gx_2_0;
+        const double J01 = gy_1_0 - 1.2*gy_2_1 + 0.6*gy_1_2 + 0.7745966692414834*gy_1_1
+            - 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 - 1.2*gx_1_2 + 0.6*gx_2_1 + 1.5491933384829668*gx_0_2
+            - 0.7745966692414834*gx_1_1;
+        const double J11 = gy_0_1 - 1.2*gy_1_2 + 0.6*gy_2_1 + 1.5491933384829668*gy_0_2
+            - 0.7745966692414834*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = 0.3436491673103708*Ji01 - 0.04364916731037084*Ji00;
+        const double dNdy1 = 0.3436491673103708*Ji11 - 0.04364916731037084*Ji10;
+        const double dNdx2 = 0.13094750193111254*Ji01 - 0.13094750193111254*Ji00;
+        const double dNdy2 = 0.13094750193111254*Ji11 - 0.13094750193111254*Ji10;
+        const double dNdx3 = 0.04364916731037084*Ji01 - 0.3436491673103708*Ji00;
+        const double dNdy3 = 0.04364916731037084*Ji11 - 0.3436491673103708*Ji10;
+        const double dNdx4 = 1.0309475019311125*Ji01 - 1.0309475019311125*Ji00;
+        const double dNdy4 = 1.0309475019311125*Ji11 - 1.0309475019311125*Ji10;
+        const double dNdx5 = -0.2*Ji01 + 0.17459666924148337*Ji00;
+        const double dNdy5 = -0.2*Ji11 + 0.17459666924148337*Ji10;
+        const double dNdx6 = 0.2*Ji00 - 0.17459666924148337*Ji01;
+        const double dNdy6 = 0.2*Ji10 - 0.17459666924148337*Ji11;
+        const double dNdx7 = 0.2*Ji01 + 1.3745966692414833*Ji00;
+        const double dNdy7 = 0.2*Ji11 + 1.3745966692414833*Ji10;
+        const double dNdx8 = -0.2*Ji00 - 1.3745966692414833*Ji01;
+        const double dNdy8 = -0.2*Ji10 - 1.3745966692414833*Ji11;
+        const double eps70 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11 + dNdx7*u13
+            + dNdx8*u15;
+        const double eps71 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12 + dNdy7*u14
+            + dNdy8*u16;
+        const double eps72 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+            + dNdx8*u16 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
+            + dNdy8*u15;
+        strain[18] = eps70;
+        strain[19] = eps71;
+        strain[20] = eps72;
+        stress[18] = eps70*m4 + eps71*m5;
+        stress[19] = eps70*m5 + eps71*m4;
+        stress[20] = eps72*m6;
+    }
+    {   /* gauss-3x3 point 8 of 9: xi = 0, eta = 0.7745966692414834, weight = 40/81 */
+        const double J00 = gx_1_0 + 0.6*gx_1_2 + 0.7745966692414834*gx_1_1;
+        const double J01 = gy_1_0 + 0.6*gy_1_2 + 0.7745966692414834*gy_1_1;
+        const double J10 = gx_0_1 + 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 + 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double q0 = 0.3872983346207417*Ji01;
+        const double dNdx1 = q0 + 0.04364916731037084*Ji00;
+        const double q1 = 0.3872983346207417*Ji11;
+        const double dNdy1 = q1 + 0.04364916731037084*Ji10;
+        const double dNdx2 = q0 - 0.04364916731037084*Ji00;
+        const double dNdy2 = q1 - 0.04364916731037084*Ji10;
+        const double dNdx3 = q0 + 0.3436491673103708*Ji00;
+        const double dNdy3 = q1 + 0.3436491673103708*Ji10;
+        const double dNdx4 = q0 - 0.3436491673103708*Ji00;
+        const double dNdy4 = q1 - 0.3436491673103708*Ji10;
+        const double dNdx5 = -0.5*Ji01;
+        const double dNdy5 = -0.5*Ji11;
+        const double q2 = -0.7745966692414834*Ji01;
+        const double dNdx6 = q2 + 0.2*Ji00;
+        const double q3 = -0.7745966692414834*Ji11;
+        const double dNdy6 = q3 + 0.2*Ji10;
+        const double dNdx7 = 0.5*Ji01;
+        const double dNdy7 = 0.5*Ji11;
+        const double dNdx8 = q2 - 0.2*Ji00;
+        const double dNdy8 = q3 - 0.2*Ji10;
+        const double eps70 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11 + dNdx7*u13
+            + dNdx8*u15;
+        const double eps71 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12 + dNdy7*u14
+            + dNdy8*u16;
+        const double eps72 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+            + dNdx8*u16 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
+            + dNdy8*u15;
+        strain[21] = eps70;
+        strain[22] = eps71;
+        strain[23] = eps72;
+        stress[21] = eps70*m4 + eps71*m5;
+        stress[22] = eps70*m5 + eps71*m4;
+        stress[23] = eps72*m6;
+    }
+    {   /* gauss-3x3 point 9 of 9: xi = 0.7745966692414834, eta = 0.7745966692414834, weight = 25/81 */
+        const double q0 = 0.7745966692414834*gx_1_1;
+        const double J00 = gx_1_0 + q0 + 0.6*gx_1_2 + 1.2*gx_2_1 + 1.5491933384829668*gx_2_0;
+        const double q1 = 0.7745966692414834*gy_1_1;
+        const double J01 = gy_1_0 + q1 + 0.6*gy_1_2 + 1.2*gy_2_1 + 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 + q0 + 0.6*gx_2_1 + 1.2*gx_1_2 + 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 + q1 + 0.6*gy_2_1 + 1.2*gy_1_2 + 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = 0.13094750193111254*Ji00 + 0.13094750193111254*Ji01;
+        const double dNdy1 = 0.13094750193111254*Ji10 + 0.13094750193111254*Ji11;
+        const double dNdx2 = 0.04364916731037084*Ji00 + 0.3436491673103708*Ji01;
+        const double dNdy2 = 0.04364916731037084*Ji10 + 0.3436491673103708*Ji11;
+        const double dNdx3 = 1.0309475019311125*Ji00 + 1.0309475019311125*Ji01;
+        const double dNdy3 = 1.0309475019311125*Ji10 + 1.0309475019311125*Ji11;
+        const double dNdx4 = 0.04364916731037084*Ji01 + 0.3436491673103708*Ji00;
+        const double dNdy4 = 0.04364916731037084*Ji11 + 0.3436491673103708*Ji10;
+        const double dNdx5 = -0.2*Ji01 - 0.17459666924148337*Ji00;
+        const double dNdy5 = -0.2*Ji11 - 0.17459666924148337*Ji10;
+        const double dNdx6 = 0.2*Ji00 - 1.3745966692414833*Ji01;
+        const double dNdy6 = 0.2*Ji10 - 1.3745966692414833*Ji11;
+        const double dNdx7 = 0.2*Ji01 - 1.3745966692414833*Ji00;
+        const double dNdy7 = 0.2*Ji11 - 1.3745966692414833*Ji10;
+        const double dNdx8 = -0.2*Ji00 - 0.17459666924148337*Ji01;
+        const double dNdy8 = -0.2*Ji10 - 0.17459666924148337*Ji11;
+        const double eps70 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11 + dNdx7*u13
+            + dNdx8*u15;
+        const double eps71 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12 + dNdy7*u14
+            + dNdy8*u16;
+        const double eps72 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+            + dNdx8*u16 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
+            + dNdy8*u15;
+        strain[24] = eps70;
+        strain[25] = eps71;
+        strain[26] = eps72;
+        stress[24] = eps70*m4 + eps71*m5;
+        stress[25] = eps70*m5 + eps71*m4;
+        stress[26] = eps72*m6;
+    }
+}
+
+void derive_q8_selective_plane_stress_recovery(long n, const double *restrict xy, const double *restrict u, double E, double nu,
+                           double *restrict strain, double *restrict stress)
+{
+    double mat[NMAT];
+    q8_selective_plane_stress_material(E, nu, 1.0, mat);
+    for (long e = 0; e < n; ++e)
+        q8_selective_plane_stress_recovery_body(xy + (size_t)e * NIN, u + (size_t)e * 16, mat,
+                                 strain + (size_t)e * 27, stress + (size_t)e * 27);
+}

@@ -1,0 +1,1812 @@
+/*
+ * derive generated kernel: Q9 selective plane-stress
+ * 
+ * element      Q9, 9 nodes, 18 DOFs interleaved u1, v1, u2, v2, ...
+ * formulation  selective integration: volumetric part of D with the reduced rule [Doherty, Wilson & Taylor (1969); Hughes (1987) Sec. 4.4]
+ * integration  B^T D_dev B: gauss-3x3 (9 points); B^T D_vol B (reduced rule): gauss-2x2 (4 points)
+ * flops        stiffness 1460, validity 366, recovery 1380 per element (add, mul, div, sqrt)
+ * 
+ * arguments (units-agnostic; any consistent set of units):
+ *   xy      nodal coordinates, shape (n, 9, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+ *   E       Young's modulus (> 0), scalar
+ *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
+ *   t       thickness t (the out-of-plane thickness)
+ *   u       nodal displacements for recovery, shape (n, 18), interleaved u1, v1, u2, v2, ...
+ *   K       stiffness, shape (n, 18, 18), DOFs interleaved u1, v1, u2, v2, ...; symmetric
+ *   detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted or degenerate element
+ *   strain  recovery: strain at the 9 points of gauss-3x3, shape (n, 9, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
+ *   stress  recovery: stress D strain at the same points, shape (n, 9, 3), [sigma_xx, sigma_yy, tau_xy]
+ * 
+ * The kernels do not check their inputs; derive.kernel() checks shapes, finite
+ * coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
+ * generator    derive.codegen 1.0; regenerate with
+ *              derive kernel Q9 --variant selective --state plane-stress --lang c
+ *
+ * C99.  Compile e.g. with: cc -O3 -march=native -fopenmp-simd -c q9_selective_plane_stress.c
+ * Data layout: every array is dense, row-major (C order), float64.  The batch kernel
+ * copies 8 elements at a time into element-innermost scratch arrays so that the
+ * per-element body is vectorised across elements (one SIMD lane per element).
+ */
+#include <math.h>
+#include <stddef.h>
+#include "q9_selective_plane_stress.h"
+
+#define NIN 18
+#define NK 324
+#define NMAT 10
+#define LANES 8
+#if defined(__GNUC__)
+/* inlined into the lane loop so that the loop over elements vectorises */
+#define DERIVE_INLINE static inline __attribute__((always_inline))
+#else
+#define DERIVE_INLINE static inline
+#endif
+
+/* point tables of the rules evaluated in a loop: shape-function derivatives, weights, ... */
+static const double KS0_c0[9] = {
+    0.6, 0.6, 0.6, 0.0, 0.0, 0.0, 0.6, 0.6, 0.6
+};
+static const double KS0_c1[9] = {
+    -1.5491933384829668, 0.0, 1.5491933384829668, -1.5491933384829668, 0.0, 1.5491933384829668,
+    -1.5491933384829668, 0.0, 1.5491933384829668
+};
+static const double KS0_c10[9] = {
+    0.11127016653792583, 0.0, -0.8760281680828158, 0.04364916731037084, 0.0, -0.3436491673103708,
+    -0.023971831917184144, 0.0, 0.18872983346207417
+};
+static const double KS0_c11[9] = {
+    0.023971831917184144, -0.04364916731037084, -0.11127016653792583, 0.0, 0.0, 0.0,
+    -0.18872983346207417, 0.3436491673103708, 0.8760281680828158
+};
+static const double KS0_c12[9] = {
+    0.023971831917184144, 0.0, -0.18872983346207417, -0.04364916731037084, 0.0, 0.3436491673103708,
+    -0.11127016653792583, 0.0, 0.8760281680828158
+};
+static const double KS0_c13[9] = {
+    0.11127016653792583, 0.04364916731037084, -0.023971831917184144, 0.0, 0.0, 0.0,
+    -0.8760281680828158, -0.3436491673103708, 0.18872983346207417
+};
+static const double KS0_c14[9] = {
+    -0.18872983346207417, 0.0, 0.023971831917184144, 0.3436491673103708, 0.0, -0.04364916731037084,
+    0.8760281680828158, 0.0, -0.11127016653792583
+};
+static const double KS0_c15[9] = {
+    1.06475800154489, 0.0, -1.06475800154489, 0.0, 0.0, 0.0, -0.13524199845510998, 0.0,
+    0.13524199845510998
+};
+static const double KS0_c16[9] = {
+    -0.5098386676965934, -1.2745966692414834, -0.5098386676965934, -0.2, -0.5, -0.2,
+    0.10983866769659335, 0.2745966692414834, 0.10983866769659335
+};
+static const double KS0_c17[9] = {
+    -0.10983866769659335, 0.2, 0.5098386676965934, -0.2745966692414834, 0.5, 1.2745966692414834,
+    -0.10983866769659335, 0.2, 0.5098386676965934
+};
+static const double KS0_c18[9] = {
+    -0.13524199845510998, 0.0, 1.06475800154489, 0.0, 0.0, 0.0, 0.13524199845510998, 0.0,
+    -1.06475800154489
+};
+static const double KS0_c19[9] = {
+    -0.13524199845510998, 0.0, 0.13524199845510998, 0.0, 0.0, 0.0, 1.06475800154489, 0.0,
+    -1.06475800154489
+};
+static const double KS0_c2[9] = {
+    1.2, 0.0, -1.2, 0.0, 0.0, 0.0, -1.2, 0.0, 1.2
+};
+static const double KS0_c20[9] = {
+    -0.10983866769659335, -0.2745966692414834, -0.10983866769659335, 0.2, 0.5, 0.2,
+    0.5098386676965934, 1.2745966692414834, 0.5098386676965934
+};
+static const double KS0_c21[9] = {
+    -0.5098386676965934, -0.2, 0.10983866769659335, -1.2745966692414834, -0.5, 0.2745966692414834,
+    -0.5098386676965934, -0.2, 0.10983866769659335
+};
+static const double KS0_c22[9] = {
+    1.06475800154489, 0.0, -0.13524199845510998, 0.0, 0.0, 0.0, -1.06475800154489, 0.0,
+    0.13524199845510998
+};
+static const double KS0_c23[9] = {
+    0.6196773353931867, 0.0, -0.6196773353931867, 1.5491933384829668, 0.0, -1.5491933384829668,
+    0.6196773353931867, 0.0, -0.6196773353931867
+};
+static const double KS0_c24[9] = {
+    0.6196773353931867, 1.5491933384829668, 0.6196773353931867, 0.0, 0.0, 0.0, -0.6196773353931867,
+    -1.5491933384829668, -0.6196773353931867
+};
+static const double KS0_c3[9] = {
+    -0.9295160030897801, 0.0, 0.9295160030897801, 0.0, 0.0, 0.0, -0.9295160030897801, 0.0,
+    0.9295160030897801
+};
+static const double KS0_c4[9] = {
+    -1.5491933384829668, -1.5491933384829668, -1.5491933384829668, 0.0, 0.0, 0.0,
+    1.5491933384829668, 1.5491933384829668, 1.5491933384829668
+};
+static const double KS0_c5[9] = {
+    0.6, 0.0, 0.6, 0.6, 0.0, 0.6, 0.6, 0.0, 0.6
+};
+static const double KS0_c6[9] = {
+    -0.9295160030897801, 0.0, -0.9295160030897801, 0.0, 0.0, 0.0, 0.9295160030897801, 0.0,
+    0.9295160030897801
+};
+static const double KS0_c7[9] = {
+    -0.8760281680828158, -0.3436491673103708, 0.18872983346207417, 0.0, 0.0, 0.0,
+    0.11127016653792583, 0.04364916731037084, -0.023971831917184144
+};
+static const double KS0_c8[9] = {
+    -0.8760281680828158, 0.0, 0.11127016653792583, -0.3436491673103708, 0.0, 0.04364916731037084,
+    0.18872983346207417, 0.0, -0.023971831917184144
+};
+static const double KS0_c9[9] = {
+    -0.18872983346207417, 0.3436491673103708, 0.8760281680828158, 0.0, 0.0, 0.0,
+    0.023971831917184144, -0.04364916731037084, -0.11127016653792583
+};
+static const double KS0_eta[9] = {
+    -0.7745966692414834, -0.7745966692414834, -0.7745966692414834, 0.0, 0.0, 0.0,
+    0.7745966692414834, 0.7745966692414834, 0.7745966692414834
+};
+static const double KS0_w[9] = {
+    0.30864197530864196, 0.49382716049382713, 0.30864197530864196, 0.49382716049382713,
+    0.7901234567901234, 0.49382716049382713, 0.30864197530864196, 0.49382716049382713,
+    0.30864197530864196
+};
+static const double KS0_xi[9] = {
+    -0.7745966692414834, 0.0, 0.7745966692414834, -0.7745966692414834, 0.0, 0.7745966692414834,
+    -0.7745966692414834, 0.0, 0.7745966692414834
+};
+static const double KS1_c0[4] = {
+    0.3333333333333333, 0.3333333333333333, 0.3333333333333333, 0.3333333333333333
+};
+static const double KS1_c1[4] = {
+    -1.1547005383792515, 1.1547005383792515, -1.1547005383792515, 1.1547005383792515
+};
+static const double KS1_c10[4] = {
+    0.13144585576580214, -0.4905626121623441, -0.009437387837655931, 0.03522081090086452
+};
+static const double KS1_c11[4] = {
+    0.009437387837655931, -0.13144585576580214, -0.03522081090086452, 0.4905626121623441
+};
+static const double KS1_c12[4] = {
+    0.009437387837655931, -0.03522081090086452, -0.13144585576580214, 0.4905626121623441
+};
+static const double KS1_c13[4] = {
+    0.13144585576580214, -0.009437387837655931, -0.4905626121623441, 0.03522081090086452
+};
+static const double KS1_c14[4] = {
+    -0.03522081090086452, 0.009437387837655931, 0.4905626121623441, -0.13144585576580214
+};
+static const double KS1_c15[4] = {
+    0.5257834230632086, -0.5257834230632086, -0.14088324360345808, 0.14088324360345808
+};
+static const double KS1_c16[4] = {
+    -0.7182335127930839, -0.7182335127930839, 0.051566846126417175, 0.051566846126417175
+};
+static const double KS1_c17[4] = {
+    -0.051566846126417175, 0.7182335127930839, -0.051566846126417175, 0.7182335127930839
+};
+static const double KS1_c18[4] = {
+    -0.14088324360345808, 0.5257834230632086, 0.14088324360345808, -0.5257834230632086
+};
+static const double KS1_c19[4] = {
+    -0.14088324360345808, 0.14088324360345808, 0.5257834230632086, -0.5257834230632086
+};
+static const double KS1_c2[4] = {
+    0.6666666666666666, -0.6666666666666666, -0.6666666666666666, 0.6666666666666666
+};
+static const double KS1_c20[4] = {
+    -0.051566846126417175, -0.051566846126417175, 0.7182335127930839, 0.7182335127930839
+};
+static const double KS1_c21[4] = {
+    -0.7182335127930839, 0.051566846126417175, -0.7182335127930839, 0.051566846126417175
+};
+static const double KS1_c22[4] = {
+    0.5257834230632086, -0.14088324360345808, -0.5257834230632086, 0.14088324360345808
+};
+static const double KS1_c23[4] = {
+    0.769800358919501, -0.769800358919501, 0.769800358919501, -0.769800358919501
+};
+static const double KS1_c24[4] = {
+    0.769800358919501, 0.769800358919501, -0.769800358919501, -0.769800358919501
+};
+static const double KS1_c3[4] = {
+    -0.3849001794597505, 0.3849001794597505, -0.3849001794597505, 0.3849001794597505
+};
+static const double KS1_c4[4] = {
+    -1.1547005383792515, -1.1547005383792515, 1.1547005383792515, 1.1547005383792515
+};
+static const double KS1_c5[4] = {
+    0.3333333333333333, 0.3333333333333333, 0.3333333333333333, 0.3333333333333333
+};
+static const double KS1_c6[4] = {
+    -0.3849001794597505, -0.3849001794597505, 0.3849001794597505, 0.3849001794597505
+};
+static const double KS1_c7[4] = {
+    -0.4905626121623441, 0.03522081090086452, 0.13144585576580214, -0.009437387837655931
+};
+static const double KS1_c8[4] = {
+    -0.4905626121623441, 0.13144585576580214, 0.03522081090086452, -0.009437387837655931
+};
+static const double KS1_c9[4] = {
+    -0.03522081090086452, 0.4905626121623441, 0.009437387837655931, -0.13144585576580214
+};
+static const double KS1_eta[4] = {
+    -0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257
+};
+static const double KS1_w[4] = {
+    1.0, 1.0, 1.0, 1.0
+};
+static const double KS1_xi[4] = {
+    -0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257
+};
+
+/* material table: E, nu, t, then the material constants the kernels use */
+static inline void q9_selective_plane_stress_material(double E, double nu, double t, double *restrict mat)
+{
+    mat[0] = E;
+    mat[1] = nu;
+    mat[2] = t;
+    mat[3] = 2.0*E/(3.0 + 3.0*nu);   /* m0 */
+    mat[4] = -E/(3.0 + 3.0*nu);   /* m1 */
+    mat[5] = E/(2.0 + 2.0*nu);   /* m2 */
+    mat[6] = (-E - 2.0*E*nu)/(-3.0 + 3.0*nu*nu);   /* m3 */
+    mat[7] = E/(1.0 - nu*nu);   /* m4 */
+    mat[8] = E*nu/(1.0 - nu*nu);   /* m5 */
+    mat[9] = E*(0.5 - 0.5*nu)/(1.0 - nu*nu);   /* m6 */
+}
+
+/* stiffness of one element; xy[k * sx] is input k, K[k * sk] output k (row-major) */
+DERIVE_INLINE void q9_selective_plane_stress_stiffness_body(const double *restrict xy, const ptrdiff_t sx,
+                                             const double *restrict mat, double *restrict K,
+                                             const ptrdiff_t sk)
+{
+    const double x1 = xy[0 * sx];
+    const double y1 = xy[1 * sx];
+    const double x2 = xy[2 * sx];
+    const double y2 = xy[3 * sx];
+    const double x3 = xy[4 * sx];
+    const double y3 = xy[5 * sx];
+    const double x4 = xy[6 * sx];
+    const double y4 = xy[7 * sx];
+    const double x5 = xy[8 * sx];
+    const double y5 = xy[9 * sx];
+    const double x6 = xy[10 * sx];
+    const double y6 = xy[11 * sx];
+    const double x7 = xy[12 * sx];
+    const double y7 = xy[13 * sx];
+    const double x8 = xy[14 * sx];
+    const double y8 = xy[15 * sx];
+    const double x9 = xy[16 * sx];
+    const double y9 = xy[17 * sx];
+    const double t = mat[2];
+    const double m0 = mat[3];
+    const double m1 = mat[4];
+    const double m2 = mat[5];
+    const double m3 = mat[6];
+    /* element quantities: map coefficients, centre Jacobian */
+    const double gx_0_1 = 0.5*x7 - 0.5*x5;
+    const double gx_0_2 = 0.5*x5 + 0.5*x7 - x9;
+    const double gx_1_0 = 0.5*x6 - 0.5*x8;
+    const double gx_1_1 = -0.25*x2 - 0.25*x4 + 0.25*x1 + 0.25*x3;
+    const double gx_1_2 = 0.5*x8 - 0.5*x6 - 0.25*x1 - 0.25*x4 + 0.25*x2 + 0.25*x3;
+    const double gx_2_0 = 0.5*x6 + 0.5*x8 - x9;
+    const double gx_2_1 = 0.5*x5 - 0.5*x7 - 0.25*x1 - 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gx_2_2 = x9 - 0.5*x5 - 0.5*x6 - 0.5*x7 - 0.5*x8 + 0.25*x1 + 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gy_0_1 = 0.5*y7 - 0.5*y5;
+    const double gy_0_2 = 0.5*y5 + 0.5*y7 - y9;
+    const double gy_1_0 = 0.5*y6 - 0.5*y8;
+    const double gy_1_1 = -0.25*y2 - 0.25*y4 + 0.25*y1 + 0.25*y3;
+    const double gy_1_2 = 0.5*y8 - 0.5*y6 - 0.25*y1 - 0.25*y4 + 0.25*y2 + 0.25*y3;
+    const double gy_2_0 = 0.5*y6 + 0.5*y8 - y9;
+    const double gy_2_1 = 0.5*y5 - 0.5*y7 - 0.25*y1 - 0.25*y2 + 0.25*y3 + 0.25*y4;
+    const double gy_2_2 = y9 - 0.5*y5 - 0.5*y6 - 0.5*y7 - 0.5*y8 + 0.25*y1 + 0.25*y2 + 0.25*y3 + 0.25*y4;
+    double K_0_0 = 0.0, K_0_1 = 0.0, K_0_2 = 0.0, K_0_3 = 0.0, K_0_4 = 0.0, K_0_5 = 0.0, K_0_6 = 0.0;
+    double K_0_7 = 0.0, K_0_8 = 0.0, K_0_9 = 0.0, K_0_10 = 0.0, K_0_11 = 0.0, K_0_12 = 0.0;
+    double K_0_13 = 0.0, K_0_14 = 0.0, K_0_15 = 0.0, K_0_16 = 0.0, K_0_17 = 0.0, K_1_1 = 0.0;
+    double K_1_2 = 0.0, K_1_3 = 0.0, K_1_4 = 0.0, K_1_5 = 0.0, K_1_6 = 0.0, K_1_7 = 0.0, K_1_8 = 0.0;
+    double K_1_9 = 0.0, K_1_10 = 0.0, K_1_11 = 0.0, K_1_12 = 0.0, K_1_13 = 0.0, K_1_14 = 0.0;
+    double K_1_15 = 0.0, K_1_16 = 0.0, K_1_17 = 0.0, K_2_2 = 0.0, K_2_3 = 0.0, K_2_4 = 0.0;
+    double K_2_5 = 0.0, K_2_6 = 0.0, K_2_7 = 0.0, K_2_8 = 0.0, K_2_9 = 0.0, K_2_10 = 0.0;
+    double K_2_11 = 0.0, K_2_12 = 0.0, K_2_13 = 0.0, K_2_14 = 0.0, K_2_15 = 0.0, K_2_16 = 0.0;
+    double K_2_17 = 0.0, K_3_3 = 0.0, K_3_4 = 0.0, K_3_5 = 0.0, K_3_6 = 0.0, K_3_7 = 0.0;
+    double K_3_8 = 0.0, K_3_9 = 0.0, K_3_10 = 0.0, K_3_11 = 0.0, K_3_12 = 0.0, K_3_13 = 0.0;
+    double K_3_14 = 0.0, K_3_15 = 0.0, K_3_16 = 0.0, K_3_17 = 0.0, K_4_4 = 0.0, K_4_5 = 0.0;
+    double K_4_6 = 0.0, K_4_7 = 0.0, K_4_8 = 0.0, K_4_9 = 0.0, K_4_10 = 0.0, K_4_11 = 0.0;
+    double K_4_12 = 0.0, K_4_13 = 0.0, K_4_14 = 0.0, K_4_15 = 0.0, K_4_16 = 0.0, K_4_17 = 0.0;
+    double K_5_5 = 0.0, K_5_6 = 0.0, K_5_7 = 0.0, K_5_8 = 0.0, K_5_9 = 0.0, K_5_10 = 0.0;
+    double K_5_11 = 0.0, K_5_12 = 0.0, K_5_13 = 0.0, K_5_14 = 0.0, K_5_15 = 0.0, K_5_16 = 0.0;
+    double K_5_17 = 0.0, K_6_6 = 0.0, K_6_7 = 0.0, K_6_8 = 0.0, K_6_9 = 0.0, K_6_10 = 0.0;
+    double K_6_11 = 0.0, K_6_12 = 0.0, K_6_13 = 0.0, K_6_14 = 0.0, K_6_15 = 0.0, K_6_16 = 0.0;
+    double K_6_17 = 0.0, K_7_7 = 0.0, K_7_8 = 0.0, K_7_9 = 0.0, K_7_10 = 0.0, K_7_11 = 0.0;
+    double K_7_12 = 0.0, K_7_13 = 0.0, K_7_14 = 0.0, K_7_15 = 0.0, K_7_16 = 0.0, K_7_17 = 0.0;
+    double K_8_8 = 0.0, K_8_9 = 0.0, K_8_10 = 0.0, K_8_11 = 0.0, K_8_12 = 0.0, K_8_13 = 0.0;
+    double K_8_14 = 0.0, K_8_15 = 0.0, K_8_16 = 0.0, K_8_17 = 0.0, K_9_9 = 0.0, K_9_10 = 0.0;
+    double K_9_11 = 0.0, K_9_12 = 0.0, K_9_13 = 0.0, K_9_14 = 0.0, K_9_15 = 0.0, K_9_16 = 0.0;
+    double K_9_17 = 0.0, K_10_10 = 0.0, K_10_11 = 0.0, K_10_12 = 0.0, K_10_13 = 0.0, K_10_14 = 0.0;
+    double K_10_15 = 0.0, K_10_16 = 0.0, K_10_17 = 0.0, K_11_11 = 0.0, K_11_12 = 0.0, K_11_13 = 0.0;
+    double K_11_14 = 0.0, K_11_15 = 0.0, K_11_16 = 0.0, K_11_17 = 0.0, K_12_12 = 0.0, K_12_13 = 0.0;
+    double K_12_14 = 0.0, K_12_15 = 0.0, K_12_16 = 0.0, K_12_17 = 0.0, K_13_13 = 0.0, K_13_14 = 0.0;
+    double K_13_15 = 0.0, K_13_16 = 0.0, K_13_17 = 0.0, K_14_14 = 0.0, K_14_15 = 0.0, K_14_16 = 0.0;
+    double K_14_17 = 0.0, K_15_15 = 0.0, K_15_16 = 0.0, K_15_17 = 0.0, K_16_16 = 0.0, K_16_17 = 0.0;
+    double K_17_17 = 0.0;
+    for (int p = 0; p < 9; ++p) {   /* gauss-3x3: loop over the 9 points */
+        const double c0 = KS0_c0[p];
+        const double c1 = KS0_c1[p];
+        const double c10 = KS0_c10[p];
+        const double c11 = KS0_c11[p];
+        const double c12 = KS0_c12[p];
+        const double c13 = KS0_c13[p];
+        const double c14 = KS0_c14[p];
+        const double c15 = KS0_c15[p];
+        const double c16 = KS0_c16[p];
+        const double c17 = KS0_c17[p];
+        const double c18 = KS0_c18[p];
+        const double c19 = KS0_c19[p];
+        const double c2 = KS0_c2[p];
+        const double c20 = KS0_c20[p];
+        const double c21 = KS0_c21[p];
+        const double c22 = KS0_c22[p];
+        const double c23 = KS0_c23[p];
+        const double c24 = KS0_c24[p];
+        const double c3 = KS0_c3[p];
+        const double c4 = KS0_c4[p];
+        const double c5 = KS0_c5[p];
+        const double c6 = KS0_c6[p];
+        const double c7 = KS0_c7[p];
+        const double c8 = KS0_c8[p];
+        const double c9 = KS0_c9[p];
+        const double eta = KS0_eta[p];
+        const double w = KS0_w[p];
+        const double xi = KS0_xi[p];
+        const double J00 = gx_1_0 + c0*gx_1_2 + c1*gx_2_0 + c2*gx_2_1 + c3*gx_2_2 + eta*gx_1_1;
+        const double J01 = gy_1_0 + c0*gy_1_2 + c1*gy_2_0 + c2*gy_2_1 + c3*gy_2_2 + eta*gy_1_1;
+        const double J10 = gx_0_1 + c2*gx_1_2 + c4*gx_0_2 + c5*gx_2_1 + c6*gx_2_2 + gx_1_1*xi;
+        const double J11 = gy_0_1 + c2*gy_1_2 + c4*gy_0_2 + c5*gy_2_1 + c6*gy_2_2 + gy_1_1*xi;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = Ji00*c7 + Ji01*c8;
+        const double dNdy1 = Ji10*c7 + Ji11*c8;
+        const double dNdx2 = Ji00*c9 + Ji01*c10;
+        const double dNdy2 = Ji10*c9 + Ji11*c10;
+        const double dNdx3 = Ji00*c11 + Ji01*c12;
+        const double dNdy3 = Ji10*c11 + Ji11*c12;
+        const double dNdx4 = Ji00*c13 + Ji01*c14;
+        const double dNdy4 = Ji10*c13 + Ji11*c14;
+        const double dNdx5 = Ji00*c15 + Ji01*c16;
+        const double dNdy5 = Ji10*c15 + Ji11*c16;
+        const double dNdx6 = Ji00*c17 + Ji01*c18;
+        const double dNdy6 = Ji10*c17 + Ji11*c18;
+        const double dNdx7 = Ji00*c19 + Ji01*c20;
+        const double dNdy7 = Ji10*c19 + Ji11*c20;
+        const double dNdx8 = Ji00*c21 + Ji01*c22;
+        const double dNdy8 = Ji10*c21 + Ji11*c22;
+        const double dNdx9 = Ji00*c23 + Ji01*c24;
+        const double dNdy9 = Ji10*c23 + Ji11*c24;
+        const double sc0 = detJ*t*w;
+        const double s1 = m0*sc0;
+        const double s2 = m1*sc0;
+        const double s3 = m2*sc0;
+        const double T4 = dNdx1*s1;
+        const double T6 = dNdy1*s3;
+        const double T7 = dNdy1*s2;
+        const double T8 = dNdy1*s1;
+        const double T9 = dNdx1*s3;
+        const double T10 = dNdx2*s1;
+        const double T11 = dNdx2*s2;
+        const double T12 = dNdy2*s3;
+        const double T13 = dNdy2*s2;
+        const double T14 = dNdy2*s1;
+        const double T15 = dNdx2*s3;
+        const double T16 = dNdx3*s1;
+        const double T17 = dNdx3*s2;
+        const double T18 = dNdy3*s3;
+        const double T19 = dNdy3*s2;
+        const double T20 = dNdy3*s1;
+        const double T21 = dNdx3*s3;
+        const double T22 = dNdx4*s1;
+        const double T23 = dNdx4*s2;
+        const double T24 = dNdy4*s3;
+        const double T25 = dNdy4*s2;
+        const double T26 = dNdy4*s1;
+        const double T27 = dNdx4*s3;
+        const double T28 = dNdx5*s1;
+        const double T29 = dNdx5*s2;
+        const double T30 = dNdy5*s3;
+        const double T31 = dNdy5*s2;
+        const double T32 = dNdy5*s1;
+        const double T33 = dNdx5*s3;
+        const double T34 = dNdx6*s1;
+        const double T35 = dNdx6*s2;
+        const double T36 = dNdy6*s3;
+        const double T37 = dNdy6*s2;
+        const double T38 = dNdy6*s1;
+        const double T39 = dNdx6*s3;
+        const double T40 = dNdx7*s1;
+        const double T41 = dNdx7*s2;
+        const double T42 = dNdy7*s3;
+        const double T43 = dNdy7*s2;
+        const double T44 = dNdy7*s1;
+        const double T45 = dNdx7*s3;
+        const double T46 = dNdx8*s1;
+        const double T47 = dNdx8*s2;
+        const double T48 = dNdy8*s3;
+        const double T49 = dNdy8*s2;
+        const double T50 = dNdy8*s1;
+        const double T51 = dNdx8*s3;
+        const double T52 = dNdx9*s1;
+        const double T53 = dNdx9*s2;
+        const double T54 = dNdy9*s3;
+        const double T55 = dNdy9*s2;
+        const double T56 = dNdy9*s1;
+        const double T57 = dNdx9*s3;
+        K_0_0 += T4*dNdx1 + T6*dNdy1;
+        K_0_1 += T7*dNdx1 + T9*dNdy1;
+        K_0_2 += T10*dNdx1 + T12*dNdy1;
+        K_0_3 += T13*dNdx1 + T15*dNdy1;
+        K_0_4 += T16*dNdx1 + T18*dNdy1;
+        K_0_5 += T19*dNdx1 + T21*dNdy1;
+        K_0_6 += T22*dNdx1 + T24*dNdy1;
+        K_0_7 += T25*dNdx1 + T27*dNdy1;
+        K_0_8 += T28*dNdx1 + T30*dNdy1;
+        K_0_9 += T31*dNdx1 + T33*dNdy1;
+        K_0_10 += T34*dNdx1 + T36*dNdy1;
+        K_0_11 += T37*dNdx1 + T39*dNdy1;
+        K_0_12 += T40*dNdx1 + T42*dNdy1;
+        K_0_13 += T43*dNdx1 + T45*dNdy1;
+        K_0_14 += T46*dNdx1 + T48*dNdy1;
+        K_0_15 += T49*dNdx1 + T51*dNdy1;
+        K_0_16 += T52*dNdx1 + T54*dNdy1;
+        K_0_17 += T55*dNdx1 + T57*dNdy1;
+        K_1_1 += T8*dNdy1 + T9*dNdx1;
+        K_1_2 += T11*dNdy1 + T12*dNdx1;
+        K_1_3 += T14*dNdy1 + T15*dNdx1;
+        K_1_4 += T17*dNdy1 + T18*dNdx1;
+        K_1_5 += T20*dNdy1 + T21*dNdx1;
+        K_1_6 += T23*dNdy1 + T24*dNdx1;
+        K_1_7 += T26*dNdy1 + T27*dNdx1;
+        K_1_8 += T29*dNdy1 + T30*dNdx1;
+        K_1_9 += T32*dNdy1 + T33*dNdx1;
+        K_1_10 += T35*dNdy1 + T36*dNdx1;
+        K_1_11 += T38*dNdy1 + T39*dNdx1;
+        K_1_12 += T41*dNdy1 + T42*dNdx1;
+        K_1_13 += T44*dNdy1 + T45*dNdx1;
+        K_1_14 += T47*dNdy1 + T48*dNdx1;
+        K_1_15 += T50*dNdy1 + T51*dNdx1;
+        K_1_16 += T53*dNdy1 + T54*dNdx1;
+        K_1_17 += T56*dNdy1 + T57*dNdx1;
+        K_2_2 += T10*dNdx2 + T12*dNdy2;
+        K_2_3 += T13*dNdx2 + T15*dNdy2;
+        K_2_4 += T16*dNdx2 + T18*dNdy2;
+        K_2_5 += T19*dNdx2 + T21*dNdy2;
+        K_2_6 += T22*dNdx2 + T24*dNdy2;
+        K_2_7 += T25*dNdx2 + T27*dNdy2;
+        K_2_8 += T28*dNdx2 + T30*dNdy2;
+        K_2_9 += T31*dNdx2 + T33*dNdy2;
+        K_2_10 += T34*dNdx2 + T36*dNdy2;
+        K_2_11 += T37*dNdx2 + T39*dNdy2;
+        K_2_12 += T40*dNdx2 + T42*dNdy2;
+        K_2_13 += T43*dNdx2 + T45*dNdy2;
+        K_2_14 += T46*dNdx2 + T48*dNdy2;
+        K_2_15 += T49*dNdx2 + T51*dNdy2;
+        K_2_16 += T52*dNdx2 + T54*dNdy2;
+        K_2_17 += T55*dNdx2 + T57*dNdy2;
+        K_3_3 += T14*dNdy2 + T15*dNdx2;
+        K_3_4 += T17*dNdy2 + T18*dNdx2;
+        K_3_5 += T20*dNdy2 + T21*dNdx2;
+        K_3_6 += T23*dNdy2 + T24*dNdx2;
+        K_3_7 += T26*dNdy2 + T27*dNdx2;
+        K_3_8 += T29*dNdy2 + T30*dNdx2;
+        K_3_9 += T32*dNdy2 + T33*dNdx2;
+        K_3_10 += T35*dNdy2 + T36*dNdx2;
+        K_3_11 += T38*dNdy2 + T39*dNdx2;
+        K_3_12 += T41*dNdy2 + T42*dNdx2;
+        K_3_13 += T44*dNdy2 + T45*dNdx2;
+        K_3_14 += T47*dNdy2 + T48*dNdx2;
+        K_3_15 += T50*dNdy2 + T51*dNdx2;
+        K_3_16 += T53*dNdy2 + T54*dNdx2;
+        K_3_17 += T56*dNdy2 + T57*dNdx2;
+        K_4_4 += T16*dNdx3 + T18*dNdy3;
+        K_4_5 += T19*dNdx3 + T21*dNdy3;
+        K_4_6 += T22*dNdx3 + T24*dNdy3;
+        K_4_7 += T25*dNdx3 + T27*dNdy3;
+        K_4_8 += T28*dNdx3 + T30*dNdy3;
+        K_4_9 += T31*dNdx3 + T33*dNdy3;
+        K_4_10 += T34*dNdx3 + T36*dNdy3;
+        K_4_11 += T37*dNdx3 + T39*dNdy3;
+        K_4_12 += T40*dNdx3 + T42*dNdy3;
+        K_4_13 += T43*dNdx3 + T45*dNdy3;
+        K_4_14 += T46*dNdx3 + T48*dNdy3;
+        K_4_15 += T49*dNdx3 + T51*dNdy3;
+        K_4_16 += T52*dNdx3 + T54*dNdy3;
+        K_4_17 += T55*dNdx3 + T57*dNdy3;
+        K_5_5 += T20*dNdy3 + T21*dNdx3;
+        K_5_6 += T23*dNdy3 + T24*dNdx3;
+        K_5_7 += T26*dNdy3 + T27*dNdx3;
+        K_5_8 += T29*dNdy3 + T30*dNdx3;
+        K_5_9 += T32*dNdy3 + T33*dNdx3;
+        K_5_10 += T35*dNdy3 + T36*dNdx3;
+        K_5_11 += T38*dNdy3 + T39*dNdx3;
+        K_5_12 += T41*dNdy3 + T42*dNdx3;
+        K_5_13 += T44*dNdy3 + T45*dNdx3;
+        K_5_14 += T47*dNdy3 + T48*dNdx3;
+        K_5_15 += T50*dNdy3 + T51*dNdx3;
+        K_5_16 += T53*dNdy3 + T54*dNdx3;
+        K_5_17 += T56*dNdy3 + T57*dNdx3;
+        K_6_6 += T22*dNdx4 + T24*dNdy4;
+        K_6_7 += T25*dNdx4 + T27*dNdy4;
+        K_6_8 += T28*dNdx4 + T30*dNdy4;
+        K_6_9 += T31*dNdx4 + T33*dNdy4;
+        K_6_10 += T34*dNdx4 + T36*dNdy4;
+        K_6_11 += T37*dNdx4 + T39*dNdy4;
+        K_6_12 += T40*dNdx4 + T42*dNdy4;
+        K_6_13 += T43*dNdx4 + T45*dNdy4;
+        K_6_14 += T46*dNdx4 + T48*dNdy4;
+        K_6_15 += T49*dNdx4 + T51*dNdy4;
+        K_6_16 += T52*dNdx4 + T54*dNdy4;
+        K_6_17 += T55*dNdx4 + T57*dNdy4;
+        K_7_7 += T26*dNdy4 + T27*dNdx4;
+        K_7_8 += T29*dNdy4 + T30*dNdx4;
+        K_7_9 += T32*dNdy4 + T33*dNdx4;
+        K_7_10 += T35*dNdy4 + T36*dNdx4;
+        K_7_11 += T38*dNdy4 + T39*dNdx4;
+        K_7_12 += T41*dNdy4 + T42*dNdx4;
+        K_7_13 += T44*dNdy4 + T45*dNdx4;
+        K_7_14 += T47*dNdy4 + T48*dNdx4;
+        K_7_15 += T50*dNdy4 + T51*dNdx4;
+        K_7_16 += T53*dNdy4 + T54*dNdx4;
+        K_7_17 += T56*dNdy4 + T57*dNdx4;
+        K_8_8 += T28*dNdx5 + T30*dNdy5;
+        K_8_9 += T31*dNdx5 + T33*dNdy5;
+        K_8_10 += T34*dNdx5 + T36*dNdy5;
+        K_8_11 += T37*dNdx5 + T39*dNdy5;
+        K_8_12 += T40*dNdx5 + T42*dNdy5;
+        K_8_13 += T43*dNdx5 + T45*dNdy5;
+        K_8_14 += T46*dNdx5 + T48*dNdy5;
+        K_8_15 += T49*dNdx5 + T51*dNdy5;
+        K_8_16 += T52*dNdx5 + T54*dNdy5;
+        K_8_17 += T55*dNdx5 + T57*dNdy5;
+        K_9_9 += T32*dNdy5 + T33*dNdx5;
+        K_9_10 += T35*dNdy5 + T36*dNdx5;
+        K_9_11 += T38*dNdy5 + T39*dNdx5;
+        K_9_12 += T41*dNdy5 + T42*dNdx5;
+        K_9_13 += T44*dNdy5 + T45*dNdx5;
+        K_9_14 += T47*dNdy5 + T48*dNdx5;
+        K_9_15 += T50*dNdy5 + T51*dNdx5;
+        K_9_16 += T53*dNdy5 + T54*dNdx5;
+        K_9_17 += T56*dNdy5 + T57*dNdx5;
+        K_10_10 += T34*dNdx6 + T36*dNdy6;
+        K_10_11 += T37*dNdx6 + T39*dNdy6;
+        K_10_12 += T40*dNdx6 + T42*dNdy6;
+        K_10_13 += T43*dNdx6 + T45*dNdy6;
+        K_10_14 += T46*dNdx6 + T48*dNdy6;
+        K_10_15 += T49*dNdx6 + T51*dNdy6;
+        K_10_16 += T52*dNdx6 + T54*dNdy6;
+        K_10_17 += T55*dNdx6 + T57*dNdy6;
+        K_11_11 += T38*dNdy6 + T39*dNdx6;
+        K_11_12 += T41*dNdy6 + T42*dNdx6;
+        K_11_13 += T44*dNdy6 + T45*dNdx6;
+        K_11_14 += T47*dNdy6 + T48*dNdx6;
+        K_11_15 += T50*dNdy6 + T51*dNdx6;
+        K_11_16 += T53*dNdy6 + T54*dNdx6;
+        K_11_17 += T56*dNdy6 + T57*dNdx6;
+        K_12_12 += T40*dNdx7 + T42*dNdy7;
+        K_12_13 += T43*dNdx7 + T45*dNdy7;
+        K_12_14 += T46*dNdx7 + T48*dNdy7;
+        K_12_15 += T49*dNdx7 + T51*dNdy7;
+        K_12_16 += T52*dNdx7 + T54*dNdy7;
+        K_12_17 += T55*dNdx7 + T57*dNdy7;
+        K_13_13 += T44*dNdy7 + T45*dNdx7;
+        K_13_14 += T47*dNdy7 + T48*dNdx7;
+        K_13_15 += T50*dNdy7 + T51*dNdx7;
+        K_13_16 += T53*dNdy7 + T54*dNdx7;
+        K_13_17 += T56*dNdy7 + T57*dNdx7;
+        K_14_14 += T46*dNdx8 + T48*dNdy8;
+        K_14_15 += T49*dNdx8 + T51*dNdy8;
+        K_14_16 += T52*dNdx8 + T54*dNdy8;
+        K_14_17 += T55*dNdx8 + T57*dNdy8;
+        K_15_15 += T50*dNdy8 + T51*dNdx8;
+        K_15_16 += T53*dNdy8 + T54*dNdx8;
+        K_15_17 += T56*dNdy8 + T57*dNdx8;
+        K_16_16 += T52*dNdx9 + T54*dNdy9;
+        K_16_17 += T55*dNdx9 + T57*dNdy9;
+        K_17_17 += T56*dNdy9 + T57*dNdx9;
+    }
+    for (int p = 0; p < 4; ++p) {   /* gauss-2x2: loop over the 4 points */
+        const double c0 = KS1_c0[p];
+        const double c1 = KS1_c1[p];
+        const double c10 = KS1_c10[p];
+        const double c11 = KS1_c11[p];
+        const double c12 = KS1_c12[p];
+        const double c13 = KS1_c13[p];
+        const double c14 = KS1_c14[p];
+        const double c15 = KS1_c15[p];
+        const double c16 = KS1_c16[p];
+        const double c17 = KS1_c17[p];
+        const double c18 = KS1_c18[p];
+        const double c19 = KS1_c19[p];
+        const double c2 = KS1_c2[p];
+        const double c20 = KS1_c20[p];
+        const double c21 = KS1_c21[p];
+        const double c22 = KS1_c22[p];
+        const double c23 = KS1_c23[p];
+        const double c24 = KS1_c24[p];
+        const double c3 = KS1_c3[p];
+        const double c4 = KS1_c4[p];
+        const double c5 = KS1_c5[p];
+        const double c6 = KS1_c6[p];
+        const double c7 = KS1_c7[p];
+        const double c8 = KS1_c8[p];
+        const double c9 = KS1_c9[p];
+        const double eta = KS1_eta[p];
+        const double w = KS1_w[p];
+        const double xi = KS1_xi[p];
+        const double J00 = gx_1_0 + c0*gx_1_2 + c1*gx_2_0 + c2*gx_2_1 + c3*gx_2_2 + eta*gx_1_1;
+        const double J01 = gy_1_0 + c0*gy_1_2 + c1*gy_2_0 + c2*gy_2_1 + c3*gy_2_2 + eta*gy_1_1;
+        const double J10 = gx_0_1 + c2*gx_1_2 + c4*gx_0_2 + c5*gx_2_1 + c6*gx_2_2 + gx_1_1*xi;
+        const double J11 = gy_0_1 + c2*gy_1_2 + c4*gy_0_2 + c5*gy_2_1 + c6*gy_2_2 + gy_1_1*xi;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = Ji00*c7 + Ji01*c8;
+        const double dNdy1 = Ji10*c7 + Ji11*c8;
+        const double dNdx2 = Ji00*c9 + Ji01*c10;
+        const double dNdy2 = Ji10*c9 + Ji11*c10;
+        const double dNdx3 = Ji00*c11 + Ji01*c12;
+        const double dNdy3 = Ji10*c11 + Ji11*c12;
+        const double dNdx4 = Ji00*c13 + Ji01*c14;
+        const double dNdy4 = Ji10*c13 + Ji11*c14;
+        const double dNdx5 = Ji00*c15 + Ji01*c16;
+        const double dNdy5 = Ji10*c15 + Ji11*c16;
+        const double dNdx6 = Ji00*c17 + Ji01*c18;
+        const double dNdy6 = Ji10*c17 + Ji11*c18;
+        const double dNdx7 = Ji00*c19 + Ji01*c20;
+        const double dNdy7 = Ji10*c19 + Ji11*c20;
+        const double dNdx8 = Ji00*c21 + Ji01*c22;
+        const double dNdy8 = Ji10*c21 + Ji11*c22;
+        const double dNdx9 = Ji00*c23 + Ji01*c24;
+        const double dNdy9 = Ji10*c23 + Ji11*c24;
+        const double sc58 = detJ*t*w;
+        const double s59 = m3*sc58;
+        const double T60 = dNdx1*s59;
+        const double T61 = dNdy1*s59;
+        const double T62 = dNdx2*s59;
+        const double T63 = dNdy2*s59;
+        const double T64 = dNdx3*s59;
+        const double T65 = dNdy3*s59;
+        const double T66 = dNdx4*s59;
+        const double T67 = dNdy4*s59;
+        const double T68 = dNdx5*s59;
+        const double T69 = dNdy5*s59;
+        const double T70 = dNdx6*s59;
+        const double T71 = dNdy6*s59;
+        const double T72 = dNdx7*s59;
+        const double T73 = dNdy7*s59;
+        const double T74 = dNdx8*s59;
+        const double T75 = dNdy8*s59;
+        const double T76 = dNdx9*s59;
+        const double T77 = dNdy9*s59;
+        K_0_0 += T60*dNdx1;
+        K_0_1 += T61*dNdx1;
+        K_0_2 += T62*dNdx1;
+        K_0_3 += T63*dNdx1;
+        K_0_4 += T64*dNdx1;
+        K_0_5 += T65*dNdx1;
+        K_0_6 += T66*dNdx1;
+        K_0_7 += T67*dNdx1;
+        K_0_8 += T68*dNdx1;
+        K_0_9 += T69*dNdx1;
+        K_0_10 += T70*dNdx1;
+        K_0_11 += T71*dNdx1;
+        K_0_12 += T72*dNdx1;
+        K_0_13 += T73*dNdx1;
+        K_0_14 += T74*dNdx1;
+        K_0_15 += T75*dNdx1;
+        K_0_16 += T76*dNdx1;
+        K_0_17 += T77*dNdx1;
+        K_1_1 += T61*dNdy1;
+        K_1_2 += T62*dNdy1;
+        K_1_3 += T63*dNdy1;
+        K_1_4 += T64*dNdy1;
+        K_1_5 += T65*dNdy1;
+        K_1_6 += T66*dNdy1;
+        K_1_7 += T67*dNdy1;
+        K_1_8 += T68*dNdy1;
+        K_1_9 += T69*dNdy1;
+        K_1_10 += T70*dNdy1;
+        K_1_11 += T71*dNdy1;
+        K_1_12 += T72*dNdy1;
+        K_1_13 += T73*dNdy1;
+        K_1_14 += T74*dNdy1;
+        K_1_15 += T75*dNdy1;
+        K_1_16 += T76*dNdy1;
+        K_1_17 += T77*dNdy1;
+        K_2_2 += T62*dNdx2;
+        K_2_3 += T63*dNdx2;
+        K_2_4 += T64*dNdx2;
+        K_2_5 += T65*dNdx2;
+        K_2_6 += T66*dNdx2;
+        K_2_7 += T67*dNdx2;
+        K_2_8 += T68*dNdx2;
+        K_2_9 += T69*dNdx2;
+        K_2_10 += T70*dNdx2;
+        K_2_11 += T71*dNdx2;
+        K_2_12 += T72*dNdx2;
+        K_2_13 += T73*dNdx2;
+        K_2_14 += T74*dNdx2;
+        K_2_15 += T75*dNdx2;
+        K_2_16 += T76*dNdx2;
+        K_2_17 += T77*dNdx2;
+        K_3_3 += T63*dNdy2;
+        K_3_4 += T64*dNdy2;
+        K_3_5 += T65*dNdy2;
+        K_3_6 += T66*dNdy2;
+        K_3_7 += T67*dNdy2;
+        K_3_8 += T68*dNdy2;
+        K_3_9 += T69*dNdy2;
+        K_3_10 += T70*dNdy2;
+        K_3_11 += T71*dNdy2;
+        K_3_12 += T72*dNdy2;
+        K_3_13 += T73*dNdy2;
+        K_3_14 += T74*dNdy2;
+        K_3_15 += T75*dNdy2;
+        K_3_16 += T76*dNdy2;
+        K_3_17 += T77*dNdy2;
+        K_4_4 += T64*dNdx3;
+        K_4_5 += T65*dNdx3;
+        K_4_6 += T66*dNdx3;
+        K_4_7 += T67*dNdx3;
+        K_4_8 += T68*dNdx3;
+        K_4_9 += T69*dNdx3;
+        K_4_10 += T70*dNdx3;
+        K_4_11 += T71*dNdx3;
+        K_4_12 += T72*dNdx3;
+        K_4_13 += T73*dNdx3;
+        K_4_14 += T74*dNdx3;
+        K_4_15 += T75*dNdx3;
+        K_4_16 += T76*dNdx3;
+        K_4_17 += T77*dNdx3;
+        K_5_5 += T65*dNdy3;
+        K_5_6 += T66*dNdy3;
+        K_5_7 += T67*dNdy3;
+        K_5_8 += T68*dNdy3;
+        K_5_9 += T69*dNdy3;
+        K_5_10 += T70*dNdy3;
+        K_5_11 += T71*dNdy3;
+        K_5_12 += T72*dNdy3;
+        K_5_13 += T73*dNdy3;
+        K_5_14 += T74*dNdy3;
+        K_5_15 += T75*dNdy3;
+        K_5_16 += T76*dNdy3;
+        K_5_17 += T77*dNdy3;
+        K_6_6 += T66*dNdx4;
+        K_6_7 += T67*dNdx4;
+        K_6_8 += T68*dNdx4;
+        K_6_9 += T69*dNdx4;
+        K_6_10 += T70*dNdx4;
+        K_6_11 += T71*dNdx4;
+        K_6_12 += T72*dNdx4;
+        K_6_13 += T73*dNdx4;
+        K_6_14 += T74*dNdx4;
+        K_6_15 += T75*dNdx4;
+        K_6_16 += T76*dNdx4;
+        K_6_17 += T77*dNdx4;
+        K_7_7 += T67*dNdy4;
+        K_7_8 += T68*dNdy4;
+        K_7_9 += T69*dNdy4;
+        K_7_10 += T70*dNdy4;
+        K_7_11 += T71*dNdy4;
+        K_7_12 += T72*dNdy4;
+        K_7_13 += T73*dNdy4;
+        K_7_14 += T74*dNdy4;
+        K_7_15 += T75*dNdy4;
+        K_7_16 += T76*dNdy4;
+        K_7_17 += T77*dNdy4;
+        K_8_8 += T68*dNdx5;
+        K_8_9 += T69*dNdx5;
+        K_8_10 += T70*dNdx5;
+        K_8_11 += T71*dNdx5;
+        K_8_12 += T72*dNdx5;
+        K_8_13 += T73*dNdx5;
+        K_8_14 += T74*dNdx5;
+        K_8_15 += T75*dNdx5;
+        K_8_16 += T76*dNdx5;
+        K_8_17 += T77*dNdx5;
+        K_9_9 += T69*dNdy5;
+        K_9_10 += T70*dNdy5;
+        K_9_11 += T71*dNdy5;
+        K_9_12 += T72*dNdy5;
+        K_9_13 += T73*dNdy5;
+        K_9_14 += T74*dNdy5;
+        K_9_15 += T75*dNdy5;
+        K_9_16 += T76*dNdy5;
+        K_9_17 += T77*dNdy5;
+        K_10_10 += T70*dNdx6;
+        K_10_11 += T71*dNdx6;
+        K_10_12 += T72*dNdx6;
+        K_10_13 += T73*dNdx6;
+        K_10_14 += T74*dNdx6;
+        K_10_15 += T75*dNdx6;
+        K_10_16 += T76*dNdx6;
+        K_10_17 += T77*dNdx6;
+        K_11_11 += T71*dNdy6;
+        K_11_12 += T72*dNdy6;
+        K_11_13 += T73*dNdy6;
+        K_11_14 += T74*dNdy6;
+        K_11_15 += T75*dNdy6;
+        K_11_16 += T76*dNdy6;
+        K_11_17 += T77*dNdy6;
+        K_12_12 += T72*dNdx7;
+        K_12_13 += T73*dNdx7;
+        K_12_14 += T74*dNdx7;
+        K_12_15 += T75*dNdx7;
+        K_12_16 += T76*dNdx7;
+        K_12_17 += T77*dNdx7;
+        K_13_13 += T73*dNdy7;
+        K_13_14 += T74*dNdy7;
+        K_13_15 += T75*dNdy7;
+        K_13_16 += T76*dNdy7;
+        K_13_17 += T77*dNdy7;
+        K_14_14 += T74*dNdx8;
+        K_14_15 += T75*dNdx8;
+        K_14_16 += T76*dNdx8;
+        K_14_17 += T77*dNdx8;
+        K_15_15 += T75*dNdy8;
+        K_15_16 += T76*dNdy8;
+        K_15_17 += T77*dNdy8;
+        K_16_16 += T76*dNdx9;
+        K_16_17 += T77*dNdx9;
+        K_17_17 += T77*dNdy9;
+    }
+    K[0 * sk] = K_0_0;
+    K[1 * sk] = K_0_1;
+    K[2 * sk] = K_0_2;
+    K[3 * sk] = K_0_3;
+    K[4 * sk] = K_0_4;
+    K[5 * sk] = K_0_5;
+    K[6 * sk] = K_0_6;
+    K[7 * sk] = K_0_7;
+    K[8 * sk] = K_0_8;
+    K[9 * sk] = K_0_9;
+    K[10 * sk] = K_0_10;
+    K[11 * sk] = K_0_11;
+    K[12 * sk] = K_0_12;
+    K[13 * sk] = K_0_13;
+    K[14 * sk] = K_0_14;
+    K[15 * sk] = K_0_15;
+    K[16 * sk] = K_0_16;
+    K[17 * sk] = K_0_17;
+    K[18 * sk] = K_0_1;
+    K[19 * sk] = K_1_1;
+    K[20 * sk] = K_1_2;
+    K[21 * sk] = K_1_3;
+    K[22 * sk] = K_1_4;
+    K[23 * sk] = K_1_5;
+    K[24 * sk] = K_1_6;
+    K[25 * sk] = K_1_7;
+    K[26 * sk] = K_1_8;
+    K[27 * sk] = K_1_9;
+    K[28 * sk] = K_1_10;
+    K[29 * sk] = K_1_11;
+    K[30 * sk] = K_1_12;
+    K[31 * sk] = K_1_13;
+    K[32 * sk] = K_1_14;
+    K[33 * sk] = K_1_15;
+    K[34 * sk] = K_1_16;
+    K[35 * sk] = K_1_17;
+    K[36 * sk] = K_0_2;
+    K[37 * sk] = K_1_2;
+    K[38 * sk] = K_2_2;
+    K[39 * sk] = K_2_3;
+    K[40 * sk] = K_2_4;
+    K[41 * sk] = K_2_5;
+    K[42 * sk] = K_2_6;
+    K[43 * sk] = K_2_7;
+    K[44 * sk] = K_2_8;
+    K[45 * sk] = K_2_9;
+    K[46 * sk] = K_2_10;
+    K[47 * sk] = K_2_11;
+    K[48 * sk] = K_2_12;
+    K[49 * sk] = K_2_13;
+    K[50 * sk] = K_2_14;
+    K[51 * sk] = K_2_15;
+    K[52 * sk] = K_2_16;
+    K[53 * sk] = K_2_17;
+    K[54 * sk] = K_0_3;
+    K[55 * sk] = K_1_3;
+    K[56 * sk] = K_2_3;
+    K[57 * sk] = K_3_3;
+    K[58 * sk] = K_3_4;
+    K[59 * sk] = K_3_5;
+    K[60 * sk] = K_3_6;
+    K[61 * sk] = K_3_7;
+    K[62 * sk] = K_3_8;
+    K[63 * sk] = K_3_9;
+    K[64 * sk] = K_3_10;
+    K[65 * sk] = K_3_11;
+    K[66 * sk] = K_3_12;
+    K[67 * sk] = K_3_13;
+    K[68 * sk] = K_3_14;
+    K[69 * sk] = K_3_15;
+    K[70 * sk] = K_3_16;
+    K[71 * sk] = K_3_17;
+    K[72 * sk] = K_0_4;
+    K[73 * sk] = K_1_4;
+    K[74 * sk] = K_2_4;
+    K[75 * sk] = K_3_4;
+    K[76 * sk] = K_4_4;
+    K[77 * sk] = K_4_5;
+    K[78 * sk] = K_4_6;
+    K[79 * sk] = K_4_7;
+    K[80 * sk] = K_4_8;
+    K[81 * sk] = K_4_9;
+    K[82 * sk] = K_4_10;
+    K[83 * sk] = K_4_11;
+    K[84 * sk] = K_4_12;
+    K[85 * sk] = K_4_13;
+    K[86 * sk] = K_4_14;
+    K[87 * sk] = K_4_15;
+    K[88 * sk] = K_4_16;
+    K[89 * sk] = K_4_17;
+    K[90 * sk] = K_0_5;
+    K[91 * sk] = K_1_5;
+    K[92 * sk] = K_2_5;
+    K[93 * sk] = K_3_5;
+    K[94 * sk] = K_4_5;
+    K[95 * sk] = K_5_5;
+    K[96 * sk] = K_5_6;
+    K[97 * sk] = K_5_7;
+    K[98 * sk] = K_5_8;
+    K[99 * sk] = K_5_9;
+    K[100 * sk] = K_5_10;
+    K[101 * sk] = K_5_11;
+    K[102 * sk] = K_5_12;
+    K[103 * sk] = K_5_13;
+    K[104 * sk] = K_5_14;
+    K[105 * sk] = K_5_15;
+    K[106 * sk] = K_5_16;
+    K[107 * sk] = K_5_17;
+    K[108 * sk] = K_0_6;
+    K[109 * sk] = K_1_6;
+    K[110 * sk] = K_2_6;
+    K[111 * sk] = K_3_6;
+    K[112 * sk] = K_4_6;
+    K[113 * sk] = K_5_6;
+    K[114 * sk] = K_6_6;
+    K[115 * sk] = K_6_7;
+    K[116 * sk] = K_6_8;
+    K[117 * sk] = K_6_9;
+    K[118 * sk] = K_6_10;
+    K[119 * sk] = K_6_11;
+    K[120 * sk] = K_6_12;
+    K[121 * sk] = K_6_13;
+    K[122 * sk] = K_6_14;
+    K[123 * sk] = K_6_15;
+    K[124 * sk] = K_6_16;
+    K[125 * sk] = K_6_17;
+    K[126 * sk] = K_0_7;
+    K[127 * sk] = K_1_7;
+    K[128 * sk] = K_2_7;
+    K[129 * sk] = K_3_7;
+    K[130 * sk] = K_4_7;
+    K[131 * sk] = K_5_7;
+    K[132 * sk] = K_6_7;
+    K[133 * sk] = K_7_7;
+    K[134 * sk] = K_7_8;
+    K[135 * sk] = K_7_9;
+    K[136 * sk] = K_7_10;
+    K[137 * sk] = K_7_11;
+    K[138 * sk] = K_7_12;
+    K[139 * sk] = K_7_13;
+    K[140 * sk] = K_7_14;
+    K[141 * sk] = K_7_15;
+    K[142 * sk] = K_7_16;
+    K[143 * sk] = K_7_17;
+    K[144 * sk] = K_0_8;
+    K[145 * sk] = K_1_8;
+    K[146 * sk] = K_2_8;
+    K[147 * sk] = K_3_8;
+    K[148 * sk] = K_4_8;
+    K[149 * sk] = K_5_8;
+    K[150 * sk] = K_6_8;
+    K[151 * sk] = K_7_8;
+    K[152 * sk] = K_8_8;
+    K[153 * sk] = K_8_9;
+    K[154 * sk] = K_8_10;
+    K[155 * sk] = K_8_11;
+    K[156 * sk] = K_8_12;
+    K[157 * sk] = K_8_13;
+    K[158 * sk] = K_8_14;
+    K[159 * sk] = K_8_15;
+    K[160 * sk] = K_8_16;
+    K[161 * sk] = K_8_17;
+    K[162 * sk] = K_0_9;
+    K[163 * sk] = K_1_9;
+    K[164 * sk] = K_2_9;
+    K[165 * sk] = K_3_9;
+    K[166 * sk] = K_4_9;
+    K[167 * sk] = K_5_9;
+    K[168 * sk] = K_6_9;
+    K[169 * sk] = K_7_9;
+    K[170 * sk] = K_8_9;
+    K[171 * sk] = K_9_9;
+    K[172 * sk] = K_9_10;
+    K[173 * sk] = K_9_11;
+    K[174 * sk] = K_9_12;
+    K[175 * sk] = K_9_13;
+    K[176 * sk] = K_9_14;
+    K[177 * sk] = K_9_15;
+    K[178 * sk] = K_9_16;
+    K[179 * sk] = K_9_17;
+    K[180 * sk] = K_0_10;
+    K[181 * sk] = K_1_10;
+    K[182 * sk] = K_2_10;
+    K[183 * sk] = K_3_10;
+    K[184 * sk] = K_4_10;
+    K[185 * sk] = K_5_10;
+    K[186 * sk] = K_6_10;
+    K[187 * sk] = K_7_10;
+    K[188 * sk] = K_8_10;
+    K[189 * sk] = K_9_10;
+    K[190 * sk] = K_10_10;
+    K[191 * sk] = K_10_11;
+    K[192 * sk] = K_10_12;
+    K[193 * sk] = K_10_13;
+    K[194 * sk] = K_10_14;
+    K[195 * sk] = K_10_15;
+    K[196 * sk] = K_10_16;
+    K[197 * sk] = K_10_17;
+    K[198 * sk] = K_0_11;
+    K[199 * sk] = K_1_11;
+    K[200 * sk] = K_2_11;
+    K[201 * sk] = K_3_11;
+    K[202 * sk] = K_4_11;
+    K[203 * sk] = K_5_11;
+    K[204 * sk] = K_6_11;
+    K[205 * sk] = K_7_11;
+    K[206 * sk] = K_8_11;
+    K[207 * sk] = K_9_11;
+    K[208 * sk] = K_10_11;
+    K[209 * sk] = K_11_11;
+    K[210 * sk] = K_11_12;
+    K[211 * sk] = K_11_13;
+    K[212 * sk] = K_11_14;
+    K[213 * sk] = K_11_15;
+    K[214 * sk] = K_11_16;
+    K[215 * sk] = K_11_17;
+    K[216 * sk] = K_0_12;
+    K[217 * sk] = K_1_12;
+    K[218 * sk] = K_2_12;
+    K[219 * sk] = K_3_12;
+    K[220 * sk] = K_4_12;
+    K[221 * sk] = K_5_12;
+    K[222 * sk] = K_6_12;
+    K[223 * sk] = K_7_12;
+    K[224 * sk] = K_8_12;
+    K[225 * sk] = K_9_12;
+    K[226 * sk] = K_10_12;
+    K[227 * sk] = K_11_12;
+    K[228 * sk] = K_12_12;
+    K[229 * sk] = K_12_13;
+    K[230 * sk] = K_12_14;
+    K[231 * sk] = K_12_15;
+    K[232 * sk] = K_12_16;
+    K[233 * sk] = K_12_17;
+    K[234 * sk] = K_0_13;
+    K[235 * sk] = K_1_13;
+    K[236 * sk] = K_2_13;
+    K[237 * sk] = K_3_13;
+    K[238 * sk] = K_4_13;
+    K[239 * sk] = K_5_13;
+    K[240 * sk] = K_6_13;
+    K[241 * sk] = K_7_13;
+    K[242 * sk] = K_8_13;
+    K[243 * sk] = K_9_13;
+    K[244 * sk] = K_10_13;
+    K[245 * sk] = K_11_13;
+    K[246 * sk] = K_12_13;
+    K[247 * sk] = K_13_13;
+    K[248 * sk] = K_13_14;
+    K[249 * sk] = K_13_15;
+    K[250 * sk] = K_13_16;
+    K[251 * sk] = K_13_17;
+    K[252 * sk] = K_0_14;
+    K[253 * sk] = K_1_14;
+    K[254 * sk] = K_2_14;
+    K[255 * sk] = K_3_14;
+    K[256 * sk] = K_4_14;
+    K[257 * sk] = K_5_14;
+    K[258 * sk] = K_6_14;
+    K[259 * sk] = K_7_14;
+    K[260 * sk] = K_8_14;
+    K[261 * sk] = K_9_14;
+    K[262 * sk] = K_10_14;
+    K[263 * sk] = K_11_14;
+    K[264 * sk] = K_12_14;
+    K[265 * sk] = K_13_14;
+    K[266 * sk] = K_14_14;
+    K[267 * sk] = K_14_15;
+    K[268 * sk] = K_14_16;
+    K[269 * sk] = K_14_17;
+    K[270 * sk] = K_0_15;
+    K[271 * sk] = K_1_15;
+    K[272 * sk] = K_2_15;
+    K[273 * sk] = K_3_15;
+    K[274 * sk] = K_4_15;
+    K[275 * sk] = K_5_15;
+    K[276 * sk] = K_6_15;
+    K[277 * sk] = K_7_15;
+    K[278 * sk] = K_8_15;
+    K[279 * sk] = K_9_15;
+    K[280 * sk] = K_10_15;
+    K[281 * sk] = K_11_15;
+    K[282 * sk] = K_12_15;
+    K[283 * sk] = K_13_15;
+    K[284 * sk] = K_14_15;
+    K[285 * sk] = K_15_15;
+    K[286 * sk] = K_15_16;
+    K[287 * sk] = K_15_17;
+    K[288 * sk] = K_0_16;
+    K[289 * sk] = K_1_16;
+    K[290 * sk] = K_2_16;
+    K[291 * sk] = K_3_16;
+    K[292 * sk] = K_4_16;
+    K[293 * sk] = K_5_16;
+    K[294 * sk] = K_6_16;
+    K[295 * sk] = K_7_16;
+    K[296 * sk] = K_8_16;
+    K[297 * sk] = K_9_16;
+    K[298 * sk] = K_10_16;
+    K[299 * sk] = K_11_16;
+    K[300 * sk] = K_12_16;
+    K[301 * sk] = K_13_16;
+    K[302 * sk] = K_14_16;
+    K[303 * sk] = K_15_16;
+    K[304 * sk] = K_16_16;
+    K[305 * sk] = K_16_17;
+    K[306 * sk] = K_0_17;
+    K[307 * sk] = K_1_17;
+    K[308 * sk] = K_2_17;
+    K[309 * sk] = K_3_17;
+    K[310 * sk] = K_4_17;
+    K[311 * sk] = K_5_17;
+    K[312 * sk] = K_6_17;
+    K[313 * sk] = K_7_17;
+    K[314 * sk] = K_8_17;
+    K[315 * sk] = K_9_17;
+    K[316 * sk] = K_10_17;
+    K[317 * sk] = K_11_17;
+    K[318 * sk] = K_12_17;
+    K[319 * sk] = K_13_17;
+    K[320 * sk] = K_14_17;
+    K[321 * sk] = K_15_17;
+    K[322 * sk] = K_16_17;
+    K[323 * sk] = K_17_17;
+}
+
+void derive_q9_selective_plane_stress_stiffness(const double *restrict xy, double E, double nu, double t, double *restrict K)
+{
+    double mat[NMAT];
+    q9_selective_plane_stress_material(E, nu, t, mat);
+    q9_selective_plane_stress_stiffness_body(xy, 1, mat, K, 1);
+}
+
+void derive_q9_selective_plane_stress_stiffness_batch(long n, const double *restrict xy, double E, double nu, double t,
+                                  double *restrict K)
+{
+    double mat[NMAT];
+    double in[NIN * LANES];
+    double out[NK * LANES];
+    q9_selective_plane_stress_material(E, nu, t, mat);
+    for (long b = 0; b < n; b += LANES) {
+        const long m = (n - b < LANES) ? (n - b) : LANES;
+        for (long l = 0; l < LANES; ++l) {
+            const double *restrict src = xy + (size_t)(b + (l < m ? l : 0)) * NIN;
+            for (int k = 0; k < NIN; ++k)
+                in[k * LANES + l] = src[k];
+        }
+#pragma omp simd
+        for (int l = 0; l < LANES; ++l)
+            q9_selective_plane_stress_stiffness_body(in + l, LANES, mat, out + l, LANES);
+        for (long l = 0; l < m; ++l) {
+            double *restrict dst = K + (size_t)(b + l) * NK;
+            for (int k = 0; k < NK; ++k)
+                dst[k] = out[k * LANES + l];
+        }
+    }
+}
+
+/* minimum of det J over the points of the full rule, one element */
+static inline void q9_selective_plane_stress_validity_body(const double *restrict xy, double *restrict detJ_min)
+{
+    const double x1 = xy[0];
+    const double y1 = xy[1];
+    const double x2 = xy[2];
+    const double y2 = xy[3];
+    const double x3 = xy[4];
+    const double y3 = xy[5];
+    const double x4 = xy[6];
+    const double y4 = xy[7];
+    const double x5 = xy[8];
+    const double y5 = xy[9];
+    const double x6 = xy[10];
+    const double y6 = xy[11];
+    const double x7 = xy[12];
+    const double y7 = xy[13];
+    const double x8 = xy[14];
+    const double y8 = xy[15];
+    const double x9 = xy[16];
+    const double y9 = xy[17];
+    /* element quantities: map coefficients, centre Jacobian */
+    const double gx_0_1 = 0.5*x7 - 0.5*x5;
+    const double gx_0_2 = 0.5*x5 + 0.5*x7 - x9;
+    const double gx_1_0 = 0.5*x6 - 0.5*x8;
+    const double gx_1_1 = -0.25*x2 - 0.25*x4 + 0.25*x1 + 0.25*x3;
+    const double gx_1_2 = 0.5*x8 - 0.5*x6 - 0.25*x1 - 0.25*x4 + 0.25*x2 + 0.25*x3;
+    const double gx_2_0 = 0.5*x6 + 0.5*x8 - x9;
+    const double gx_2_1 = 0.5*x5 - 0.5*x7 - 0.25*x1 - 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gx_2_2 = x9 - 0.5*x5 - 0.5*x6 - 0.5*x7 - 0.5*x8 + 0.25*x1 + 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gy_0_1 = 0.5*y7 - 0.5*y5;
+    const double gy_0_2 = 0.5*y5 + 0.5*y7 - y9;
+    const double gy_1_0 = 0.5*y6 - 0.5*y8;
+    const double gy_1_1 = -0.25*y2 - 0.25*y4 + 0.25*y1 + 0.25*y3;
+    const double gy_1_2 = 0.5*y8 - 0.5*y6 - 0.25*y1 - 0.25*y4 + 0.25*y2 + 0.25*y3;
+    const double gy_2_0 = 0.5*y6 + 0.5*y8 - y9;
+    const double gy_2_1 = 0.5*y5 - 0.5*y7 - 0.25*y1 - 0.25*y2 + 0.25*y3 + 0.25*y4;
+    const double gy_2_2 = y9 - 0.5*y5 - 0.5*y6 - 0.5*y7 - 0.5*y8 + 0.25*y1 + 0.25*y2 + 0.25*y3 + 0.25*y4;
+    double dmin;
+    {   /* gauss-3x3 point 1 of 9: xi = -0.7745966692414834, eta = -0.7745966692414834, weight = 25/81 */
+        const double q0 = -0.9295160030897801*gx_2_2;
+        const double q1 = -0.7745966692414834*gx_1_1;
+        const double J00 = gx_1_0 + q0 + q1 + 0.6*gx_1_2 + 1.2*gx_2_1 - 1.5491933384829668*gx_2_0;
+        const double q2 = -0.9295160030897801*gy_2_2;
+        const double q3 = -0.7745966692414834*gy_1_1;
+        const double J01 = gy_1_0 + q2 + q3 + 0.6*gy_1_2 + 1.2*gy_2_1 - 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 + q0 + q1 + 0.6*gx_2_1 + 1.2*gx_1_2 - 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 + q2 + q3 + 0.6*gy_2_1 + 1.2*gy_1_2 - 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = detJ;
+    }
+    {   /* gauss-3x3 point 2 of 9: xi = 0, eta = -0.7745966692414834, weight = 40/81 */
+        const double J00 = gx_1_0 + 0.6*gx_1_2 - 0.7745966692414834*gx_1_1;
+        const double J01 = gy_1_0 + 0.6*gy_1_2 - 0.7745966692414834*gy_1_1;
+        const double J10 = gx_0_1 - 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 - 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    {   /* gauss-3x3 point 3 of 9: xi = 0.7745966692414834, eta = -0.7745966692414834, weight = 25/81 */
+        const double J00 = gx_1_0 - 1.2*gx_2_1 + 0.6*gx_1_2 + 0.9295160030897801*gx_2_2
+            + 1.5491933384829668*gx_2_0 - 0.7745966692414834*gx_1_1;
+        const double J01 = gy_1_0 - 1.2*gy_2_1 + 0.6*gy_1_2 + 0.9295160030897801*gy_2_2
+            + 1.5491933384829668*gy_2_0 - 0.7745966692414834*gy_1_1;
+        const double J10 = gx_0_1 - 1.2*gx_1_2 + 0.6*gx_2_1 + 0.7745966692414834*gx_1_1
+            - 0.9295160030897801*gx_2_2 - 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 - 1.2*gy_1_2 + 0.6*gy_2_1 + 0.7745966692414834*gy_1_1
+            - 0.9295160030897801*gy_2_2 - 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    {   /* gauss-3x3 point 4 of 9: xi = -0.7745966692414834, eta = 0, weight = 40/81 */
+        const double J00 = gx_1_0 - 1.5491933384829668*gx_2_0;
+        const double J01 = gy_1_0 - 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 + 0.6*gx_2_1 - 0.7745966692414834*gx_1_1;
+        const double J11 = gy_0_1 + 0.6*gy_2_1 - 0.7745966692414834*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    {   /* gauss-3x3 point 5 of 9: xi = 0, eta = 0, weight = 64/81 */
+        const double detJ = gx_1_0*gy_0_1 - gx_0_1*gy_1_0;
+        dmin = fmin(dmin, detJ);
+    }
+    {   /* gauss-3x3 point 6 of 9: xi = 0.7745966692414834, eta = 0, weight = 40/81 */
+        const double J00 = gx_1_0 + 1.5491933384829668*gx_2_0;
+        const double J01 = gy_1_0 + 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 + 0.6*gx_2_1 + 0.7745966692414834*gx_1_1;
+        const double J11 = gy_0_1 + 0.6*gy_2_1 + 0.7745966692414834*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    {   /* gauss-3x3 point 7 of 9: xi = -0.7745966692414834, eta = 0.7745966692414834, weight = 25/81 */
+        const double J00 = gx_1_0 - 1.2*gx_2_1 + 0.6*gx_1_2 + 0.7745966692414834*gx_1_1
+            - 0.9295160030897801*gx_2_2 - 1.5491933384829668*gx_2_0;
+        const double J01 = gy_1_0 - 1.2*gy_2_1 + 0.6*gy_1_2 + 0.7745966692414834*gy_1_1
+            - 0.9295160030897801*gy_2_2 - 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 - 1.2*gx_1_2 + 0.6*gx_2_1 + 0.9295160030897801*gx_2_2
+            + 1.5491933384829668*gx_0_2 - 0.7745966692414834*gx_1_1;
+        const double J11 = gy_0_1 - 1.2*gy_1_2 + 0.6*gy_2_1 + 0.9295160030897801*gy_2_2
+            + 1.5491933384829668*gy_0_2 - 0.7745966692414834*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    {   /* gauss-3x3 point 8 of 9: xi = 0, eta = 0.7745966692414834, weight = 40/81 */
+        const double J00 = gx_1_0 + 0.6*gx_1_2 + 0.7745966692414834*gx_1_1;
+        const double J01 = gy_1_0 + 0.6*gy_1_2 + 0.7745966692414834*gy_1_1;
+        const double J10 = gx_0_1 + 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 + 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    {   /* gauss-3x3 point 9 of 9: xi = 0.7745966692414834, eta = 0.7745966692414834, weight = 25/81 */
+        const double q0 = 0.9295160030897801*gx_2_2;
+        const double q1 = 0.7745966692414834*gx_1_1;
+        const double J00 = gx_1_0 + q0 + q1 + 0.6*gx_1_2 + 1.2*gx_2_1 + 1.5491933384829668*gx_2_0;
+        const double q2 = 0.9295160030897801*gy_2_2;
+        const double q3 = 0.7745966692414834*gy_1_1;
+        const double J01 = gy_1_0 + q2 + q3 + 0.6*gy_1_2 + 1.2*gy_2_1 + 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 + q0 + q1 + 0.6*gx_2_1 + 1.2*gx_1_2 + 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 + q2 + q3 + 0.6*gy_2_1 + 1.2*gy_1_2 + 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    *detJ_min = dmin;
+}
+
+void derive_q9_selective_plane_stress_validity(long n, const double *restrict xy, double *restrict detJ_min)
+{
+    for (long e = 0; e < n; ++e)
+        q9_selective_plane_stress_validity_body(xy + (size_t)e * NIN, detJ_min + e);
+}
+
+/* strain and stress at the 9 points of the full rule, one element */
+static inline void q9_selective_plane_stress_recovery_body(const double *restrict xy, const double *restrict u,
+                                            const double *restrict mat, double *restrict strain,
+                                            double *restrict stress)
+{
+    const double x1 = xy[0];
+    const double y1 = xy[1];
+    const double x2 = xy[2];
+    const double y2 = xy[3];
+    const double x3 = xy[4];
+    const double y3 = xy[5];
+    const double x4 = xy[6];
+    const double y4 = xy[7];
+    const double x5 = xy[8];
+    const double y5 = xy[9];
+    const double x6 = xy[10];
+    const double y6 = xy[11];
+    const double x7 = xy[12];
+    const double y7 = xy[13];
+    const double x8 = xy[14];
+    const double y8 = xy[15];
+    const double x9 = xy[16];
+    const double y9 = xy[17];
+    const double u1 = u[0];
+    const double u2 = u[1];
+    const double u3 = u[2];
+    const double u4 = u[3];
+    const double u5 = u[4];
+    const double u6 = u[5];
+    const double u7 = u[6];
+    const double u8 = u[7];
+    const double u9 = u[8];
+    const double u10 = u[9];
+    const double u11 = u[10];
+    const double u12 = u[11];
+    const double u13 = u[12];
+    const double u14 = u[13];
+    const double u15 = u[14];
+    const double u16 = u[15];
+    const double u17 = u[16];
+    const double u18 = u[17];
+    const double m4 = mat[7];
+    const double m5 = mat[8];
+    const double m6 = mat[9];
+    /* element quantities: map coefficients, centre Jacobian */
+    const double gx_0_1 = 0.5*x7 - 0.5*x5;
+    const double gx_0_2 = 0.5*x5 + 0.5*x7 - x9;
+    const double gx_1_0 = 0.5*x6 - 0.5*x8;
+    const double gx_1_1 = -0.25*x2 - 0.25*x4 + 0.25*x1 + 0.25*x3;
+    const double gx_1_2 = 0.5*x8 - 0.5*x6 - 0.25*x1 - 0.25*x4 + 0.25*x2 + 0.25*x3;
+    const double gx_2_0 = 0.5*x6 + 0.5*x8 - x9;
+    const double gx_2_1 = 0.5*x5 - 0.5*x7 - 0.25*x1 - 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gx_2_2 = x9 - 0.5*x5 - 0.5*x6 - 0.5*x7 - 0.5*x8 + 0.25*x1 + 0.25*x2 + 0.25*x3 + 0.25*x4;
+    const double gy_0_1 = 0.5*y7 - 0.5*y5;
+    const double gy_0_2 = 0.5*y5 + 0.5*y7 - y9;
+    const double gy_1_0 = 0.5*y6 - 0.5*y8;
+    const double gy_1_1 = -0.25*y2 - 0.25*y4 + 0.25*y1 + 0.25*y3;
+    const double gy_1_2 = 0.5*y8 - 0.5*y6 - 0.25*y1 - 0.25*y4 + 0.25*y2 + 0.25*y3;
+    const double gy_2_0 = 0.5*y6 + 0.5*y8 - y9;
+    const double gy_2_1 = 0.5*y5 - 0.5*y7 - 0.25*y1 - 0.25*y2 + 0.25*y3 + 0.25*y4;
+    const double gy_2_2 = y9 - 0.5*y5 - 0.5*y6 - 0.5*y7 - 0.5*y8 + 0.25*y1 + 0.25*y2 + 0.25*y3 + 0.25*y4;
+    {   /* gauss-3x3 point 1 of 9: xi = -0.7745966692414834, eta = -0.7745966692414834, weight = 25/81 */
+        const double q0 = -0.9295160030897801*gx_2_2;
+        const double q1 = -0.7745966692414834*gx_1_1;
+        const double J00 = gx_1_0 + q0 + q1 + 0.6*gx_1_2 + 1.2*gx_2_1 - 1.5491933384829668*gx_2_0;
+        const double q2 = -0.9295160030897801*gy_2_2;
+        const double q3 = -0.7745966692414834*gy_1_1;
+        const double J01 = gy_1_0 + q2 + q3 + 0.6*gy_1_2 + 1.2*gy_2_1 - 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 + q0 + q1 + 0.6*gx_2_1 + 1.2*gx_1_2 - 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 + q2 + q3 + 0.6*gy_2_1 + 1.2*gy_1_2 - 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = -0.8760281680828158*Ji00 - 0.8760281680828158*Ji01;
+        const double dNdy1 = -0.8760281680828158*Ji10 - 0.8760281680828158*Ji11;
+        const double dNdx2 = 0.11127016653792583*Ji01 - 0.18872983346207417*Ji00;
+        const double dNdy2 = 0.11127016653792583*Ji11 - 0.18872983346207417*Ji10;
+        const double dNdx3 = 0.023971831917184144*Ji00 + 0.023971831917184144*Ji01;
+        const double dNdy3 = 0.023971831917184144*Ji10 + 0.023971831917184144*Ji11;
+        const double dNdx4 = 0.11127016653792583*Ji00 - 0.18872983346207417*Ji01;
+        const double dNdy4 = 0.11127016653792583*Ji10 - 0.18872983346207417*Ji11;
+        const double dNdx5 = 1.06475800154489*Ji00 - 0.5098386676965934*Ji01;
+        const double dNdy5 = 1.06475800154489*Ji10 - 0.5098386676965934*Ji11;
+        const double dNdx6 = -0.13524199845510998*Ji01 - 0.10983866769659335*Ji00;
+        const double dNdy6 = -0.13524199845510998*Ji11 - 0.10983866769659335*Ji10;
+        const double dNdx7 = -0.13524199845510998*Ji00 - 0.10983866769659335*Ji01;
+        const double dNdy7 = -0.13524199845510998*Ji10 - 0.10983866769659335*Ji11;
+        const double dNdx8 = 1.06475800154489*Ji01 - 0.5098386676965934*Ji00;
+        const double dNdy8 = 1.06475800154489*Ji11 - 0.5098386676965934*Ji10;
+        const double dNdx9 = 0.6196773353931867*Ji00 + 0.6196773353931867*Ji01;
+        const double dNdy9 = 0.6196773353931867*Ji10 + 0.6196773353931867*Ji11;
+        const double eps78 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11 + dNdx7*u13
+            + dNdx8*u15 + dNdx9*u17;
+        const double eps79 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12 + dNdy7*u14
+            + dNdy8*u16 + dNdy9*u18;
+        const double eps80 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+            + dNdx8*u16 + dNdx9*u18 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
+            + dNdy7*u13 + dNdy8*u15 + dNdy9*u17;
+        strain[0] = eps78;
+        strain[1] = eps79;
+        strain[2] = eps80;
+        stress[0] = eps78*m4 + eps79*m5;
+        stress[1] = eps78*m5 + eps79*m4;
+        stress[2] = eps80*m6;
+    }
+    {   /* gauss-3x3 point 2 of 9: xi = 0, eta = -0.7745966692414834, weight = 40/81 */
+        const double J00 = gx_1_0 + 0.6*gx_1_2 - 0.7745966692414834*gx_1_1;
+        const double J01 = gy_1_0 + 0.6*gy_1_2 - 0.7745966692414834*gy_1_1;
+        const double J10 = gx_0_1 - 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 - 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = -0.3436491673103708*Ji00;
+        const double dNdy1 = -0.3436491673103708*Ji10;
+        const double dNdx2 = 0.3436491673103708*Ji00;
+        const double dNdy2 = 0.3436491673103708*Ji10;
+        const double dNdx3 = -0.04364916731037084*Ji00;
+        const double dNdy3 = -0.04364916731037084*Ji10;
+        const double dNdx4 = 0.04364916731037084*Ji00;
+        const double dNdy4 = 0.04364916731037084*Ji10;
+        const double dNdx5 = -1.2745966692414834*Ji01;
+        const double dNdy5 = -1.2745966692414834*Ji11;
+        const double dNdx6 = 0.2*Ji00;
+        const double dNdy6 = 0.2*Ji10;
+        const double dNdx7 = -0.2745966692414834*Ji01;
+        const double dNdy7 = -0.2745966692414834*Ji11;
+        const double dNdx8 = -0.2*Ji00;
+        const double dNdy8 = -0.2*Ji10;
+        const double dNdx9 = 1.5491933384829668*Ji01;
+        const double dNdy9 = 1.5491933384829668*Ji11;
+        const double eps78 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11 + dNdx7*u13
+            + dNdx8*u15 + dNdx9*u17;
+        const double eps79 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12 + dNdy7*u14
+            + dNdy8*u16 + dNdy9*u18;
+        const double eps80 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+            + dNdx8*u16 + dNdx9*u18 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
+            + dNdy7*u13 + dNdy8*u15 + dNdy9*u17;
+        strain[3] = eps78;
+        strain[4] = eps79;
+        strain[5] = eps80;
+        stress[3] = eps78*m4 + eps79*m5;
+        stress[4] = eps78*m5 + eps79*m4;
+        stress[5] = eps80*m6;
+    }
+    {   /* gauss-3x3 point 3 of 9: xi = 0.7745966692414834, eta = -0.7745966692414834, weight = 25/81 */
+        const double J00 = gx_1_0 - 1.2*gx_2_1 + 0.6*gx_1_2 + 0.9295160030897801*gx_2_2
+            + 1.5491933384829668*gx_2_0 - 0.7745966692414834*gx_1_1;
+        const double J01 = gy_1_0 - 1.2*gy_2_1 + 0.6*gy_1_2 + 0.9295160030897801*gy_2_2
+            + 1.5491933384829668*gy_2_0 - 0.7745966692414834*gy_1_1;
+        const double J10 = gx_0_1 - 1.2*gx_1_2 + 0.6*gx_2_1 + 0.7745966692414834*gx_1_1
+            - 0.9295160030897801*gx_2_2 - 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 - 1.2*gy_1_2 + 0.6*gy_2_1 + 0.7745966692414834*gy_1_1
+            - 0.9295160030897801*gy_2_2 - 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = 0.18872983346207417*Ji00 + 0.11127016653792583*Ji01;
+        const double dNdy1 = 0.18872983346207417*Ji10 + 0.11127016653792583*Ji11;
+        const double dNdx2 = 0.8760281680828158*Ji00 - 0.8760281680828158*Ji01;
+        const double dNdy2 = 0.8760281680828158*Ji10 - 0.8760281680828158*Ji11;
+        const double dNdx3 = -0.18872983346207417*Ji01 - 0.11127016653792583*Ji00;
+        const double dNdy3 = -0.18872983346207417*Ji11 - 0.11127016653792583*Ji10;
+        const double dNdx4 = 0.023971831917184144*Ji01 - 0.023971831917184144*Ji00;
+        const double dNdy4 = 0.023971831917184144*Ji11 - 0.023971831917184144*Ji10;
+        const double dNdx5 = -0.5098386676965934*Ji01 - 1.06475800154489*Ji00;
+        const double dNdy5 = -0.5098386676965934*Ji11 - 1.06475800154489*Ji10;
+        const double dNdx6 = 0.5098386676965934*Ji00 + 1.06475800154489*Ji01;
+        const double dNdy6 = 0.5098386676965934*Ji10 + 1.06475800154489*Ji11;
+        const double dNdx7 = 0.13524199845510998*Ji00 - 0.10983866769659335*Ji01;
+        const double dNdy7 = 0.13524199845510998*Ji10 - 0.10983866769659335*Ji11;
+        const double dNdx8 = 0.10983866769659335*Ji00 - 0.13524199845510998*Ji01;
+        const double dNdy8 = 0.10983866769659335*Ji10 - 0.13524199845510998*Ji11;
+        const double dNdx9 = 0.6196773353931867*Ji01 - 0.6196773353931867*Ji00;
+        const double dNdy9 = 0.6196773353931867*Ji11 - 0.6196773353931867*Ji10;
+        const double eps78 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11 + dNdx7*u13
+            + dNdx8*u15 + dNdx9*u17;
+        const double eps79 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12 + dNdy7*u14
+            + dNdy8*u16 + dNdy9*u18;
+        const double eps80 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+            + dNdx8*u16 + dNdx9*u18 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
+            + dNdy7*u13 + dNdy8*u15 + dNdy9*u17;
+        strain[6] = eps78;
+        strain[7] = eps79;
+        strain[8] = eps80;
+        stress[6] = eps78*m4 + eps79*m5;
+        stress[7] = eps78*m5 + eps79*m4;
+        stress[8] = eps80*m6;
+    }
+    {   /* gauss-3x3 point 4 of 9: xi = -0.7745966692414834, eta = 0, weight = 40/81 */
+        const double J00 = gx_1_0 - 1.5491933384829668*gx_2_0;
+        const double J01 = gy_1_0 - 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 + 0.6*gx_2_1 - 0.7745966692414834*gx_1_1;
+        const double J11 = gy_0_1 + 0.6*gy_2_1 - 0.7745966692414834*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = -0.3436491673103708*Ji01;
+        const double dNdy1 = -0.3436491673103708*Ji11;
+        const double dNdx2 = 0.04364916731037084*Ji01;
+        const double dNdy2 = 0.04364916731037084*Ji11;
+        const double dNdx3 = -0.04364916731037084*Ji01;
+        const double dNdy3 = -0.04364916731037084*Ji11;
+        const double dNdx4 = 0.3436491673103708*Ji01;
+        const double dNdy4 = 0.3436491673103708*Ji11;
+        const double dNdx5 = -0.2*Ji01;
+        const double dNdy5 = -0.2*Ji11;
+        const double dNdx6 = -0.2745966692414834*Ji00;
+        const double dNdy6 = -0.2745966692414834*Ji10;
+        const double dNdx7 = 0.2*Ji01;
+        const double dNdy7 = 0.2*Ji11;
+        const double dNdx8 = -1.2745966692414834*Ji00;
+        const double dNdy8 = -1.2745966692414834*Ji10;
+        const double dNdx9 = 1.5491933384829668*Ji00;
+        const double dNdy9 = 1.5491933384829668*Ji10;
+        const double eps78 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11 + dNdx7*u13
+            + dNdx8*u15 + dNdx9*u17;
+        const double eps79 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12 + dNdy7*u14
+            + dNdy8*u16 + dNdy9*u18;
+        const double eps80 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+            + dNdx8*u16 + dNdx9*u18 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
+            + dNdy7*u13 + dNdy8*u15 + dNdy9*u17;
+        strain[9] = eps78;
+        strain[10] = eps79;
+        strain[11] = eps80;
+        stress[9] = eps78*m4 + eps79*m5;
+        stress[10] = eps78*m5 + eps79*m4;
+        stress[11] = eps80*m6;
+    }
+    {   /* gauss-3x3 point 5 of 9: xi = 0, eta = 0, weight = 64/81 */
+        const double detJ = gx_1_0*gy_0_1 - gx_0_1*gy_1_0;
+        const double idet = 1.0/detJ;
+        const double Ji00 = gy_0_1*idet;
+        const double Ji01 = -gy_1_0*idet;
+        const double Ji10 = -gx_0_1*idet;
+        const double Ji11 = gx_1_0*idet;
+        const double dNdx5 = -0.5*Ji01;
+        const double dNdy5 = -0.5*Ji11;
+        const double dNdx6 = 0.5*Ji00;
+        const double dNdy6 = 0.5*Ji10;
+        const double dNdx7 = 0.5*Ji01;
+        const double dNdy7 = 0.5*Ji11;
+        const double dNdx8 = -0.5*Ji00;
+        const double dNdy8 = -0.5*Ji10;
+        const double eps78 = dNdx5*u9 + dNdx6*u11 + dNdx7*u13 + dNdx8*u15;
+        const double eps79 = dNdy5*u10 + dNdy6*u12 + dNdy7*u14 + dNdy8*u16;
+        const double eps80 = dNdx5*u10 + dNdx6*u12 + dNdx7*u14 + dNdx8*u16 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
+            + dNdy8*u15;
+        strain[12] = eps78;
+        strain[13] = eps79;
+        strain[14] = eps80;
+        stress[12] = eps78*m4 + eps79*m5;
+        stress[13] = eps78*m5 + eps79*m4;
+        stress[14] = eps80*m6;
+    }
+    {   /* gauss-3x3 point 6 of 9: xi = 0.7745966692414834, eta = 0, weight = 40/81 */
+        const double J00 = gx_1_0 + 1.5491933384829668*gx_2_0;
+        const double J01 = gy_1_0 + 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 + 0.6*gx_2_1 + 0.7745966692414834*gx_1_1;
+        const double J11 = gy_0_1 + 0.6*gy_2_1 + 0.7745966692414834*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = 0.04364916731037084*Ji01;
+        const double dNdy1 = 0.04364916731037084*Ji11;
+        const double dNdx2 = -0.3436491673103708*Ji01;
+        const double dNdy2 = -0.3436491673103708*Ji11;
+        const double dNdx3 = 0.3436491673103708*Ji01;
+        const double dNdy3 = 0.3436491673103708*Ji11;
+        const double dNdx4 = -0.04364916731037084*Ji01;
+        const double dNdy4 = -0.04364916731037084*Ji11;
+        const double dNdx5 = -0.2*Ji01;
+        const double dNdy5 = -0.2*Ji11;
+        const double dNdx6 = 1.2745966692414834*Ji00;
+        const double dNdy6 = 1.2745966692414834*Ji10;
+        const double dNdx7 = 0.2*Ji01;
+        const double dNdy7 = 0.2*Ji11;
+        const double dNdx8 = 0.2745966692414834*Ji00;
+        const double dNdy8 = 0.2745966692414834*Ji10;
+        const double dNdx9 = -1.5491933384829668*Ji00;
+        const double dNdy9 = -1.5491933384829668*Ji10;
+        const double eps78 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11 + dNdx7*u13
+            + dNdx8*u15 + dNdx9*u17;
+        const double eps79 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12 + dNdy7*u14
+            + dNdy8*u16 + dNdy9*u18;
+        const double eps80 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+            + dNdx8*u16 + dNdx9*u18 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
+            + dNdy7*u13 + dNdy8*u15 + dNdy9*u17;
+        strain[15] = eps78;
+        strain[16] = eps79;
+        strain[17] = eps80;
+        stress[15] = eps78*m4 + eps79*m5;
+        stress[16] = eps78*m5 + eps79*m4;
+        stress[17] = eps80*m6;
+    }
+    {   /* gauss-3x3 point 7 of 9: xi = -0.7745966692414834, eta = 0.7745966692414834, weight = 25/81 */
+        const double J00 = gx_1_0 - 1.2*gx_2_1 + 0.6*gx_1_2 + 0.7745966692414834*gx_1_1
+            - 0.9295160030897801*gx_2_2 - 1.5491933384829668*gx_2_0;
+        const double J01 = gy_1_0 - 1.2*gy_2_1 + 0.6*gy_1_2 + 0.7745966692414834*gy_1_1
+            - 0.9295160030897801*gy_2_2 - 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 - 1.2*gx_1_2 + 0.6*gx_2_1 + 0.9295160030897801*gx_2_2
+            + 1.5491933384829668*gx_0_2 - 0.7745966692414834*gx_1_1;
+        const double J11 = gy_0_1 - 1.2*gy_1_2 + 0.6*gy_2_1 + 0.9295160030897801*gy_2_2
+            + 1.5491933384829668*gy_0_2 - 0.7745966692414834*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = 0.18872983346207417*Ji01 + 0.11127016653792583*Ji00;
+        const double dNdy1 = 0.18872983346207417*Ji11 + 0.11127016653792583*Ji10;
+        const double dNdx2 = 0.023971831917184144*Ji00 - 0.023971831917184144*Ji01;
+        const double dNdy2 = 0.023971831917184144*Ji10 - 0.023971831917184144*Ji11;
+        const double dNdx3 = -0.18872983346207417*Ji00 - 0.11127016653792583*Ji01;
+        const double dNdy3 = -0.18872983346207417*Ji10 - 0.11127016653792583*Ji11;
+        const double dNdx4 = 0.8760281680828158*Ji01 - 0.8760281680828158*Ji00;
+        const double dNdy4 = 0.8760281680828158*Ji11 - 0.8760281680828158*Ji10;
+        const double dNdx5 = 0.10983866769659335*Ji01 - 0.13524199845510998*Ji00;
+        const double dNdy5 = 0.10983866769659335*Ji11 - 0.13524199845510998*Ji10;
+        const double dNdx6 = 0.13524199845510998*Ji01 - 0.10983866769659335*Ji00;
+        const double dNdy6 = 0.13524199845510998*Ji11 - 0.10983866769659335*Ji10;
+        const double dNdx7 = 0.5098386676965934*Ji01 + 1.06475800154489*Ji00;
+        const double dNdy7 = 0.5098386676965934*Ji11 + 1.06475800154489*Ji10;
+        const double dNdx8 = -0.5098386676965934*Ji00 - 1.06475800154489*Ji01;
+        const double dNdy8 = -0.5098386676965934*Ji10 - 1.06475800154489*Ji11;
+        const double dNdx9 = 0.6196773353931867*Ji00 - 0.6196773353931867*Ji01;
+        const double dNdy9 = 0.6196773353931867*Ji10 - 0.6196773353931867*Ji11;
+        const double eps78 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11 + dNdx7*u13
+            + dNdx8*u15 + dNdx9*u17;
+        const double eps79 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12 + dNdy7*u14
+            + dNdy8*u16 + dNdy9*u18;
+        const double eps80 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+            + dNdx8*u16 + dNdx9*u18 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
+            + dNdy7*u13 + dNdy8*u15 + dNdy9*u17;
+        strain[18] = eps78;
+        strain[19] = eps79;
+        strain[20] = eps80;
+        stress[18] = eps78*m4 + eps79*m5;
+        stress[19] = eps78*m5 + eps79*m4;
+        stress[20] = eps80*m6;
+    }
+    {   /* gauss-3x3 point 8 of 9: xi = 0, eta = 0.7745966692414834, weight = 40/81 */
+        const double J00 = gx_1_0 + 0.6*gx_1_2 + 0.7745966692414834*gx_1_1;
+        const double J01 = gy_1_0 + 0.6*gy_1_2 + 0.7745966692414834*gy_1_1;
+        const double J10 = gx_0_1 + 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 + 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = 0.04364916731037084*Ji00;
+        const double dNdy1 = 0.04364916731037084*Ji10;
+        const double dNdx2 = -0.04364916731037084*Ji00;
+        const double dNdy2 = -0.04364916731037084*Ji10;
+        const double dNdx3 = 0.3436491673103708*Ji00;
+        const double dNdy3 = 0.3436491673103708*Ji10;
+        const double dNdx4 = -0.3436491673103708*Ji00;
+        const double dNdy4 = -0.3436491673103708*Ji10;
+        const double dNdx5 = 0.2745966692414834*Ji01;
+        const double dNdy5 = 0.2745966692414834*Ji11;
+        const double dNdx6 = 0.2*Ji00;
+        const double dNdy6 = 0.2*Ji10;
+        const double dNdx7 = 1.2745966692414834*Ji01;
+        const double dNdy7 = 1.2745966692414834*Ji11;
+        const double dNdx8 = -0.2*Ji00;
+        const double dNdy8 = -0.2*Ji10;
+        const double dNdx9 = -1.5491933384829668*Ji01;
+        const double dNdy9 = -1.5491933384829668*Ji11;
+        const double eps78 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11 + dNdx7*u13
+            + dNdx8*u15 + dNdx9*u17;
+        const double eps79 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12 + dNdy7*u14
+            + dNdy8*u16 + dNdy9*u18;
+        const double eps80 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+            + dNdx8*u16 + dNdx9*u18 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
+            + dNdy7*u13 + dNdy8*u15 + dNdy9*u17;
+        strain[21] = eps78;
+        strain[22] = eps79;
+        strain[23] = eps80;
+        stress[21] = eps78*m4 + eps79*m5;
+        stress[22] = eps78*m5 + eps79*m4;
+        stress[23] = eps80*m6;
+    }
+    {   /* gauss-3x3 point 9 of 9: xi = 0.7745966692414834, eta = 0.7745966692414834, weight = 25/81 */
+        const double q0 = 0.9295160030897801*gx_2_2;
+        const double q1 = 0.7745966692414834*gx_1_1;
+        const double J00 = gx_1_0 + q0 + q1 + 0.6*gx_1_2 + 1.2*gx_2_1 + 1.5491933384829668*gx_2_0;
+        const double q2 = 0.9295160030897801*gy_2_2;
+        const double q3 = 0.7745966692414834*gy_1_1;
+        const double J01 = gy_1_0 + q2 + q3 + 0.6*gy_1_2 + 1.2*gy_2_1 + 1.5491933384829668*gy_2_0;
+        const double J10 = gx_0_1 + q0 + q1 + 0.6*gx_2_1 + 1.2*gx_1_2 + 1.5491933384829668*gx_0_2;
+        const double J11 = gy_0_1 + q2 + q3 + 0.6*gy_2_1 + 1.2*gy_1_2 + 1.5491933384829668*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = -0.023971831917184144*Ji00 - 0.023971831917184144*Ji01;
+        const double dNdy1 = -0.023971831917184144*Ji10 - 0.023971831917184144*Ji11;
+        const double dNdx2 = 0.18872983346207417*Ji01 - 0.11127016653792583*Ji00;
+        const double dNdy2 = 0.18872983346207417*Ji11 - 0.11127016653792583*Ji10;
+        const double dNdx3 = 0.8760281680828158*Ji00 + 0.8760281680828158*Ji01;
+        const double dNdy3 = 0.8760281680828158*Ji10 + 0.8760281680828158*Ji11;
+        const double dNdx4 = 0.18872983346207417*Ji00 - 0.11127016653792583*Ji01;
+        const double dNdy4 = 0.18872983346207417*Ji10 - 0.11127016653792583*Ji11;
+        const double dNdx5 = 0.13524199845510998*Ji00 + 0.10983866769659335*Ji01;
+        const double dNdy5 = 0.13524199845510998*Ji10 + 0.10983866769659335*Ji11;
+        const double dNdx6 = 0.5098386676965934*Ji00 - 1.06475800154489*Ji01;
+        const double dNdy6 = 0.5098386676965934*Ji10 - 1.06475800154489*Ji11;
+        const double dNdx7 = 0.5098386676965934*Ji01 - 1.06475800154489*Ji00;
+        const double dNdy7 = 0.5098386676965934*Ji11 - 1.06475800154489*Ji10;
+        const double dNdx8 = 0.13524199845510998*Ji01 + 0.10983866769659335*Ji00;
+        const double dNdy8 = 0.13524199845510998*Ji11 + 0.10983866769659335*Ji10;
+        const double dNdx9 = -0.6196773353931867*Ji00 - 0.6196773353931867*Ji01;
+        const double dNdy9 = -0.6196773353931867*Ji10 - 0.6196773353931867*Ji11;
+        const double eps78 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11 + dNdx7*u13
+            + dNdx8*u15 + dNdx9*u17;
+        const double eps79 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12 + dNdy7*u14
+            + dNdy8*u16 + dNdy9*u18;
+        const double eps80 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+            + dNdx8*u16 + dNdx9*u18 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
+            + dNdy7*u13 + dNdy8*u15 + dNdy9*u17;
+        strain[24] = eps78;
+        strain[25] = eps79;
+        strain[26] = eps80;
+        stress[24] = eps78*m4 + eps79*m5;
+        stress[25] = eps78*m5 + eps79*m4;
+        stress[26] = eps80*m6;
+    }
+}
+
+void derive_q9_selective_plane_stress_recovery(long n, const double *restrict xy, const double *restrict u, double E, double nu,
+                           double *restrict strain, double *restrict stress)
+{
+    double mat[NMAT];
+    q9_selective_plane_stress_material(E, nu, 1.0, mat);
+    for (long e = 0; e < n; ++e)
+        q9_selective_plane_stress_recovery_body(xy + (size_t)e * NIN, u + (size_t)e * 18, mat,
+                                 strain + (size_t)e * 27, stress + (size_t)e * 27);
+}

@@ -1,0 +1,635 @@
+/*
+ * derive generated kernel: T6 reduced plane-stress
+ * 
+ * element      T6, 6 nodes, 12 DOFs interleaved u1, v1, u2, v2, ...
+ * formulation  displacement element, uniformly reduced integration [standard displacement formulation]
+ * integration  B^T D B: triangle-d1 (1 point)
+ * flops        stiffness 392, validity 114, recovery 384 per element (add, mul, div, sqrt)
+ * 
+ * arguments (units-agnostic; any consistent set of units):
+ *   xy      nodal coordinates, shape (n, 6, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+ *   E       Young's modulus (> 0), scalar
+ *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
+ *   t       thickness t (the out-of-plane thickness)
+ *   u       nodal displacements for recovery, shape (n, 12), interleaved u1, v1, u2, v2, ...
+ *   K       stiffness, shape (n, 12, 12), DOFs interleaved u1, v1, u2, v2, ...; symmetric
+ *   detJ_min validity: min det J over the points of triangle-d2, shape (n,); <= 0 means an inverted or degenerate element
+ *   strain  recovery: strain at the 3 points of triangle-d2, shape (n, 3, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
+ *   stress  recovery: stress D strain at the same points, shape (n, 3, 3), [sigma_xx, sigma_yy, tau_xy]
+ * 
+ * The kernels do not check their inputs; derive.kernel() checks shapes, finite
+ * coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
+ * generator    derive.codegen 1.0; regenerate with
+ *              derive kernel T6 --variant reduced --state plane-stress --lang c
+ *
+ * C99.  Compile e.g. with: cc -O3 -march=native -fopenmp-simd -c t6_reduced_plane_stress.c
+ * Data layout: every array is dense, row-major (C order), float64.  The batch kernel
+ * copies 8 elements at a time into element-innermost scratch arrays so that the
+ * per-element body is vectorised across elements (one SIMD lane per element).
+ */
+#include <math.h>
+#include <stddef.h>
+#include "t6_reduced_plane_stress.h"
+
+#define NIN 12
+#define NK 144
+#define NMAT 6
+#define LANES 8
+#if defined(__GNUC__)
+/* inlined into the lane loop so that the loop over elements vectorises */
+#define DERIVE_INLINE static inline __attribute__((always_inline))
+#else
+#define DERIVE_INLINE static inline
+#endif
+
+/* material table: E, nu, t, then the material constants the kernels use */
+static inline void t6_reduced_plane_stress_material(double E, double nu, double t, double *restrict mat)
+{
+    mat[0] = E;
+    mat[1] = nu;
+    mat[2] = t;
+    mat[3] = E/(1.0 - nu*nu);   /* m0 */
+    mat[4] = E*nu/(1.0 - nu*nu);   /* m1 */
+    mat[5] = E*(0.5 - 0.5*nu)/(1.0 - nu*nu);   /* m2 */
+}
+
+/* stiffness of one element; xy[k * sx] is input k, K[k * sk] output k (row-major) */
+DERIVE_INLINE void t6_reduced_plane_stress_stiffness_body(const double *restrict xy, const ptrdiff_t sx,
+                                             const double *restrict mat, double *restrict K,
+                                             const ptrdiff_t sk)
+{
+    const double x1 = xy[0 * sx];
+    const double y1 = xy[1 * sx];
+    const double x2 = xy[2 * sx];
+    const double y2 = xy[3 * sx];
+    const double x3 = xy[4 * sx];
+    const double y3 = xy[5 * sx];
+    const double x4 = xy[6 * sx];
+    const double y4 = xy[7 * sx];
+    const double x5 = xy[8 * sx];
+    const double y5 = xy[9 * sx];
+    const double x6 = xy[10 * sx];
+    const double y6 = xy[11 * sx];
+    const double t = mat[2];
+    const double m0 = mat[3];
+    const double m1 = mat[4];
+    const double m2 = mat[5];
+    /* element quantities: map coefficients, centre Jacobian */
+    const double gx_0_1 = -x3 - 3.0*x1 + 4.0*x6;
+    const double gx_0_2 = -4.0*x6 + 2.0*x1 + 2.0*x3;
+    const double gx_1_0 = -x2 - 3.0*x1 + 4.0*x4;
+    const double gx_1_1 = -4.0*x4 - 4.0*x6 + 4.0*x1 + 4.0*x5;
+    const double gx_2_0 = -4.0*x4 + 2.0*x1 + 2.0*x2;
+    const double gy_0_1 = -y3 - 3.0*y1 + 4.0*y6;
+    const double gy_0_2 = -4.0*y6 + 2.0*y1 + 2.0*y3;
+    const double gy_1_0 = -y2 - 3.0*y1 + 4.0*y4;
+    const double gy_1_1 = -4.0*y4 - 4.0*y6 + 4.0*y1 + 4.0*y5;
+    const double gy_2_0 = -4.0*y4 + 2.0*y1 + 2.0*y2;
+    double K_0_0, K_0_1, K_0_2, K_0_3, K_0_4, K_0_5, K_0_6, K_0_7, K_0_8, K_0_9, K_0_10, K_0_11;
+    double K_1_1, K_1_2, K_1_3, K_1_4, K_1_5, K_1_6, K_1_7, K_1_8, K_1_9, K_1_10, K_1_11, K_2_2;
+    double K_2_3, K_2_4, K_2_5, K_2_6, K_2_7, K_2_8, K_2_9, K_2_10, K_2_11, K_3_3, K_3_4, K_3_5;
+    double K_3_6, K_3_7, K_3_8, K_3_9, K_3_10, K_3_11, K_4_4, K_4_5, K_4_6, K_4_7, K_4_8, K_4_9;
+    double K_4_10, K_4_11, K_5_5, K_5_6, K_5_7, K_5_8, K_5_9, K_5_10, K_5_11, K_6_6, K_6_7, K_6_8;
+    double K_6_9, K_6_10, K_6_11, K_7_7, K_7_8, K_7_9, K_7_10, K_7_11, K_8_8, K_8_9, K_8_10, K_8_11;
+    double K_9_9, K_9_10, K_9_11, K_10_10, K_10_11, K_11_11;
+    {   /* triangle-d1 point 1 of 1: xi = 1/3, eta = 1/3, weight = 1/2 */
+        const double q0 = 0.3333333333333333*gx_1_1;
+        const double J00 = gx_1_0 + q0 + 0.6666666666666666*gx_2_0;
+        const double q1 = 0.3333333333333333*gy_1_1;
+        const double J01 = gy_1_0 + q1 + 0.6666666666666666*gy_2_0;
+        const double J10 = gx_0_1 + q0 + 0.6666666666666666*gx_0_2;
+        const double J11 = gy_0_1 + q1 + 0.6666666666666666*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = -0.3333333333333333*Ji00 - 0.3333333333333333*Ji01;
+        const double dNdy1 = -0.3333333333333333*Ji10 - 0.3333333333333333*Ji11;
+        const double dNdx2 = 0.3333333333333333*Ji00;
+        const double dNdy2 = 0.3333333333333333*Ji10;
+        const double dNdx3 = 0.3333333333333333*Ji01;
+        const double dNdy3 = 0.3333333333333333*Ji11;
+        const double dNdx4 = -1.3333333333333333*Ji01;
+        const double dNdy4 = -1.3333333333333333*Ji11;
+        const double dNdx5 = 1.3333333333333333*Ji00 + 1.3333333333333333*Ji01;
+        const double dNdy5 = 1.3333333333333333*Ji10 + 1.3333333333333333*Ji11;
+        const double dNdx6 = -1.3333333333333333*Ji00;
+        const double dNdy6 = -1.3333333333333333*Ji10;
+        const double sc0 = 0.5*detJ*t;
+        const double s1 = m0*sc0;
+        const double s2 = m1*sc0;
+        const double s3 = m2*sc0;
+        const double T4 = dNdx1*s1;
+        const double T6 = dNdy1*s3;
+        const double T7 = dNdy1*s2;
+        const double T8 = dNdy1*s1;
+        const double T9 = dNdx1*s3;
+        const double T10 = dNdx2*s1;
+        const double T11 = dNdx2*s2;
+        const double T12 = dNdy2*s3;
+        const double T13 = dNdy2*s2;
+        const double T14 = dNdy2*s1;
+        const double T15 = dNdx2*s3;
+        const double T16 = dNdx3*s1;
+        const double T17 = dNdx3*s2;
+        const double T18 = dNdy3*s3;
+        const double T19 = dNdy3*s2;
+        const double T20 = dNdy3*s1;
+        const double T21 = dNdx3*s3;
+        const double T22 = dNdx4*s1;
+        const double T23 = dNdx4*s2;
+        const double T24 = dNdy4*s3;
+        const double T25 = dNdy4*s2;
+        const double T26 = dNdy4*s1;
+        const double T27 = dNdx4*s3;
+        const double T28 = dNdx5*s1;
+        const double T29 = dNdx5*s2;
+        const double T30 = dNdy5*s3;
+        const double T31 = dNdy5*s2;
+        const double T32 = dNdy5*s1;
+        const double T33 = dNdx5*s3;
+        const double T34 = dNdx6*s1;
+        const double T35 = dNdx6*s2;
+        const double T36 = dNdy6*s3;
+        const double T37 = dNdy6*s2;
+        const double T38 = dNdy6*s1;
+        const double T39 = dNdx6*s3;
+        K_0_0 = T4*dNdx1 + T6*dNdy1;
+        K_0_1 = T7*dNdx1 + T9*dNdy1;
+        K_0_2 = T10*dNdx1 + T12*dNdy1;
+        K_0_3 = T13*dNdx1 + T15*dNdy1;
+        K_0_4 = T16*dNdx1 + T18*dNdy1;
+        K_0_5 = T19*dNdx1 + T21*dNdy1;
+        K_0_6 = T22*dNdx1 + T24*dNdy1;
+        K_0_7 = T25*dNdx1 + T27*dNdy1;
+        K_0_8 = T28*dNdx1 + T30*dNdy1;
+        K_0_9 = T31*dNdx1 + T33*dNdy1;
+        K_0_10 = T34*dNdx1 + T36*dNdy1;
+        K_0_11 = T37*dNdx1 + T39*dNdy1;
+        K_1_1 = T8*dNdy1 + T9*dNdx1;
+        K_1_2 = T11*dNdy1 + T12*dNdx1;
+        K_1_3 = T14*dNdy1 + T15*dNdx1;
+        K_1_4 = T17*dNdy1 + T18*dNdx1;
+        K_1_5 = T20*dNdy1 + T21*dNdx1;
+        K_1_6 = T23*dNdy1 + T24*dNdx1;
+        K_1_7 = T26*dNdy1 + T27*dNdx1;
+        K_1_8 = T29*dNdy1 + T30*dNdx1;
+        K_1_9 = T32*dNdy1 + T33*dNdx1;
+        K_1_10 = T35*dNdy1 + T36*dNdx1;
+        K_1_11 = T38*dNdy1 + T39*dNdx1;
+        K_2_2 = T10*dNdx2 + T12*dNdy2;
+        K_2_3 = T13*dNdx2 + T15*dNdy2;
+        K_2_4 = T16*dNdx2 + T18*dNdy2;
+        K_2_5 = T19*dNdx2 + T21*dNdy2;
+        K_2_6 = T22*dNdx2 + T24*dNdy2;
+        K_2_7 = T25*dNdx2 + T27*dNdy2;
+        K_2_8 = T28*dNdx2 + T30*dNdy2;
+        K_2_9 = T31*dNdx2 + T33*dNdy2;
+        K_2_10 = T34*dNdx2 + T36*dNdy2;
+        K_2_11 = T37*dNdx2 + T39*dNdy2;
+        K_3_3 = T14*dNdy2 + T15*dNdx2;
+        K_3_4 = T17*dNdy2 + T18*dNdx2;
+        K_3_5 = T20*dNdy2 + T21*dNdx2;
+        K_3_6 = T23*dNdy2 + T24*dNdx2;
+        K_3_7 = T26*dNdy2 + T27*dNdx2;
+        K_3_8 = T29*dNdy2 + T30*dNdx2;
+        K_3_9 = T32*dNdy2 + T33*dNdx2;
+        K_3_10 = T35*dNdy2 + T36*dNdx2;
+        K_3_11 = T38*dNdy2 + T39*dNdx2;
+        K_4_4 = T16*dNdx3 + T18*dNdy3;
+        K_4_5 = T19*dNdx3 + T21*dNdy3;
+        K_4_6 = T22*dNdx3 + T24*dNdy3;
+        K_4_7 = T25*dNdx3 + T27*dNdy3;
+        K_4_8 = T28*dNdx3 + T30*dNdy3;
+        K_4_9 = T31*dNdx3 + T33*dNdy3;
+        K_4_10 = T34*dNdx3 + T36*dNdy3;
+        K_4_11 = T37*dNdx3 + T39*dNdy3;
+        K_5_5 = T20*dNdy3 + T21*dNdx3;
+        K_5_6 = T23*dNdy3 + T24*dNdx3;
+        K_5_7 = T26*dNdy3 + T27*dNdx3;
+        K_5_8 = T29*dNdy3 + T30*dNdx3;
+        K_5_9 = T32*dNdy3 + T33*dNdx3;
+        K_5_10 = T35*dNdy3 + T36*dNdx3;
+        K_5_11 = T38*dNdy3 + T39*dNdx3;
+        K_6_6 = T22*dNdx4 + T24*dNdy4;
+        K_6_7 = T25*dNdx4 + T27*dNdy4;
+        K_6_8 = T28*dNdx4 + T30*dNdy4;
+        K_6_9 = T31*dNdx4 + T33*dNdy4;
+        K_6_10 = T34*dNdx4 + T36*dNdy4;
+        K_6_11 = T37*dNdx4 + T39*dNdy4;
+        K_7_7 = T26*dNdy4 + T27*dNdx4;
+        K_7_8 = T29*dNdy4 + T30*dNdx4;
+        K_7_9 = T32*dNdy4 + T33*dNdx4;
+        K_7_10 = T35*dNdy4 + T36*dNdx4;
+        K_7_11 = T38*dNdy4 + T39*dNdx4;
+        K_8_8 = T28*dNdx5 + T30*dNdy5;
+        K_8_9 = T31*dNdx5 + T33*dNdy5;
+        K_8_10 = T34*dNdx5 + T36*dNdy5;
+        K_8_11 = T37*dNdx5 + T39*dNdy5;
+        K_9_9 = T32*dNdy5 + T33*dNdx5;
+        K_9_10 = T35*dNdy5 + T36*dNdx5;
+        K_9_11 = T38*dNdy5 + T39*dNdx5;
+        K_10_10 = T34*dNdx6 + T36*dNdy6;
+        K_10_11 = T37*dNdx6 + T39*dNdy6;
+        K_11_11 = T38*dNdy6 + T39*dNdx6;
+    }
+    K[0 * sk] = K_0_0;
+    K[1 * sk] = K_0_1;
+    K[2 * sk] = K_0_2;
+    K[3 * sk] = K_0_3;
+    K[4 * sk] = K_0_4;
+    K[5 * sk] = K_0_5;
+    K[6 * sk] = K_0_6;
+    K[7 * sk] = K_0_7;
+    K[8 * sk] = K_0_8;
+    K[9 * sk] = K_0_9;
+    K[10 * sk] = K_0_10;
+    K[11 * sk] = K_0_11;
+    K[12 * sk] = K_0_1;
+    K[13 * sk] = K_1_1;
+    K[14 * sk] = K_1_2;
+    K[15 * sk] = K_1_3;
+    K[16 * sk] = K_1_4;
+    K[17 * sk] = K_1_5;
+    K[18 * sk] = K_1_6;
+    K[19 * sk] = K_1_7;
+    K[20 * sk] = K_1_8;
+    K[21 * sk] = K_1_9;
+    K[22 * sk] = K_1_10;
+    K[23 * sk] = K_1_11;
+    K[24 * sk] = K_0_2;
+    K[25 * sk] = K_1_2;
+    K[26 * sk] = K_2_2;
+    K[27 * sk] = K_2_3;
+    K[28 * sk] = K_2_4;
+    K[29 * sk] = K_2_5;
+    K[30 * sk] = K_2_6;
+    K[31 * sk] = K_2_7;
+    K[32 * sk] = K_2_8;
+    K[33 * sk] = K_2_9;
+    K[34 * sk] = K_2_10;
+    K[35 * sk] = K_2_11;
+    K[36 * sk] = K_0_3;
+    K[37 * sk] = K_1_3;
+    K[38 * sk] = K_2_3;
+    K[39 * sk] = K_3_3;
+    K[40 * sk] = K_3_4;
+    K[41 * sk] = K_3_5;
+    K[42 * sk] = K_3_6;
+    K[43 * sk] = K_3_7;
+    K[44 * sk] = K_3_8;
+    K[45 * sk] = K_3_9;
+    K[46 * sk] = K_3_10;
+    K[47 * sk] = K_3_11;
+    K[48 * sk] = K_0_4;
+    K[49 * sk] = K_1_4;
+    K[50 * sk] = K_2_4;
+    K[51 * sk] = K_3_4;
+    K[52 * sk] = K_4_4;
+    K[53 * sk] = K_4_5;
+    K[54 * sk] = K_4_6;
+    K[55 * sk] = K_4_7;
+    K[56 * sk] = K_4_8;
+    K[57 * sk] = K_4_9;
+    K[58 * sk] = K_4_10;
+    K[59 * sk] = K_4_11;
+    K[60 * sk] = K_0_5;
+    K[61 * sk] = K_1_5;
+    K[62 * sk] = K_2_5;
+    K[63 * sk] = K_3_5;
+    K[64 * sk] = K_4_5;
+    K[65 * sk] = K_5_5;
+    K[66 * sk] = K_5_6;
+    K[67 * sk] = K_5_7;
+    K[68 * sk] = K_5_8;
+    K[69 * sk] = K_5_9;
+    K[70 * sk] = K_5_10;
+    K[71 * sk] = K_5_11;
+    K[72 * sk] = K_0_6;
+    K[73 * sk] = K_1_6;
+    K[74 * sk] = K_2_6;
+    K[75 * sk] = K_3_6;
+    K[76 * sk] = K_4_6;
+    K[77 * sk] = K_5_6;
+    K[78 * sk] = K_6_6;
+    K[79 * sk] = K_6_7;
+    K[80 * sk] = K_6_8;
+    K[81 * sk] = K_6_9;
+    K[82 * sk] = K_6_10;
+    K[83 * sk] = K_6_11;
+    K[84 * sk] = K_0_7;
+    K[85 * sk] = K_1_7;
+    K[86 * sk] = K_2_7;
+    K[87 * sk] = K_3_7;
+    K[88 * sk] = K_4_7;
+    K[89 * sk] = K_5_7;
+    K[90 * sk] = K_6_7;
+    K[91 * sk] = K_7_7;
+    K[92 * sk] = K_7_8;
+    K[93 * sk] = K_7_9;
+    K[94 * sk] = K_7_10;
+    K[95 * sk] = K_7_11;
+    K[96 * sk] = K_0_8;
+    K[97 * sk] = K_1_8;
+    K[98 * sk] = K_2_8;
+    K[99 * sk] = K_3_8;
+    K[100 * sk] = K_4_8;
+    K[101 * sk] = K_5_8;
+    K[102 * sk] = K_6_8;
+    K[103 * sk] = K_7_8;
+    K[104 * sk] = K_8_8;
+    K[105 * sk] = K_8_9;
+    K[106 * sk] = K_8_10;
+    K[107 * sk] = K_8_11;
+    K[108 * sk] = K_0_9;
+    K[109 * sk] = K_1_9;
+    K[110 * sk] = K_2_9;
+    K[111 * sk] = K_3_9;
+    K[112 * sk] = K_4_9;
+    K[113 * sk] = K_5_9;
+    K[114 * sk] = K_6_9;
+    K[115 * sk] = K_7_9;
+    K[116 * sk] = K_8_9;
+    K[117 * sk] = K_9_9;
+    K[118 * sk] = K_9_10;
+    K[119 * sk] = K_9_11;
+    K[120 * sk] = K_0_10;
+    K[121 * sk] = K_1_10;
+    K[122 * sk] = K_2_10;
+    K[123 * sk] = K_3_10;
+    K[124 * sk] = K_4_10;
+    K[125 * sk] = K_5_10;
+    K[126 * sk] = K_6_10;
+    K[127 * sk] = K_7_10;
+    K[128 * sk] = K_8_10;
+    K[129 * sk] = K_9_10;
+    K[130 * sk] = K_10_10;
+    K[131 * sk] = K_10_11;
+    K[132 * sk] = K_0_11;
+    K[133 * sk] = K_1_11;
+    K[134 * sk] = K_2_11;
+    K[135 * sk] = K_3_11;
+    K[136 * sk] = K_4_11;
+    K[137 * sk] = K_5_11;
+    K[138 * sk] = K_6_11;
+    K[139 * sk] = K_7_11;
+    K[140 * sk] = K_8_11;
+    K[141 * sk] = K_9_11;
+    K[142 * sk] = K_10_11;
+    K[143 * sk] = K_11_11;
+}
+
+void derive_t6_reduced_plane_stress_stiffness(const double *restrict xy, double E, double nu, double t, double *restrict K)
+{
+    double mat[NMAT];
+    t6_reduced_plane_stress_material(E, nu, t, mat);
+    t6_reduced_plane_stress_stiffness_body(xy, 1, mat, K, 1);
+}
+
+void derive_t6_reduced_plane_stress_stiffness_batch(long n, const double *restrict xy, double E, double nu, double t,
+                                  double *restrict K)
+{
+    double mat[NMAT];
+    double in[NIN * LANES];
+    double out[NK * LANES];
+    t6_reduced_plane_stress_material(E, nu, t, mat);
+    for (long b = 0; b < n; b += LANES) {
+        const long m = (n - b < LANES) ? (n - b) : LANES;
+        for (long l = 0; l < LANES; ++l) {
+            const double *restrict src = xy + (size_t)(b + (l < m ? l : 0)) * NIN;
+            for (int k = 0; k < NIN; ++k)
+                in[k * LANES + l] = src[k];
+        }
+#pragma omp simd
+        for (int l = 0; l < LANES; ++l)
+            t6_reduced_plane_stress_stiffness_body(in + l, LANES, mat, out + l, LANES);
+        for (long l = 0; l < m; ++l) {
+            double *restrict dst = K + (size_t)(b + l) * NK;
+            for (int k = 0; k < NK; ++k)
+                dst[k] = out[k * LANES + l];
+        }
+    }
+}
+
+/* minimum of det J over the points of the full rule, one element */
+static inline void t6_reduced_plane_stress_validity_body(const double *restrict xy, double *restrict detJ_min)
+{
+    const double x1 = xy[0];
+    const double y1 = xy[1];
+    const double x2 = xy[2];
+    const double y2 = xy[3];
+    const double x3 = xy[4];
+    const double y3 = xy[5];
+    const double x4 = xy[6];
+    const double y4 = xy[7];
+    const double x5 = xy[8];
+    const double y5 = xy[9];
+    const double x6 = xy[10];
+    const double y6 = xy[11];
+    /* element quantities: map coefficients, centre Jacobian */
+    const double gx_0_1 = -x3 - 3.0*x1 + 4.0*x6;
+    const double gx_0_2 = -4.0*x6 + 2.0*x1 + 2.0*x3;
+    const double gx_1_0 = -x2 - 3.0*x1 + 4.0*x4;
+    const double gx_1_1 = -4.0*x4 - 4.0*x6 + 4.0*x1 + 4.0*x5;
+    const double gx_2_0 = -4.0*x4 + 2.0*x1 + 2.0*x2;
+    const double gy_0_1 = -y3 - 3.0*y1 + 4.0*y6;
+    const double gy_0_2 = -4.0*y6 + 2.0*y1 + 2.0*y3;
+    const double gy_1_0 = -y2 - 3.0*y1 + 4.0*y4;
+    const double gy_1_1 = -4.0*y4 - 4.0*y6 + 4.0*y1 + 4.0*y5;
+    const double gy_2_0 = -4.0*y4 + 2.0*y1 + 2.0*y2;
+    double dmin;
+    {   /* triangle-d2 point 1 of 3: xi = 1/6, eta = 1/6, weight = 1/6 */
+        const double q0 = 0.16666666666666666*gx_1_1;
+        const double J00 = gx_1_0 + q0 + 0.3333333333333333*gx_2_0;
+        const double q1 = 0.16666666666666666*gy_1_1;
+        const double J01 = gy_1_0 + q1 + 0.3333333333333333*gy_2_0;
+        const double J10 = gx_0_1 + q0 + 0.3333333333333333*gx_0_2;
+        const double J11 = gy_0_1 + q1 + 0.3333333333333333*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = detJ;
+    }
+    {   /* triangle-d2 point 2 of 3: xi = 2/3, eta = 1/6, weight = 1/6 */
+        const double J00 = gx_1_0 + 0.16666666666666666*gx_1_1 + 1.3333333333333333*gx_2_0;
+        const double J01 = gy_1_0 + 0.16666666666666666*gy_1_1 + 1.3333333333333333*gy_2_0;
+        const double J10 = gx_0_1 + 0.3333333333333333*gx_0_2 + 0.6666666666666666*gx_1_1;
+        const double J11 = gy_0_1 + 0.3333333333333333*gy_0_2 + 0.6666666666666666*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    {   /* triangle-d2 point 3 of 3: xi = 1/6, eta = 2/3, weight = 1/6 */
+        const double J00 = gx_1_0 + 0.3333333333333333*gx_2_0 + 0.6666666666666666*gx_1_1;
+        const double J01 = gy_1_0 + 0.3333333333333333*gy_2_0 + 0.6666666666666666*gy_1_1;
+        const double J10 = gx_0_1 + 0.16666666666666666*gx_1_1 + 1.3333333333333333*gx_0_2;
+        const double J11 = gy_0_1 + 0.16666666666666666*gy_1_1 + 1.3333333333333333*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        dmin = fmin(dmin, detJ);
+    }
+    *detJ_min = dmin;
+}
+
+void derive_t6_reduced_plane_stress_validity(long n, const double *restrict xy, double *restrict detJ_min)
+{
+    for (long e = 0; e < n; ++e)
+        t6_reduced_plane_stress_validity_body(xy + (size_t)e * NIN, detJ_min + e);
+}
+
+/* strain and stress at the 3 points of the full rule, one element */
+static inline void t6_reduced_plane_stress_recovery_body(const double *restrict xy, const double *restrict u,
+                                            const double *restrict mat, double *restrict strain,
+                                            double *restrict stress)
+{
+    const double x1 = xy[0];
+    const double y1 = xy[1];
+    const double x2 = xy[2];
+    const double y2 = xy[3];
+    const double x3 = xy[4];
+    const double y3 = xy[5];
+    const double x4 = xy[6];
+    const double y4 = xy[7];
+    const double x5 = xy[8];
+    const double y5 = xy[9];
+    const double x6 = xy[10];
+    const double y6 = xy[11];
+    const double u1 = u[0];
+    const double u2 = u[1];
+    const double u3 = u[2];
+    const double u4 = u[3];
+    const double u5 = u[4];
+    const double u6 = u[5];
+    const double u7 = u[6];
+    const double u8 = u[7];
+    const double u9 = u[8];
+    const double u10 = u[9];
+    const double u11 = u[10];
+    const double u12 = u[11];
+    const double m0 = mat[3];
+    const double m1 = mat[4];
+    const double m2 = mat[5];
+    /* element quantities: map coefficients, centre Jacobian */
+    const double gx_0_1 = -x3 - 3.0*x1 + 4.0*x6;
+    const double gx_0_2 = -4.0*x6 + 2.0*x1 + 2.0*x3;
+    const double gx_1_0 = -x2 - 3.0*x1 + 4.0*x4;
+    const double gx_1_1 = -4.0*x4 - 4.0*x6 + 4.0*x1 + 4.0*x5;
+    const double gx_2_0 = -4.0*x4 + 2.0*x1 + 2.0*x2;
+    const double gy_0_1 = -y3 - 3.0*y1 + 4.0*y6;
+    const double gy_0_2 = -4.0*y6 + 2.0*y1 + 2.0*y3;
+    const double gy_1_0 = -y2 - 3.0*y1 + 4.0*y4;
+    const double gy_1_1 = -4.0*y4 - 4.0*y6 + 4.0*y1 + 4.0*y5;
+    const double gy_2_0 = -4.0*y4 + 2.0*y1 + 2.0*y2;
+    {   /* triangle-d2 point 1 of 3: xi = 1/6, eta = 1/6, weight = 1/6 */
+        const double q0 = 0.16666666666666666*gx_1_1;
+        const double J00 = gx_1_0 + q0 + 0.3333333333333333*gx_2_0;
+        const double q1 = 0.16666666666666666*gy_1_1;
+        const double J01 = gy_1_0 + q1 + 0.3333333333333333*gy_2_0;
+        const double J10 = gx_0_1 + q0 + 0.3333333333333333*gx_0_2;
+        const double J11 = gy_0_1 + q1 + 0.3333333333333333*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = -1.6666666666666667*Ji00 - 1.6666666666666667*Ji01;
+        const double dNdy1 = -1.6666666666666667*Ji10 - 1.6666666666666667*Ji11;
+        const double dNdx2 = -0.3333333333333333*Ji00;
+        const double dNdy2 = -0.3333333333333333*Ji10;
+        const double dNdx3 = -0.3333333333333333*Ji01;
+        const double dNdy3 = -0.3333333333333333*Ji11;
+        const double dNdx4 = 2.0*Ji00 - 0.6666666666666666*Ji01;
+        const double dNdy4 = 2.0*Ji10 - 0.6666666666666666*Ji11;
+        const double dNdx5 = 0.6666666666666666*Ji00 + 0.6666666666666666*Ji01;
+        const double dNdy5 = 0.6666666666666666*Ji10 + 0.6666666666666666*Ji11;
+        const double dNdx6 = 2.0*Ji01 - 0.6666666666666666*Ji00;
+        const double dNdy6 = 2.0*Ji11 - 0.6666666666666666*Ji10;
+        const double eps40 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11;
+        const double eps41 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12;
+        const double eps42 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdy1*u1
+            + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11;
+        strain[0] = eps40;
+        strain[1] = eps41;
+        strain[2] = eps42;
+        stress[0] = eps40*m0 + eps41*m1;
+        stress[1] = eps40*m1 + eps41*m0;
+        stress[2] = eps42*m2;
+    }
+    {   /* triangle-d2 point 2 of 3: xi = 2/3, eta = 1/6, weight = 1/6 */
+        const double J00 = gx_1_0 + 0.16666666666666666*gx_1_1 + 1.3333333333333333*gx_2_0;
+        const double J01 = gy_1_0 + 0.16666666666666666*gy_1_1 + 1.3333333333333333*gy_2_0;
+        const double J10 = gx_0_1 + 0.3333333333333333*gx_0_2 + 0.6666666666666666*gx_1_1;
+        const double J11 = gy_0_1 + 0.3333333333333333*gy_0_2 + 0.6666666666666666*gy_1_1;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = 0.3333333333333333*Ji00 + 0.3333333333333333*Ji01;
+        const double dNdy1 = 0.3333333333333333*Ji10 + 0.3333333333333333*Ji11;
+        const double dNdx2 = 1.6666666666666667*Ji00;
+        const double dNdy2 = 1.6666666666666667*Ji10;
+        const double dNdx3 = -0.3333333333333333*Ji01;
+        const double dNdy3 = -0.3333333333333333*Ji11;
+        const double dNdx4 = -2.0*Ji00 - 2.6666666666666665*Ji01;
+        const double dNdy4 = -2.0*Ji10 - 2.6666666666666665*Ji11;
+        const double dNdx5 = 0.6666666666666666*Ji00 + 2.6666666666666665*Ji01;
+        const double dNdy5 = 0.6666666666666666*Ji10 + 2.6666666666666665*Ji11;
+        const double dNdx6 = -0.6666666666666666*Ji00;
+        const double dNdy6 = -0.6666666666666666*Ji10;
+        const double eps40 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11;
+        const double eps41 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12;
+        const double eps42 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdy1*u1
+            + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11;
+        strain[3] = eps40;
+        strain[4] = eps41;
+        strain[5] = eps42;
+        stress[3] = eps40*m0 + eps41*m1;
+        stress[4] = eps40*m1 + eps41*m0;
+        stress[5] = eps42*m2;
+    }
+    {   /* triangle-d2 point 3 of 3: xi = 1/6, eta = 2/3, weight = 1/6 */
+        const double J00 = gx_1_0 + 0.3333333333333333*gx_2_0 + 0.6666666666666666*gx_1_1;
+        const double J01 = gy_1_0 + 0.3333333333333333*gy_2_0 + 0.6666666666666666*gy_1_1;
+        const double J10 = gx_0_1 + 0.16666666666666666*gx_1_1 + 1.3333333333333333*gx_0_2;
+        const double J11 = gy_0_1 + 0.16666666666666666*gy_1_1 + 1.3333333333333333*gy_0_2;
+        const double detJ = J00*J11 - J01*J10;
+        const double idet = 1.0/detJ;
+        const double Ji00 = J11*idet;
+        const double Ji01 = -J01*idet;
+        const double Ji10 = -J10*idet;
+        const double Ji11 = J00*idet;
+        const double dNdx1 = 0.3333333333333333*Ji00 + 0.3333333333333333*Ji01;
+        const double dNdy1 = 0.3333333333333333*Ji10 + 0.3333333333333333*Ji11;
+        const double dNdx2 = -0.3333333333333333*Ji00;
+        const double dNdy2 = -0.3333333333333333*Ji10;
+        const double dNdx3 = 1.6666666666666667*Ji01;
+        const double dNdy3 = 1.6666666666666667*Ji11;
+        const double dNdx4 = -0.6666666666666666*Ji01;
+        const double dNdy4 = -0.6666666666666666*Ji11;
+        const double dNdx5 = 0.6666666666666666*Ji01 + 2.6666666666666665*Ji00;
+        const double dNdy5 = 0.6666666666666666*Ji11 + 2.6666666666666665*Ji10;
+        const double dNdx6 = -2.0*Ji01 - 2.6666666666666665*Ji00;
+        const double dNdy6 = -2.0*Ji11 - 2.6666666666666665*Ji10;
+        const double eps40 = dNdx1*u1 + dNdx2*u3 + dNdx3*u5 + dNdx4*u7 + dNdx5*u9 + dNdx6*u11;
+        const double eps41 = dNdy1*u2 + dNdy2*u4 + dNdy3*u6 + dNdy4*u8 + dNdy5*u10 + dNdy6*u12;
+        const double eps42 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdy1*u1
+            + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11;
+        strain[6] = eps40;
+        strain[7] = eps41;
+        strain[8] = eps42;
+        stress[6] = eps40*m0 + eps41*m1;
+        stress[7] = eps40*m1 + eps41*m0;
+        stress[8] = eps42*m2;
+    }
+}
+
+void derive_t6_reduced_plane_stress_recovery(long n, const double *restrict xy, const double *restrict u, double E, double nu,
+                           double *restrict strain, double *restrict stress)
+{
+    double mat[NMAT];
+    t6_reduced_plane_stress_material(E, nu, 1.0, mat);
+    for (long e = 0; e < n; ++e)
+        t6_reduced_plane_stress_recovery_body(xy + (size_t)e * NIN, u + (size_t)e * 12, mat,
+                                 strain + (size_t)e * 9, stress + (size_t)e * 9);
+}

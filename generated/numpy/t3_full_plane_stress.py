@@ -1,0 +1,279 @@
+"""
+derive generated kernel: T3 full plane-stress
+
+element      T3, 3 nodes, 6 DOFs interleaved u1, v1, u2, v2, ...
+formulation  displacement element, full integration [standard displacement formulation]
+integration  B^T D B: triangle-d1 (1 point)
+flops        stiffness 129, validity 12, recovery 72 per element (add, mul, div, sqrt)
+
+arguments (units-agnostic; any consistent set of units):
+  xy      nodal coordinates, shape (n, 3, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+  E       Young's modulus (> 0), scalar
+  nu      Poisson's ratio (-1 < nu < 0.5), scalar
+  t       thickness t (the out-of-plane thickness)
+  u       nodal displacements for recovery, shape (n, 6), interleaved u1, v1, u2, v2, ...
+  K       stiffness, shape (n, 6, 6), DOFs interleaved u1, v1, u2, v2, ...; symmetric
+  detJ_min validity: min det J over the points of triangle-d1, shape (n,); <= 0 means an inverted or degenerate element
+  strain  recovery: strain at the 1 points of triangle-d1, shape (n, 1, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
+  stress  recovery: stress D strain at the same points, shape (n, 1, 3), [sigma_xx, sigma_yy, tau_xy]
+
+The kernels do not check their inputs; derive.kernel() checks shapes, finite
+coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
+generator    derive.codegen 1.0; regenerate with
+             derive kernel T3 --variant full --state plane-stress --lang numpy
+
+NumPy: batched and vectorised over elements (no Python loop over elements); the
+elements are processed in chunks of 2048 so the temporaries stay in cache, and all
+points of a rule are evaluated at once on (points, elements) arrays.
+"""
+import numpy as np
+
+ELEMENT = "T3"
+VARIANT = "full"
+STATE = "plane-stress"
+NODES = 3
+NDOF = 6
+NSTRAIN = 3
+NPOINTS = 1
+GENERATOR = "derive.codegen 1.0"
+_CHUNK = 2048
+
+# point constants (shape-function derivatives, monomials, weights) per rule, (points, 1)
+_S0_w = np.array([0.5]).reshape(1, 1)
+
+
+def _psum(a, npts):
+    a = np.asarray(a)
+    return a.sum(axis=0) if a.ndim == 2 else npts * a
+
+
+def _pmin(a):
+    a = np.asarray(a)
+    return a.min(axis=0) if a.ndim == 2 else a
+
+
+def _material(E, nu, t):
+    m0 = E/(1.0 - nu*nu)
+    m1 = E*nu/(1.0 - nu*nu)
+    m2 = E*(0.5 - 0.5*nu)/(1.0 - nu*nu)
+    return (E, nu, t, m0, m1, m2,)
+
+
+def _stiffness_chunk(X, mat, buf):
+    x1 = X[0]
+    y1 = X[1]
+    x2 = X[2]
+    y2 = X[3]
+    x3 = X[4]
+    y3 = X[5]
+    t = mat[2]
+    m0 = mat[3]
+    m1 = mat[4]
+    m2 = mat[5]
+    gx_0_1 = x3 - x1
+    gx_1_0 = x2 - x1
+    gy_0_1 = y3 - y1
+    gy_1_0 = y2 - y1
+    # triangle-d1: all 1 points at once
+    w = _S0_w
+    detJ = gx_1_0*gy_0_1 - gx_0_1*gy_1_0
+    idet = 1.0/detJ
+    Ji00 = gy_0_1*idet
+    Ji01 = -gy_1_0*idet
+    Ji10 = -gx_0_1*idet
+    Ji11 = gx_1_0*idet
+    dNdx1 = -Ji00 - Ji01
+    dNdy1 = -Ji10 - Ji11
+    sc0 = detJ*t*w
+    s1 = m0*sc0
+    s2 = m1*sc0
+    s3 = m2*sc0
+    T4 = dNdx1*s1
+    T6 = dNdy1*s3
+    T7 = dNdy1*s2
+    T8 = dNdy1*s1
+    T9 = dNdx1*s3
+    T10 = Ji00*s1
+    T11 = Ji00*s2
+    T12 = Ji10*s3
+    T13 = Ji10*s2
+    T14 = Ji10*s1
+    T15 = Ji00*s3
+    T16 = Ji01*s1
+    T17 = Ji01*s2
+    T18 = Ji11*s3
+    T19 = Ji11*s2
+    T20 = Ji11*s1
+    T21 = Ji01*s3
+    K_0_0 = _psum(T4*dNdx1 + T6*dNdy1, 1)
+    K_0_1 = _psum(T7*dNdx1 + T9*dNdy1, 1)
+    K_0_2 = _psum(T10*dNdx1 + T12*dNdy1, 1)
+    K_0_3 = _psum(T13*dNdx1 + T15*dNdy1, 1)
+    K_0_4 = _psum(T16*dNdx1 + T18*dNdy1, 1)
+    K_0_5 = _psum(T19*dNdx1 + T21*dNdy1, 1)
+    K_1_1 = _psum(T8*dNdy1 + T9*dNdx1, 1)
+    K_1_2 = _psum(T11*dNdy1 + T12*dNdx1, 1)
+    K_1_3 = _psum(T14*dNdy1 + T15*dNdx1, 1)
+    K_1_4 = _psum(T17*dNdy1 + T18*dNdx1, 1)
+    K_1_5 = _psum(T20*dNdy1 + T21*dNdx1, 1)
+    K_2_2 = _psum(Ji00*T10 + Ji10*T12, 1)
+    K_2_3 = _psum(Ji00*T13 + Ji10*T15, 1)
+    K_2_4 = _psum(Ji00*T16 + Ji10*T18, 1)
+    K_2_5 = _psum(Ji00*T19 + Ji10*T21, 1)
+    K_3_3 = _psum(Ji00*T15 + Ji10*T14, 1)
+    K_3_4 = _psum(Ji00*T18 + Ji10*T17, 1)
+    K_3_5 = _psum(Ji00*T21 + Ji10*T20, 1)
+    K_4_4 = _psum(Ji01*T16 + Ji11*T18, 1)
+    K_4_5 = _psum(Ji01*T19 + Ji11*T21, 1)
+    K_5_5 = _psum(Ji01*T21 + Ji11*T20, 1)
+    buf[0] = K_0_0
+    buf[1] = K_0_1
+    buf[2] = K_0_2
+    buf[3] = K_0_3
+    buf[4] = K_0_4
+    buf[5] = K_0_5
+    buf[6] = buf[1]
+    buf[7] = K_1_1
+    buf[8] = K_1_2
+    buf[9] = K_1_3
+    buf[10] = K_1_4
+    buf[11] = K_1_5
+    buf[12] = buf[2]
+    buf[13] = buf[8]
+    buf[14] = K_2_2
+    buf[15] = K_2_3
+    buf[16] = K_2_4
+    buf[17] = K_2_5
+    buf[18] = buf[3]
+    buf[19] = buf[9]
+    buf[20] = buf[15]
+    buf[21] = K_3_3
+    buf[22] = K_3_4
+    buf[23] = K_3_5
+    buf[24] = buf[4]
+    buf[25] = buf[10]
+    buf[26] = buf[16]
+    buf[27] = buf[22]
+    buf[28] = K_4_4
+    buf[29] = K_4_5
+    buf[30] = buf[5]
+    buf[31] = buf[11]
+    buf[32] = buf[17]
+    buf[33] = buf[23]
+    buf[34] = buf[29]
+    buf[35] = K_5_5
+
+
+def _validity_chunk(X):
+    x1 = X[0]
+    y1 = X[1]
+    x2 = X[2]
+    y2 = X[3]
+    x3 = X[4]
+    y3 = X[5]
+    gx_0_1 = x3 - x1
+    gx_1_0 = x2 - x1
+    gy_0_1 = y3 - y1
+    gy_1_0 = y2 - y1
+    # triangle-d1: all 1 points at once
+    detJ = gx_1_0*gy_0_1 - gx_0_1*gy_1_0
+    dmin = _pmin(detJ)
+    detJ_min = dmin
+    return detJ_min
+
+
+def _recovery_chunk(X, U, mat, strain, stress):
+    x1 = X[0]
+    y1 = X[1]
+    x2 = X[2]
+    y2 = X[3]
+    x3 = X[4]
+    y3 = X[5]
+    u1 = U[0]
+    u2 = U[1]
+    u3 = U[2]
+    u4 = U[3]
+    u5 = U[4]
+    u6 = U[5]
+    m0 = mat[3]
+    m1 = mat[4]
+    m2 = mat[5]
+    gx_0_1 = x3 - x1
+    gx_1_0 = x2 - x1
+    gy_0_1 = y3 - y1
+    gy_1_0 = y2 - y1
+    # triangle-d1: all 1 points at once
+    detJ = gx_1_0*gy_0_1 - gx_0_1*gy_1_0
+    idet = 1.0/detJ
+    Ji00 = gy_0_1*idet
+    Ji01 = -gy_1_0*idet
+    Ji10 = -gx_0_1*idet
+    Ji11 = gx_1_0*idet
+    dNdx1 = -Ji00 - Ji01
+    dNdy1 = -Ji10 - Ji11
+    eps22 = Ji00*u3 + Ji01*u5 + dNdx1*u1
+    eps23 = Ji10*u4 + Ji11*u6 + dNdy1*u2
+    eps24 = Ji00*u4 + Ji01*u6 + Ji10*u3 + Ji11*u5 + dNdx1*u2 + dNdy1*u1
+    strain[0] = eps22
+    strain[1] = eps23
+    strain[2] = eps24
+    stress[0] = eps22*m0 + eps23*m1
+    stress[1] = eps22*m1 + eps23*m0
+    stress[2] = eps24*m2
+
+
+def _coords(xy):
+    xy = np.asarray(xy, dtype=np.float64)
+    if xy.ndim != 3 or xy.shape[1:] != (NODES, 2):
+        raise ValueError(f"xy must have shape (n, {NODES}, 2); got {xy.shape}")
+    return xy
+
+
+def stiffness(xy, E, nu, t, out=None):
+    """Element stiffness matrices, shape (n, NDOF, NDOF)."""
+    xy = _coords(xy)
+    n = xy.shape[0]
+    if out is None:
+        out = np.empty((n, NDOF, NDOF))
+    mat = _material(float(E), float(nu), float(t))
+    for s in range(0, n, _CHUNK):
+        e = min(n, s + _CHUNK)
+        X = np.ascontiguousarray(xy[s:e].reshape(e - s, 2 * NODES).T)
+        buf = np.empty((NDOF * NDOF, e - s))
+        _stiffness_chunk(X, mat, buf)
+        out[s:e] = buf.T.reshape(e - s, NDOF, NDOF)
+    return out
+
+
+def validity(xy):
+    """Minimum det J over the points of the full rule, shape (n,)."""
+    xy = _coords(xy)
+    n = xy.shape[0]
+    out = np.empty(n)
+    for s in range(0, n, _CHUNK):
+        e = min(n, s + _CHUNK)
+        X = np.ascontiguousarray(xy[s:e].reshape(e - s, 2 * NODES).T)
+        out[s:e] = np.broadcast_to(_validity_chunk(X), (e - s,))
+    return out
+
+
+def recovery(xy, u, E, nu):
+    """Strain and stress at the points of the full rule, each of shape (n, NPOINTS, NSTRAIN)."""
+    xy = _coords(xy)
+    n = xy.shape[0]
+    u = np.asarray(u, dtype=np.float64)
+    if u.shape != (n, NDOF):
+        raise ValueError(f"u must have shape ({n}, {NDOF}); got {u.shape}")
+    strain = np.empty((n, NPOINTS, NSTRAIN))
+    stress = np.empty((n, NPOINTS, NSTRAIN))
+    mat = _material(float(E), float(nu), 1.0)
+    for s in range(0, n, _CHUNK):
+        e = min(n, s + _CHUNK)
+        X = np.ascontiguousarray(xy[s:e].reshape(e - s, 2 * NODES).T)
+        U = np.ascontiguousarray(u[s:e].T)
+        bs = np.empty((NSTRAIN, NPOINTS, e - s))
+        bt = np.empty((NSTRAIN, NPOINTS, e - s))
+        _recovery_chunk(X, U, mat, bs, bt)
+        strain[s:e] = bs.transpose(2, 1, 0)
+        stress[s:e] = bt.transpose(2, 1, 0)
+    return strain, stress
