@@ -7,6 +7,7 @@ Public contract (see README and DESIGN.md):
 """
 from __future__ import annotations
 
+from .codegen import kernel
 from .element import Element, element
 from .locking import locking_ratio
 
