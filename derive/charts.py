@@ -95,7 +95,8 @@ def locking_chart(specs, state: str = "plane-stress", nus=(0.0, 0.3, 0.49), aspe
         tol = float(tolerance)
         if not 0 < tol < 1:
             raise InputError(f"tolerance must be between 0 and 1, got {tolerance}")
-        ax.axhspan(1 - tol, 1 + tol, color="0.88", zorder=0, label=f"tolerance band 1 ± {tol:g}")
+        band = ax.axhspan(1 - tol, 1 + tol, color="0.88", zorder=0, label=f"tolerance band 1 ± {tol:g}")
+        band.set_gid(f"tolerance|{tol:g}")
     ax.axhline(1.0, color="0.5", lw=0.8, zorder=1)
     notes = []
     for k, (name, variant) in enumerate(specs):
