@@ -136,6 +136,18 @@ def build_shared(sources: dict, lang: str, stem: str) -> Path:
     return lib
 
 
+def empty_aligned(shape, align: int = 64) -> np.ndarray:
+    """Uninitialised float64 array whose data start on an ``align``-byte boundary.
+
+    The C batch kernels stream K to memory with vector stores that need aligned addresses;
+    NumPy's own allocations are typically only 16-byte aligned.
+    """
+    size = int(np.prod(shape))
+    buf = np.empty(size + align // 8)
+    off = (-buf.ctypes.data % align) // 8
+    return buf[off:off + size].reshape(shape)
+
+
 class Kernel:
     """A generated element kernel: ``k(xy, E, nu, t)`` -> stiffness (n, ndof, ndof).
 
@@ -196,7 +208,7 @@ class Kernel:
         E, nu, t = self._material(E, nu, t)
         n = arr.shape[0]
         if out is None:
-            out = np.empty((n, self.ndof, self.ndof))
+            out = empty_aligned((n, self.ndof, self.ndof))
         elif (not isinstance(out, np.ndarray) or out.shape != (n, self.ndof, self.ndof) or out.dtype != np.float64
               or not out.flags.c_contiguous):
             raise InputError(f"out must be a C-contiguous float64 array of shape ({n}, {self.ndof}, {self.ndof})")

@@ -51,12 +51,14 @@ class Lowered:
     used_inputs: set
 
     def flops(self) -> int:
+        """Floating-point operations per element (a loop over points counts every point)."""
         n = sum(count_ops(e) for _, e in self.mat + self.elem + self.tail)
         for blk in self.pre + self.post:
-            n += sum(count_ops(e) for _, e in blk.stmts)
+            k = sum(count_ops(e) for _, e in blk.stmts)
             for _, e, op, first in blk.accs:
-                n += count_ops(e) + (0 if first else 1)
-            n += sum(count_ops(e) for _, _, e in blk.outs)
+                k += count_ops(e) + (0 if first else 1)
+            k += sum(count_ops(e) for _, _, e in blk.outs)
+            n += k * (blk.npoints if blk.rolled else 1)
         for items in self.outputs.values():
             n += sum(count_ops(e) for _, e in items if not _is_mirror(e))
         return n

@@ -5,7 +5,7 @@
  * formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed) [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
  * integration  B^T D_dev B: gauss-2x2 (4 points); B^T m (g): gauss-2x2 (4 points); -1/kappa (-V/kappa): gauss-2x2 (4 points)
  * internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)
- * flops        stiffness 416, validity 89, recovery 793 per element (add, mul, div, sqrt)
+ * flops        stiffness 1115, validity 89, recovery 793 per element (add, mul, div, sqrt)
  * 
  * arguments (units-agnostic; any consistent set of units):
  *   xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)

@@ -5,7 +5,7 @@
  * formulation  assumed-stress hybrid, 5 stress parameters: K = G^T H^-1 G [Pian & Sumihara (1984)]
  * integration  B^T P (G^T): gauss-2x2 (4 points); -P^T D^-1 P (-H): gauss-2x2 (4 points)
  * internal     5 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)
- * flops        stiffness 945, validity 89, recovery 682 per element (add, mul, div, sqrt)
+ * flops        stiffness 1572, validity 89, recovery 1309 per element (add, mul, div, sqrt)
  * 
  * arguments (units-agnostic; any consistent set of units):
  *   xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)

@@ -5,7 +5,7 @@
  * formulation  incompatible bubble modes, own Jacobian (fails the patch test off parallelograms) [Wilson, Taylor, Doherty & Ghaboussi (1973)]
  * integration  B^T D B: gauss-2x2 (4 points); B^T D G: gauss-2x2 (4 points); G^T D G: gauss-2x2 (4 points)
  * internal     4 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)
- * flops        stiffness 1146, validity 89, recovery 911 per element (add, mul, div, sqrt)
+ * flops        stiffness 2427, validity 89, recovery 1691 per element (add, mul, div, sqrt)
  * 
  * arguments (units-agnostic; any consistent set of units):
  *   xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)

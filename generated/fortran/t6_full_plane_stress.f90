@@ -3,7 +3,7 @@
 ! element      T6, 6 nodes, 12 DOFs interleaved u1, v1, u2, v2, ...
 ! formulation  displacement element, full integration [standard displacement formulation]
 ! integration  B^T D B: triangle-d2 (3 points)
-! flops        stiffness 480, validity 133, recovery 384 per element (add, mul, div, sqrt)
+! flops        stiffness 1294, validity 133, recovery 384 per element (add, mul, div, sqrt)
 !
 ! arguments (units-agnostic; any consistent set of units):
 !   xy      nodal coordinates, shape (n, 6, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)

@@ -5,7 +5,7 @@ element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
 formulation  enhanced assumed strain, 4 modes (det J0/det J T0^-T E) [Simo & Rifai (1990)]
 integration  B^T D B: gauss-2x2 (4 points); B^T D M: gauss-2x2 (4 points); M^T D M: gauss-2x2 (4 points)
 internal     4 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)
-flops        stiffness 1297, validity 89, recovery 1158 per element (add, mul, div, sqrt)
+flops        stiffness 2890, validity 89, recovery 2250 per element (add, mul, div, sqrt)
 
 arguments (units-agnostic; any consistent set of units):
   xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)

@@ -4,7 +4,7 @@ derive generated kernel: Q8 full axisymmetric
 element      Q8, 8 nodes, 16 DOFs interleaved u1, v1, u2, v2, ...
 formulation  displacement element, full integration [standard displacement formulation]
 integration  B^T D B: gauss-3x3 (9 points)
-flops        stiffness 1131, validity 330, recovery 1678 per element (add, mul, div, sqrt)
+flops        stiffness 8923, validity 330, recovery 1678 per element (add, mul, div, sqrt)
 
 arguments (units-agnostic; any consistent set of units):
   xy      nodal coordinates, shape (n, 8, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior); x is the radius r > 0

@@ -4,7 +4,7 @@ derive generated kernel: Q9 full plane-strain
 element      Q9, 9 nodes, 18 DOFs interleaved u1, v1, u2, v2, ...
 formulation  displacement element, full integration [standard displacement formulation]
 integration  B^T D B: gauss-3x3 (9 points)
-flops        stiffness 997, validity 366, recovery 1389 per element (add, mul, div, sqrt)
+flops        stiffness 7773, validity 366, recovery 1389 per element (add, mul, div, sqrt)
 
 arguments (units-agnostic; any consistent set of units):
   xy      nodal coordinates, shape (n, 9, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)

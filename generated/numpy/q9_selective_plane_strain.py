@@ -4,7 +4,7 @@ derive generated kernel: Q9 selective plane-strain
 element      Q9, 9 nodes, 18 DOFs interleaved u1, v1, u2, v2, ...
 formulation  selective integration: volumetric part of D with the reduced rule [Doherty, Wilson & Taylor (1969); Hughes (1987) Sec. 4.4]
 integration  B^T D_dev B: gauss-3x3 (9 points); B^T D_vol B (reduced rule): gauss-2x2 (4 points)
-flops        stiffness 1456, validity 366, recovery 1389 per element (add, mul, div, sqrt)
+flops        stiffness 9636, validity 366, recovery 1389 per element (add, mul, div, sqrt)
 
 arguments (units-agnostic; any consistent set of units):
   xy      nodal coordinates, shape (n, 9, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)

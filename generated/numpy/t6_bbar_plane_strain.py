@@ -5,7 +5,7 @@ element      T6, 6 nodes, 12 DOFs interleaved u1, v1, u2, v2, ...
 formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed) [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
 integration  B^T D_dev B: triangle-d2 (3 points); B^T m (g): triangle-d2 (3 points); -1/kappa (-V/kappa): triangle-d2 (3 points)
 internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)
-flops        stiffness 752, validity 114, recovery 818 per element (add, mul, div, sqrt)
+flops        stiffness 1618, validity 114, recovery 818 per element (add, mul, div, sqrt)
 
 arguments (units-agnostic; any consistent set of units):
   xy      nodal coordinates, shape (n, 6, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)

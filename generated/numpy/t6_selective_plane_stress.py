@@ -4,7 +4,7 @@ derive generated kernel: T6 selective plane-stress
 element      T6, 6 nodes, 12 DOFs interleaved u1, v1, u2, v2, ...
 formulation  selective integration: volumetric part of D with the reduced rule [Doherty, Wilson & Taylor (1969); Hughes (1987) Sec. 4.4]
 integration  B^T D_dev B: triangle-d2 (3 points); B^T D_vol B (reduced rule): triangle-d1 (1 point)
-flops        stiffness 700, validity 114, recovery 384 per element (add, mul, div, sqrt)
+flops        stiffness 1514, validity 114, recovery 384 per element (add, mul, div, sqrt)
 
 arguments (units-agnostic; any consistent set of units):
   xy      nodal coordinates, shape (n, 6, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
