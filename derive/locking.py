@@ -826,7 +826,23 @@ def distortion(name: str, variant: str, state: str, kind: str, value: float, asp
         if expr is not None and sp.count_ops(expr) < 400:
             out["formula"] = str(expr)
             out["formula_symbol"] = str(DISTORTIONS[kind][1])
+    if kind == "skew" and catalog.element_info(name).n_nodes == 4:
+        full = skew_formula(name, variant, state)
+        if full is not None:
+            out["formula_r_nu_c"] = str(full)
     return out
+
+
+@lru_cache(maxsize=None)
+def skew_formula(name: str, variant: str = "full", state: str = "plane-stress") -> sp.Expr | None:
+    """The parallelogram ratio symbolic in r, nu and c = b tan(skew angle) (exact).
+
+    Tractable for the 4-node element (well under a second); the quadratic elements take from
+    about a second (Q8) to tens of seconds (Q9) and are offered symbolic in c only
+    (:func:`distortion_expression`).  None for a zero-energy response.
+    """
+    res = _solve_exact(catalog.element_info(name).name, variant, state, r, nu, _dist_tuple("skew", c_sym))
+    return None if res.zero_energy else res.ratio
 
 
 def parse_distortion(text: str) -> tuple[str, float]:
@@ -924,7 +940,8 @@ def demo_section(outdir) -> dict:
 
 def _clear_caches() -> None:
     from . import stiffness
-    for fn in (_solve_exact, analyse, ratio_function, distortion_expression, compliance, element, catalog.shape_set,
+    for fn in (_solve_exact, analyse, ratio_function, distortion_expression, skew_formula, compliance, element,
+               catalog.shape_set,
                stiffness.rule_moment):
         fn.cache_clear()
 

@@ -143,6 +143,25 @@ def test_skew_exact_and_numeric_routes_agree(variant):
     assert np.allclose(exact, L.numeric_ratio("Q4", variant, "plane-stress", xy, 0.3), rtol=1e-12)
 
 
+def test_q4_skew_formula_in_r_nu_and_c():
+    expr = L.skew_formula("Q4", "full", "plane-stress")
+    assert same(expr.subs(L.c_sym, 0), COOK)        # Cook et al. (4th ed.) on the rectangle, from memory
+    # the symbolic parallelogram formula against the numeric route at 25 degrees (internal consistency)
+    c = math.tan(math.radians(25.0))
+    num = L.numeric_ratio("Q4", "full", "plane-stress", L.distorted_nodes("Q4", "skew", 25.0, 1.5), 0.2)[0]
+    assert math.isclose(float(expr.subs({L.c_sym: c, r: 1.5, nu: 0.2})), num, rel_tol=1e-12)
+    assert L.skew_formula("Q4", "eas4", "plane-strain") == 1    # Simo & Rifai (1990): exact on parallelograms
+
+
+def test_symmetry_reduction_changes_nothing():
+    # the reduced solve against the direct supported solve (internal consistency)
+    for variant in ("full", "eas4", "bbar"):
+        red = L._solve_exact("Q4", variant, "plane-strain").ratio
+        direct = L._solve_exact("Q4", variant, "plane-strain", symmetry=False).ratio
+        assert same(red, direct)
+    assert L._solve_exact("Q4", "reduced", "plane-stress", symmetry=False).zero_energy
+
+
 def test_taper_locks_patch_test_passing_q4_and_keeps_q9_exact():
     vals = {v: L.distortion("Q4", v, "plane-stress", "taper", 0.3, 1.0, 0.3)["ratio"]
             for v in ("full", "incompatible-centred", "eas4", "hybrid5")}

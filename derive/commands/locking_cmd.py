@@ -135,5 +135,7 @@ def text_lines(res: dict) -> list[str]:
                    f"nu = {dist['nu']:g}: {val} (undistorted {base}; {dist['method']})")
         if dist.get("formula"):
             out.append(f"    in {dist['formula_symbol']}: {dist['formula']}")
+        if dist.get("formula_r_nu_c"):
+            out.append(f"    in r, nu and c: {dist['formula_r_nu_c']}")
     out.append(f"  method: {res['source']}")
     return out
