@@ -249,5 +249,6 @@ def test_cli_help_has_example_and_caution(capsys):
 def test_benchmark_quick_smoke():
     res = L.benchmark(quick=True)
     assert res["lines"] and all(row["seconds"] > 0 for row in res["rows"])
+    assert all(row["agree"] for row in res["symmetry"])
     # the benchmark clears the caches: the closed forms are recomputed identically afterwards
     assert same(L.locking_ratio("Q4", "full", "plane-stress"), COOK)
