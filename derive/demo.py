@@ -33,6 +33,7 @@ SECTIONS = [
     "derive.locking:demo_section",
     "derive.benchmarks:demo_section",
     "derive.check:demo_section",
+    "derive.codegen.demo:demo_section",
 ]
 
 

@@ -108,6 +108,22 @@ def describe(ir: KernelIR, lows: dict) -> dict:
     }
 
 
+def _wrap_header(lines: list[str], width: int = 96) -> list[str]:
+    import textwrap
+    out = []
+    for line in lines:
+        if len(line) <= width:
+            out.append(line)
+            continue
+        lead = len(line) - len(line.lstrip())
+        key = line[lead:].split(" ", 1)[0]
+        pos = line.find(key) + len(key)
+        while pos < len(line) and line[pos] == " ":
+            pos += 1
+        out += textwrap.wrap(line, width=width, subsequent_indent=" " * pos, break_on_hyphens=False)
+    return out
+
+
 def header_lines(ir: KernelIR, meta: dict, lang: str) -> list[str]:
     st = ir.state
     rules = "; ".join(f"{label}: {_rule_text(r)}" for label, r in ir.rules.items())
@@ -141,7 +157,7 @@ def header_lines(ir: KernelIR, meta: dict, lang: str) -> list[str]:
         f"generator    derive.codegen {GENERATOR_VERSION}; regenerate with",
         f"             derive kernel {ir.element} --variant {ir.variant} --state {st} --lang {lang}",
     ]
-    return out
+    return _wrap_header(out)
 
 
 # ---------------------------------------------------------------------------------------------
@@ -232,7 +248,7 @@ def _c_body(low: Lowered, ir: KernelIR, inputs: dict, outputs: dict, tag: str, i
         inner = indent + "    "
         for sym, vals in blk.pc.items():
             tname = f"{tag}{bi}_{sym}"
-            consts += _c_table(tname, vals)
+            consts += _c_table(tname, vals, _pc_comment(blk, sym))
             lines.append(f"{inner}const double {sym} = {tname}[p];")
         lines += _c_stmt_lines(blk, inner, outputs.get("__point__"), rolled=True)
         lines.append(f"{indent}}}")
@@ -245,9 +261,15 @@ def _c_body(low: Lowered, ir: KernelIR, inputs: dict, outputs: dict, tag: str, i
     return lines, consts
 
 
-def _c_table(name: str, vals) -> list[str]:
+def _pc_comment(blk, sym) -> str:
+    d = getattr(blk, "pc_defs", {}).get(sym, sym)
+    what = {"w": "the point weight", "xi": "xi", "eta": "eta"}.get(str(d), str(d).replace("**", "^"))
+    return f"{sym} = {what} at the points of {blk.title.split(':')[0]}"
+
+
+def _c_table(name: str, vals, comment: str = "") -> list[str]:
     items = [float_literal(v) for v in vals]
-    out = [f"static const double {name}[{len(items)}] = {{"]
+    out = ([f"/* {comment} */"] if comment else []) + [f"static const double {name}[{len(items)}] = {{"]
     cur = "   "
     for it in items:
         piece = f" {it},"
@@ -404,7 +426,7 @@ def _f_body(low: Lowered, ir: KernelIR, out_fmt, point_fmt=None, tag: str = "T",
         if blk.rolled:
             for sym, vals in blk.pc.items():
                 tname = f"{tag}{bi}_{sym}"
-                tables += _f_table(tname, vals, indent)
+                tables += [f"{indent}! {_pc_comment(blk, sym)}"] + _f_table(tname, vals, indent)
                 lines.append(f"{inner}{sym} = {tname}(p)")
         for s, e in blk.stmts:
             lines += _f_stmt(inner, s, e)
@@ -510,6 +532,7 @@ def _py_lines(low: Lowered, ir: KernelIR, tag: str, out_fmt, indent="    ") -> t
         npts = blk.npoints
         for s, vals in blk.pc.items():
             cname = f"_{tag}{bi}_{s}"
+            consts.append(f"# {_pc_comment(blk, s)}")
             consts.append(f"{cname} = np.array([{', '.join(float_literal(v) for v in vals)}]).reshape({npts}, 1)")
             lines.append(f"{indent}{s} = {cname}")
         for s, e in blk.stmts:

@@ -350,11 +350,19 @@ def _dce(low: Lowered):
             pcs |= _free(e)
         pv = blk._pv
         pts, wts = blk._points
-        table = {}
-        for s in sorted(pcs, key=lambda z: z.name):
+        table, defs = {}, {}
+        for s in sorted(pcs, key=_natural):
             if s in pv.defs or s in (xi, eta, W):
                 table[s] = [pv.value(s, p, q, w) for (p, q), w in zip(pts, wts)]
+                defs[s] = pv.defs.get(s, s)
         blk.pc = table
+        blk.pc_defs = defs
+
+
+def _natural(sym):
+    import re
+    m = re.fullmatch(r"([A-Za-z_]+)(\d+)", sym.name)
+    return (m.group(1), int(m.group(2))) if m else (sym.name, -1)
 
 
 def _mark_first(low: Lowered):

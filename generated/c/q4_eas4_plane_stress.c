@@ -1,29 +1,37 @@
 /*
  * derive generated kernel: Q4 eas4 plane-stress
- * 
+ *
  * element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
  * formulation  enhanced assumed strain, 4 modes (det J0/det J T0^-T E) [Simo & Rifai (1990)]
- * integration  B^T D B: gauss-2x2 (4 points); B^T D M: gauss-2x2 (4 points); M^T D M: gauss-2x2 (4 points)
- * internal     4 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)
+ * integration  B^T D B: gauss-2x2 (4 points); B^T D M: gauss-2x2 (4 points); M^T D M: gauss-2x2 (4
+ *              points)
+ * internal     4 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+ *              (unrolled factorisation of K_aa, no pivoting)
  * flops        stiffness 2881, validity 89, recovery 2241 per element (add, mul, div, sqrt)
- * 
+ *
  * arguments (units-agnostic; any consistent set of units):
- *   xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+ *   xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+ *           node i+1 (counter-clockwise corners first, then mid-side, then interior)
  *   E       Young's modulus (> 0), scalar
  *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
  *   t       thickness t (the out-of-plane thickness)
  *   u       nodal displacements for recovery, shape (n, 8), interleaved u1, v1, u2, v2, ...
- *   K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 4 internal unknowns are condensed
- *   detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted or degenerate element
- *   strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
- *   stress  recovery: stress D strain at the same points, shape (n, 4, 3), [sigma_xx, sigma_yy, tau_xy]
- * 
+ *   K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 4
+ *           internal unknowns are condensed
+ *   detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted
+ *            or degenerate element
+ *   strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 3), Voigt [eps_xx, eps_yy,
+ *           gamma_xy] (engineering shear)
+ *   stress  recovery: stress D strain at the same points, shape (n, 4, 3), [sigma_xx, sigma_yy,
+ *           tau_xy]
+ *
  * The kernels do not check their inputs; derive.kernel() checks shapes, finite
  * coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
  * generator    derive.codegen 1.0; regenerate with
  *              derive kernel Q4 --variant eas4 --state plane-stress --lang c
  *
  * C99.  Compile e.g. with: cc -O3 -march=native -fopenmp-simd -c q4_eas4_plane_stress.c
+ * (with GCC add -fno-tree-slp-vectorize: same speed, much shorter compile times).
  * Data layout: every array is dense, row-major (C order), float64.  The batch kernel
  * copies 8 elements at a time into element-innermost scratch arrays so that the
  * per-element body is vectorised across elements (one SIMD lane per element).
@@ -63,93 +71,123 @@
 #endif
 
 /* point tables of the rules evaluated in a loop: shape-function derivatives, weights, ... */
+/* c0 = eta/4 - 1/4 at the points of gauss-2x2 */
 static const double KS0_c0[4] = {
     -0.39433756729740643, -0.39433756729740643, -0.10566243270259355, -0.10566243270259355
 };
+/* c1 = xi/4 - 1/4 at the points of gauss-2x2 */
 static const double KS0_c1[4] = {
     -0.39433756729740643, -0.10566243270259355, -0.39433756729740643, -0.10566243270259355
 };
-static const double KS0_c10[4] = {
-    0.5773502691896257, 0.5773502691896257, -0.5773502691896257, -0.5773502691896257
-};
-static const double KS0_c11[4] = {
-    1.1547005383792515, -1.1547005383792515, 1.1547005383792515, -1.1547005383792515
-};
-static const double KS0_c12[4] = {
-    1.1547005383792515, 1.1547005383792515, -1.1547005383792515, -1.1547005383792515
-};
+/* c2 = 1/4 - eta/4 at the points of gauss-2x2 */
 static const double KS0_c2[4] = {
     0.39433756729740643, 0.39433756729740643, 0.10566243270259355, 0.10566243270259355
 };
+/* c3 = -xi/4 - 1/4 at the points of gauss-2x2 */
 static const double KS0_c3[4] = {
     -0.10566243270259355, -0.39433756729740643, -0.10566243270259355, -0.39433756729740643
 };
+/* c4 = eta/4 + 1/4 at the points of gauss-2x2 */
 static const double KS0_c4[4] = {
     0.10566243270259355, 0.10566243270259355, 0.39433756729740643, 0.39433756729740643
 };
+/* c5 = xi/4 + 1/4 at the points of gauss-2x2 */
 static const double KS0_c5[4] = {
     0.10566243270259355, 0.39433756729740643, 0.10566243270259355, 0.39433756729740643
 };
+/* c6 = -eta/4 - 1/4 at the points of gauss-2x2 */
 static const double KS0_c6[4] = {
     -0.10566243270259355, -0.10566243270259355, -0.39433756729740643, -0.39433756729740643
 };
+/* c7 = 1/4 - xi/4 at the points of gauss-2x2 */
 static const double KS0_c7[4] = {
     0.39433756729740643, 0.10566243270259355, 0.39433756729740643, 0.10566243270259355
 };
+/* c9 = -xi at the points of gauss-2x2 */
 static const double KS0_c9[4] = {
     0.5773502691896257, -0.5773502691896257, 0.5773502691896257, -0.5773502691896257
 };
+/* c10 = -eta at the points of gauss-2x2 */
+static const double KS0_c10[4] = {
+    0.5773502691896257, 0.5773502691896257, -0.5773502691896257, -0.5773502691896257
+};
+/* c11 = -2*xi at the points of gauss-2x2 */
+static const double KS0_c11[4] = {
+    1.1547005383792515, -1.1547005383792515, 1.1547005383792515, -1.1547005383792515
+};
+/* c12 = -2*eta at the points of gauss-2x2 */
+static const double KS0_c12[4] = {
+    1.1547005383792515, 1.1547005383792515, -1.1547005383792515, -1.1547005383792515
+};
+/* eta = eta at the points of gauss-2x2 */
 static const double KS0_eta[4] = {
     -0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257
 };
+/* w = the point weight at the points of gauss-2x2 */
 static const double KS0_w[4] = {
     1.0, 1.0, 1.0, 1.0
 };
+/* xi = xi at the points of gauss-2x2 */
 static const double KS0_xi[4] = {
     -0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257
 };
+/* c0 = eta/4 - 1/4 at the points of gauss-2x2 */
 static const double KR0_c0[4] = {
     -0.39433756729740643, -0.39433756729740643, -0.10566243270259355, -0.10566243270259355
 };
+/* c1 = xi/4 - 1/4 at the points of gauss-2x2 */
 static const double KR0_c1[4] = {
     -0.39433756729740643, -0.10566243270259355, -0.39433756729740643, -0.10566243270259355
 };
-static const double KR0_c10[4] = {
-    0.5773502691896257, 0.5773502691896257, -0.5773502691896257, -0.5773502691896257
-};
-static const double KR0_c11[4] = {
-    1.1547005383792515, -1.1547005383792515, 1.1547005383792515, -1.1547005383792515
-};
-static const double KR0_c12[4] = {
-    1.1547005383792515, 1.1547005383792515, -1.1547005383792515, -1.1547005383792515
-};
+/* c2 = 1/4 - eta/4 at the points of gauss-2x2 */
 static const double KR0_c2[4] = {
     0.39433756729740643, 0.39433756729740643, 0.10566243270259355, 0.10566243270259355
 };
+/* c3 = -xi/4 - 1/4 at the points of gauss-2x2 */
 static const double KR0_c3[4] = {
     -0.10566243270259355, -0.39433756729740643, -0.10566243270259355, -0.39433756729740643
 };
+/* c4 = eta/4 + 1/4 at the points of gauss-2x2 */
 static const double KR0_c4[4] = {
     0.10566243270259355, 0.10566243270259355, 0.39433756729740643, 0.39433756729740643
 };
+/* c5 = xi/4 + 1/4 at the points of gauss-2x2 */
 static const double KR0_c5[4] = {
     0.10566243270259355, 0.39433756729740643, 0.10566243270259355, 0.39433756729740643
 };
+/* c6 = -eta/4 - 1/4 at the points of gauss-2x2 */
 static const double KR0_c6[4] = {
     -0.10566243270259355, -0.10566243270259355, -0.39433756729740643, -0.39433756729740643
 };
+/* c7 = 1/4 - xi/4 at the points of gauss-2x2 */
 static const double KR0_c7[4] = {
     0.39433756729740643, 0.10566243270259355, 0.39433756729740643, 0.10566243270259355
 };
+/* c9 = -xi at the points of gauss-2x2 */
 static const double KR0_c9[4] = {
     0.5773502691896257, -0.5773502691896257, 0.5773502691896257, -0.5773502691896257
 };
+/* c10 = -eta at the points of gauss-2x2 */
+static const double KR0_c10[4] = {
+    0.5773502691896257, 0.5773502691896257, -0.5773502691896257, -0.5773502691896257
+};
+/* c11 = -2*xi at the points of gauss-2x2 */
+static const double KR0_c11[4] = {
+    1.1547005383792515, -1.1547005383792515, 1.1547005383792515, -1.1547005383792515
+};
+/* c12 = -2*eta at the points of gauss-2x2 */
+static const double KR0_c12[4] = {
+    1.1547005383792515, 1.1547005383792515, -1.1547005383792515, -1.1547005383792515
+};
+/* eta = eta at the points of gauss-2x2 */
 static const double KR0_eta[4] = {
     -0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257
 };
+/* w = the point weight at the points of gauss-2x2 */
 static const double KR0_w[4] = {
     1.0, 1.0, 1.0, 1.0
 };
+/* xi = xi at the points of gauss-2x2 */
 static const double KR0_xi[4] = {
     -0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257
 };
@@ -214,9 +252,6 @@ DERIVE_INLINE void q4_eas4_plane_stress_stiffness_body(const double *restrict xy
     for (int p = 0; p < 4; ++p) {   /* gauss-2x2: loop over the 4 points */
         const double c0 = KS0_c0[p];
         const double c1 = KS0_c1[p];
-        const double c10 = KS0_c10[p];
-        const double c11 = KS0_c11[p];
-        const double c12 = KS0_c12[p];
         const double c2 = KS0_c2[p];
         const double c3 = KS0_c3[p];
         const double c4 = KS0_c4[p];
@@ -224,6 +259,9 @@ DERIVE_INLINE void q4_eas4_plane_stress_stiffness_body(const double *restrict xy
         const double c6 = KS0_c6[p];
         const double c7 = KS0_c7[p];
         const double c9 = KS0_c9[p];
+        const double c10 = KS0_c10[p];
+        const double c11 = KS0_c11[p];
+        const double c12 = KS0_c12[p];
         const double eta = KS0_eta[p];
         const double w = KS0_w[p];
         const double xi = KS0_xi[p];
@@ -673,9 +711,6 @@ static inline void q4_eas4_plane_stress_recovery_body(const double *restrict xy,
     for (int p = 0; p < 4; ++p) {   /* gauss-2x2: loop over the 4 points */
         const double c0 = KR0_c0[p];
         const double c1 = KR0_c1[p];
-        const double c10 = KR0_c10[p];
-        const double c11 = KR0_c11[p];
-        const double c12 = KR0_c12[p];
         const double c2 = KR0_c2[p];
         const double c3 = KR0_c3[p];
         const double c4 = KR0_c4[p];
@@ -683,6 +718,9 @@ static inline void q4_eas4_plane_stress_recovery_body(const double *restrict xy,
         const double c6 = KR0_c6[p];
         const double c7 = KR0_c7[p];
         const double c9 = KR0_c9[p];
+        const double c10 = KR0_c10[p];
+        const double c11 = KR0_c11[p];
+        const double c12 = KR0_c12[p];
         const double eta = KR0_eta[p];
         const double w = KR0_w[p];
         const double xi = KR0_xi[p];

@@ -1,22 +1,26 @@
 /*
  * derive generated kernel: Q4 full plane-stress
- * 
+ *
  * element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
  * formulation  displacement element, full integration [standard displacement formulation]
  * integration  B^T D B: gauss-2x2 (4 points)
  * flops        stiffness 877, validity 89, recovery 373 per element (add, mul, div, sqrt)
- * 
+ *
  * arguments (units-agnostic; any consistent set of units):
- *   xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+ *   xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+ *           node i+1 (counter-clockwise corners first, then mid-side, then interior)
  *   E       Young's modulus (> 0), scalar
  *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
  *   t       thickness t (the out-of-plane thickness)
  *   u       nodal displacements for recovery, shape (n, 8), interleaved u1, v1, u2, v2, ...
  *   K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric
- *   detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted or degenerate element
- *   strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
- *   stress  recovery: stress D strain at the same points, shape (n, 4, 3), [sigma_xx, sigma_yy, tau_xy]
- * 
+ *   detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted
+ *            or degenerate element
+ *   strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 3), Voigt [eps_xx, eps_yy,
+ *           gamma_xy] (engineering shear)
+ *   stress  recovery: stress D strain at the same points, shape (n, 4, 3), [sigma_xx, sigma_yy,
+ *           tau_xy]
+ *
  * The kernels do not check their inputs; derive.kernel() checks shapes, finite
  * coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
  * generator    derive.codegen 1.0; regenerate with

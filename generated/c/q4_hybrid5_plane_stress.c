@@ -1,29 +1,36 @@
 /*
  * derive generated kernel: Q4 hybrid5 plane-stress
- * 
+ *
  * element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
  * formulation  assumed-stress hybrid, 5 stress parameters: K = G^T H^-1 G [Pian & Sumihara (1984)]
  * integration  B^T P (G^T): gauss-2x2 (4 points); -P^T D^-1 P (-H): gauss-2x2 (4 points)
- * internal     5 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)
+ * internal     5 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+ *              (unrolled factorisation of K_aa, no pivoting)
  * flops        stiffness 1572, validity 89, recovery 1309 per element (add, mul, div, sqrt)
- * 
+ *
  * arguments (units-agnostic; any consistent set of units):
- *   xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+ *   xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+ *           node i+1 (counter-clockwise corners first, then mid-side, then interior)
  *   E       Young's modulus (> 0), scalar
  *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
  *   t       thickness t (the out-of-plane thickness)
  *   u       nodal displacements for recovery, shape (n, 8), interleaved u1, v1, u2, v2, ...
- *   K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 5 internal unknowns are condensed
- *   detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted or degenerate element
- *   strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
- *   stress  recovery: stress D strain at the same points, shape (n, 4, 3), [sigma_xx, sigma_yy, tau_xy]
- * 
+ *   K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 5
+ *           internal unknowns are condensed
+ *   detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted
+ *            or degenerate element
+ *   strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 3), Voigt [eps_xx, eps_yy,
+ *           gamma_xy] (engineering shear)
+ *   stress  recovery: stress D strain at the same points, shape (n, 4, 3), [sigma_xx, sigma_yy,
+ *           tau_xy]
+ *
  * The kernels do not check their inputs; derive.kernel() checks shapes, finite
  * coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
  * generator    derive.codegen 1.0; regenerate with
  *              derive kernel Q4 --variant hybrid5 --state plane-stress --lang c
  *
  * C99.  Compile e.g. with: cc -O3 -march=native -fopenmp-simd -c q4_hybrid5_plane_stress.c
+ * (with GCC add -fno-tree-slp-vectorize: same speed, much shorter compile times).
  * Data layout: every array is dense, row-major (C order), float64.  The batch kernel
  * copies 8 elements at a time into element-innermost scratch arrays so that the
  * per-element body is vectorised across elements (one SIMD lane per element).
@@ -63,69 +70,91 @@
 #endif
 
 /* point tables of the rules evaluated in a loop: shape-function derivatives, weights, ... */
+/* c0 = eta/4 - 1/4 at the points of gauss-2x2 */
 static const double KS0_c0[4] = {
     -0.39433756729740643, -0.39433756729740643, -0.10566243270259355, -0.10566243270259355
 };
+/* c1 = xi/4 - 1/4 at the points of gauss-2x2 */
 static const double KS0_c1[4] = {
     -0.39433756729740643, -0.10566243270259355, -0.39433756729740643, -0.10566243270259355
 };
+/* c2 = 1/4 - eta/4 at the points of gauss-2x2 */
 static const double KS0_c2[4] = {
     0.39433756729740643, 0.39433756729740643, 0.10566243270259355, 0.10566243270259355
 };
+/* c3 = -xi/4 - 1/4 at the points of gauss-2x2 */
 static const double KS0_c3[4] = {
     -0.10566243270259355, -0.39433756729740643, -0.10566243270259355, -0.39433756729740643
 };
+/* c4 = eta/4 + 1/4 at the points of gauss-2x2 */
 static const double KS0_c4[4] = {
     0.10566243270259355, 0.10566243270259355, 0.39433756729740643, 0.39433756729740643
 };
+/* c5 = xi/4 + 1/4 at the points of gauss-2x2 */
 static const double KS0_c5[4] = {
     0.10566243270259355, 0.39433756729740643, 0.10566243270259355, 0.39433756729740643
 };
+/* c6 = -eta/4 - 1/4 at the points of gauss-2x2 */
 static const double KS0_c6[4] = {
     -0.10566243270259355, -0.10566243270259355, -0.39433756729740643, -0.39433756729740643
 };
+/* c7 = 1/4 - xi/4 at the points of gauss-2x2 */
 static const double KS0_c7[4] = {
     0.39433756729740643, 0.10566243270259355, 0.39433756729740643, 0.10566243270259355
 };
+/* eta = eta at the points of gauss-2x2 */
 static const double KS0_eta[4] = {
     -0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257
 };
+/* w = the point weight at the points of gauss-2x2 */
 static const double KS0_w[4] = {
     1.0, 1.0, 1.0, 1.0
 };
+/* xi = xi at the points of gauss-2x2 */
 static const double KS0_xi[4] = {
     -0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257
 };
+/* c0 = eta/4 - 1/4 at the points of gauss-2x2 */
 static const double KR0_c0[4] = {
     -0.39433756729740643, -0.39433756729740643, -0.10566243270259355, -0.10566243270259355
 };
+/* c1 = xi/4 - 1/4 at the points of gauss-2x2 */
 static const double KR0_c1[4] = {
     -0.39433756729740643, -0.10566243270259355, -0.39433756729740643, -0.10566243270259355
 };
+/* c2 = 1/4 - eta/4 at the points of gauss-2x2 */
 static const double KR0_c2[4] = {
     0.39433756729740643, 0.39433756729740643, 0.10566243270259355, 0.10566243270259355
 };
+/* c3 = -xi/4 - 1/4 at the points of gauss-2x2 */
 static const double KR0_c3[4] = {
     -0.10566243270259355, -0.39433756729740643, -0.10566243270259355, -0.39433756729740643
 };
+/* c4 = eta/4 + 1/4 at the points of gauss-2x2 */
 static const double KR0_c4[4] = {
     0.10566243270259355, 0.10566243270259355, 0.39433756729740643, 0.39433756729740643
 };
+/* c5 = xi/4 + 1/4 at the points of gauss-2x2 */
 static const double KR0_c5[4] = {
     0.10566243270259355, 0.39433756729740643, 0.10566243270259355, 0.39433756729740643
 };
+/* c6 = -eta/4 - 1/4 at the points of gauss-2x2 */
 static const double KR0_c6[4] = {
     -0.10566243270259355, -0.10566243270259355, -0.39433756729740643, -0.39433756729740643
 };
+/* c7 = 1/4 - xi/4 at the points of gauss-2x2 */
 static const double KR0_c7[4] = {
     0.39433756729740643, 0.10566243270259355, 0.39433756729740643, 0.10566243270259355
 };
+/* eta = eta at the points of gauss-2x2 */
 static const double KR0_eta[4] = {
     -0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257
 };
+/* w = the point weight at the points of gauss-2x2 */
 static const double KR0_w[4] = {
     1.0, 1.0, 1.0, 1.0
 };
+/* xi = xi at the points of gauss-2x2 */
 static const double KR0_xi[4] = {
     -0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257
 };

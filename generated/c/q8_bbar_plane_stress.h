@@ -1,23 +1,31 @@
 /*
  * derive generated kernel: Q8 bbar plane-stress
- * 
+ *
  * element      Q8, 8 nodes, 16 DOFs interleaved u1, v1, u2, v2, ...
- * formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed) [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
- * integration  B^T D_dev B: gauss-3x3 (9 points); B^T m (g): gauss-3x3 (9 points); -1/kappa (-V/kappa): gauss-3x3 (9 points)
- * internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)
+ * formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed)
+ *              [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
+ * integration  B^T D_dev B: gauss-3x3 (9 points); B^T m (g): gauss-3x3 (9 points); -1/kappa
+ *              (-V/kappa): gauss-3x3 (9 points)
+ * internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+ *              (unrolled factorisation of K_aa, no pivoting)
  * flops        stiffness 7052, validity 330, recovery 2842 per element (add, mul, div, sqrt)
- * 
+ *
  * arguments (units-agnostic; any consistent set of units):
- *   xy      nodal coordinates, shape (n, 8, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+ *   xy      nodal coordinates, shape (n, 8, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+ *           node i+1 (counter-clockwise corners first, then mid-side, then interior)
  *   E       Young's modulus (> 0), scalar
  *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
  *   t       thickness t (the out-of-plane thickness)
  *   u       nodal displacements for recovery, shape (n, 16), interleaved u1, v1, u2, v2, ...
- *   K       stiffness, shape (n, 16, 16), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1 internal unknowns are condensed
- *   detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted or degenerate element
- *   strain  recovery: strain at the 9 points of gauss-3x3, shape (n, 9, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
- *   stress  recovery: stress D strain at the same points, shape (n, 9, 3), [sigma_xx, sigma_yy, tau_xy]
- * 
+ *   K       stiffness, shape (n, 16, 16), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1
+ *           internal unknowns are condensed
+ *   detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted
+ *            or degenerate element
+ *   strain  recovery: strain at the 9 points of gauss-3x3, shape (n, 9, 3), Voigt [eps_xx, eps_yy,
+ *           gamma_xy] (engineering shear)
+ *   stress  recovery: stress D strain at the same points, shape (n, 9, 3), [sigma_xx, sigma_yy,
+ *           tau_xy]
+ *
  * The kernels do not check their inputs; derive.kernel() checks shapes, finite
  * coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
  * generator    derive.codegen 1.0; regenerate with

@@ -1,22 +1,27 @@
 /*
  * derive generated kernel: Q8 selective plane-stress
- * 
+ *
  * element      Q8, 8 nodes, 16 DOFs interleaved u1, v1, u2, v2, ...
- * formulation  selective integration: volumetric part of D with the reduced rule [Doherty, Wilson & Taylor (1969); Hughes (1987) Sec. 4.4]
+ * formulation  selective integration: volumetric part of D with the reduced rule [Doherty, Wilson
+ *              & Taylor (1969); Hughes (1987) Sec. 4.4]
  * integration  B^T D_dev B: gauss-3x3 (9 points); B^T D_vol B (reduced rule): gauss-2x2 (4 points)
  * flops        stiffness 7848, validity 330, recovery 1312 per element (add, mul, div, sqrt)
- * 
+ *
  * arguments (units-agnostic; any consistent set of units):
- *   xy      nodal coordinates, shape (n, 8, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+ *   xy      nodal coordinates, shape (n, 8, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+ *           node i+1 (counter-clockwise corners first, then mid-side, then interior)
  *   E       Young's modulus (> 0), scalar
  *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
  *   t       thickness t (the out-of-plane thickness)
  *   u       nodal displacements for recovery, shape (n, 16), interleaved u1, v1, u2, v2, ...
  *   K       stiffness, shape (n, 16, 16), DOFs interleaved u1, v1, u2, v2, ...; symmetric
- *   detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted or degenerate element
- *   strain  recovery: strain at the 9 points of gauss-3x3, shape (n, 9, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
- *   stress  recovery: stress D strain at the same points, shape (n, 9, 3), [sigma_xx, sigma_yy, tau_xy]
- * 
+ *   detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted
+ *            or degenerate element
+ *   strain  recovery: strain at the 9 points of gauss-3x3, shape (n, 9, 3), Voigt [eps_xx, eps_yy,
+ *           gamma_xy] (engineering shear)
+ *   stress  recovery: stress D strain at the same points, shape (n, 9, 3), [sigma_xx, sigma_yy,
+ *           tau_xy]
+ *
  * The kernels do not check their inputs; derive.kernel() checks shapes, finite
  * coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
  * generator    derive.codegen 1.0; regenerate with

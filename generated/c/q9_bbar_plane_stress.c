@@ -1,29 +1,38 @@
 /*
  * derive generated kernel: Q9 bbar plane-stress
- * 
+ *
  * element      Q9, 9 nodes, 18 DOFs interleaved u1, v1, u2, v2, ...
- * formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed) [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
- * integration  B^T D_dev B: gauss-3x3 (9 points); B^T m (g): gauss-3x3 (9 points); -1/kappa (-V/kappa): gauss-3x3 (9 points)
- * internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)
+ * formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed)
+ *              [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
+ * integration  B^T D_dev B: gauss-3x3 (9 points); B^T m (g): gauss-3x3 (9 points); -1/kappa
+ *              (-V/kappa): gauss-3x3 (9 points)
+ * internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+ *              (unrolled factorisation of K_aa, no pivoting)
  * flops        stiffness 8643, validity 366, recovery 3395 per element (add, mul, div, sqrt)
- * 
+ *
  * arguments (units-agnostic; any consistent set of units):
- *   xy      nodal coordinates, shape (n, 9, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+ *   xy      nodal coordinates, shape (n, 9, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+ *           node i+1 (counter-clockwise corners first, then mid-side, then interior)
  *   E       Young's modulus (> 0), scalar
  *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
  *   t       thickness t (the out-of-plane thickness)
  *   u       nodal displacements for recovery, shape (n, 18), interleaved u1, v1, u2, v2, ...
- *   K       stiffness, shape (n, 18, 18), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1 internal unknowns are condensed
- *   detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted or degenerate element
- *   strain  recovery: strain at the 9 points of gauss-3x3, shape (n, 9, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
- *   stress  recovery: stress D strain at the same points, shape (n, 9, 3), [sigma_xx, sigma_yy, tau_xy]
- * 
+ *   K       stiffness, shape (n, 18, 18), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1
+ *           internal unknowns are condensed
+ *   detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted
+ *            or degenerate element
+ *   strain  recovery: strain at the 9 points of gauss-3x3, shape (n, 9, 3), Voigt [eps_xx, eps_yy,
+ *           gamma_xy] (engineering shear)
+ *   stress  recovery: stress D strain at the same points, shape (n, 9, 3), [sigma_xx, sigma_yy,
+ *           tau_xy]
+ *
  * The kernels do not check their inputs; derive.kernel() checks shapes, finite
  * coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
  * generator    derive.codegen 1.0; regenerate with
  *              derive kernel Q9 --variant bbar --state plane-stress --lang c
  *
  * C99.  Compile e.g. with: cc -O3 -march=native -fopenmp-simd -c q9_bbar_plane_stress.c
+ * (with GCC add -fno-tree-slp-vectorize: same speed, much shorter compile times).
  * Data layout: every array is dense, row-major (C order), float64.  The batch kernel
  * copies 8 elements at a time into element-innermost scratch arrays so that the
  * per-element body is vectorised across elements (one SIMD lane per element).
@@ -63,222 +72,278 @@
 #endif
 
 /* point tables of the rules evaluated in a loop: shape-function derivatives, weights, ... */
+/* c0 = eta^2 at the points of gauss-3x3 */
 static const double KS0_c0[9] = {
     0.6, 0.6, 0.6, 0.0, 0.0, 0.0, 0.6, 0.6, 0.6
 };
+/* c1 = 2*xi at the points of gauss-3x3 */
 static const double KS0_c1[9] = {
     -1.5491933384829668, 0.0, 1.5491933384829668, -1.5491933384829668, 0.0, 1.5491933384829668,
     -1.5491933384829668, 0.0, 1.5491933384829668
 };
-static const double KS0_c10[9] = {
-    0.11127016653792583, 0.0, -0.8760281680828158, 0.04364916731037084, 0.0, -0.3436491673103708,
-    -0.023971831917184144, 0.0, 0.18872983346207417
-};
-static const double KS0_c11[9] = {
-    0.023971831917184144, -0.04364916731037084, -0.11127016653792583, 0.0, 0.0, 0.0,
-    -0.18872983346207417, 0.3436491673103708, 0.8760281680828158
-};
-static const double KS0_c12[9] = {
-    0.023971831917184144, 0.0, -0.18872983346207417, -0.04364916731037084, 0.0, 0.3436491673103708,
-    -0.11127016653792583, 0.0, 0.8760281680828158
-};
-static const double KS0_c13[9] = {
-    0.11127016653792583, 0.04364916731037084, -0.023971831917184144, 0.0, 0.0, 0.0,
-    -0.8760281680828158, -0.3436491673103708, 0.18872983346207417
-};
-static const double KS0_c14[9] = {
-    -0.18872983346207417, 0.0, 0.023971831917184144, 0.3436491673103708, 0.0, -0.04364916731037084,
-    0.8760281680828158, 0.0, -0.11127016653792583
-};
-static const double KS0_c15[9] = {
-    1.06475800154489, 0.0, -1.06475800154489, 0.0, 0.0, 0.0, -0.13524199845510998, 0.0,
-    0.13524199845510998
-};
-static const double KS0_c16[9] = {
-    -0.5098386676965934, -1.2745966692414834, -0.5098386676965934, -0.2, -0.5, -0.2,
-    0.10983866769659335, 0.2745966692414834, 0.10983866769659335
-};
-static const double KS0_c17[9] = {
-    -0.10983866769659335, 0.2, 0.5098386676965934, -0.2745966692414834, 0.5, 1.2745966692414834,
-    -0.10983866769659335, 0.2, 0.5098386676965934
-};
-static const double KS0_c18[9] = {
-    -0.13524199845510998, 0.0, 1.06475800154489, 0.0, 0.0, 0.0, 0.13524199845510998, 0.0,
-    -1.06475800154489
-};
-static const double KS0_c19[9] = {
-    -0.13524199845510998, 0.0, 0.13524199845510998, 0.0, 0.0, 0.0, 1.06475800154489, 0.0,
-    -1.06475800154489
-};
+/* c2 = 2*eta*xi at the points of gauss-3x3 */
 static const double KS0_c2[9] = {
     1.2, 0.0, -1.2, 0.0, 0.0, 0.0, -1.2, 0.0, 1.2
 };
-static const double KS0_c20[9] = {
-    -0.10983866769659335, -0.2745966692414834, -0.10983866769659335, 0.2, 0.5, 0.2,
-    0.5098386676965934, 1.2745966692414834, 0.5098386676965934
-};
-static const double KS0_c21[9] = {
-    -0.5098386676965934, -0.2, 0.10983866769659335, -1.2745966692414834, -0.5, 0.2745966692414834,
-    -0.5098386676965934, -0.2, 0.10983866769659335
-};
-static const double KS0_c22[9] = {
-    1.06475800154489, 0.0, -0.13524199845510998, 0.0, 0.0, 0.0, -1.06475800154489, 0.0,
-    0.13524199845510998
-};
-static const double KS0_c23[9] = {
-    0.6196773353931867, 0.0, -0.6196773353931867, 1.5491933384829668, 0.0, -1.5491933384829668,
-    0.6196773353931867, 0.0, -0.6196773353931867
-};
-static const double KS0_c24[9] = {
-    0.6196773353931867, 1.5491933384829668, 0.6196773353931867, 0.0, 0.0, 0.0, -0.6196773353931867,
-    -1.5491933384829668, -0.6196773353931867
-};
+/* c3 = 2*eta^2*xi at the points of gauss-3x3 */
 static const double KS0_c3[9] = {
     -0.9295160030897801, 0.0, 0.9295160030897801, 0.0, 0.0, 0.0, -0.9295160030897801, 0.0,
     0.9295160030897801
 };
+/* c4 = 2*eta at the points of gauss-3x3 */
 static const double KS0_c4[9] = {
     -1.5491933384829668, -1.5491933384829668, -1.5491933384829668, 0.0, 0.0, 0.0,
     1.5491933384829668, 1.5491933384829668, 1.5491933384829668
 };
+/* c5 = xi^2 at the points of gauss-3x3 */
 static const double KS0_c5[9] = {
     0.6, 0.0, 0.6, 0.6, 0.0, 0.6, 0.6, 0.0, 0.6
 };
+/* c6 = 2*eta*xi^2 at the points of gauss-3x3 */
 static const double KS0_c6[9] = {
     -0.9295160030897801, 0.0, -0.9295160030897801, 0.0, 0.0, 0.0, 0.9295160030897801, 0.0,
     0.9295160030897801
 };
+/* c7 = eta^2*xi/2 - eta^2/4 - eta*xi/2 + eta/4 at the points of gauss-3x3 */
 static const double KS0_c7[9] = {
     -0.8760281680828158, -0.3436491673103708, 0.18872983346207417, 0.0, 0.0, 0.0,
     0.11127016653792583, 0.04364916731037084, -0.023971831917184144
 };
+/* c8 = eta*xi^2/2 - eta*xi/2 - xi^2/4 + xi/4 at the points of gauss-3x3 */
 static const double KS0_c8[9] = {
     -0.8760281680828158, 0.0, 0.11127016653792583, -0.3436491673103708, 0.0, 0.04364916731037084,
     0.18872983346207417, 0.0, -0.023971831917184144
 };
+/* c9 = eta^2*xi/2 + eta^2/4 - eta*xi/2 - eta/4 at the points of gauss-3x3 */
 static const double KS0_c9[9] = {
     -0.18872983346207417, 0.3436491673103708, 0.8760281680828158, 0.0, 0.0, 0.0,
     0.023971831917184144, -0.04364916731037084, -0.11127016653792583
 };
+/* c10 = eta*xi^2/2 + eta*xi/2 - xi^2/4 - xi/4 at the points of gauss-3x3 */
+static const double KS0_c10[9] = {
+    0.11127016653792583, 0.0, -0.8760281680828158, 0.04364916731037084, 0.0, -0.3436491673103708,
+    -0.023971831917184144, 0.0, 0.18872983346207417
+};
+/* c11 = eta^2*xi/2 + eta^2/4 + eta*xi/2 + eta/4 at the points of gauss-3x3 */
+static const double KS0_c11[9] = {
+    0.023971831917184144, -0.04364916731037084, -0.11127016653792583, 0.0, 0.0, 0.0,
+    -0.18872983346207417, 0.3436491673103708, 0.8760281680828158
+};
+/* c12 = eta*xi^2/2 + eta*xi/2 + xi^2/4 + xi/4 at the points of gauss-3x3 */
+static const double KS0_c12[9] = {
+    0.023971831917184144, 0.0, -0.18872983346207417, -0.04364916731037084, 0.0, 0.3436491673103708,
+    -0.11127016653792583, 0.0, 0.8760281680828158
+};
+/* c13 = eta^2*xi/2 - eta^2/4 + eta*xi/2 - eta/4 at the points of gauss-3x3 */
+static const double KS0_c13[9] = {
+    0.11127016653792583, 0.04364916731037084, -0.023971831917184144, 0.0, 0.0, 0.0,
+    -0.8760281680828158, -0.3436491673103708, 0.18872983346207417
+};
+/* c14 = eta*xi^2/2 - eta*xi/2 + xi^2/4 - xi/4 at the points of gauss-3x3 */
+static const double KS0_c14[9] = {
+    -0.18872983346207417, 0.0, 0.023971831917184144, 0.3436491673103708, 0.0, -0.04364916731037084,
+    0.8760281680828158, 0.0, -0.11127016653792583
+};
+/* c15 = -eta^2*xi + eta*xi at the points of gauss-3x3 */
+static const double KS0_c15[9] = {
+    1.06475800154489, 0.0, -1.06475800154489, 0.0, 0.0, 0.0, -0.13524199845510998, 0.0,
+    0.13524199845510998
+};
+/* c16 = -eta*xi^2 + eta + xi^2/2 - 1/2 at the points of gauss-3x3 */
+static const double KS0_c16[9] = {
+    -0.5098386676965934, -1.2745966692414834, -0.5098386676965934, -0.2, -0.5, -0.2,
+    0.10983866769659335, 0.2745966692414834, 0.10983866769659335
+};
+/* c17 = -eta^2*xi - eta^2/2 + xi + 1/2 at the points of gauss-3x3 */
+static const double KS0_c17[9] = {
+    -0.10983866769659335, 0.2, 0.5098386676965934, -0.2745966692414834, 0.5, 1.2745966692414834,
+    -0.10983866769659335, 0.2, 0.5098386676965934
+};
+/* c18 = -eta*xi^2 - eta*xi at the points of gauss-3x3 */
+static const double KS0_c18[9] = {
+    -0.13524199845510998, 0.0, 1.06475800154489, 0.0, 0.0, 0.0, 0.13524199845510998, 0.0,
+    -1.06475800154489
+};
+/* c19 = -eta^2*xi - eta*xi at the points of gauss-3x3 */
+static const double KS0_c19[9] = {
+    -0.13524199845510998, 0.0, 0.13524199845510998, 0.0, 0.0, 0.0, 1.06475800154489, 0.0,
+    -1.06475800154489
+};
+/* c20 = -eta*xi^2 + eta - xi^2/2 + 1/2 at the points of gauss-3x3 */
+static const double KS0_c20[9] = {
+    -0.10983866769659335, -0.2745966692414834, -0.10983866769659335, 0.2, 0.5, 0.2,
+    0.5098386676965934, 1.2745966692414834, 0.5098386676965934
+};
+/* c21 = -eta^2*xi + eta^2/2 + xi - 1/2 at the points of gauss-3x3 */
+static const double KS0_c21[9] = {
+    -0.5098386676965934, -0.2, 0.10983866769659335, -1.2745966692414834, -0.5, 0.2745966692414834,
+    -0.5098386676965934, -0.2, 0.10983866769659335
+};
+/* c22 = -eta*xi^2 + eta*xi at the points of gauss-3x3 */
+static const double KS0_c22[9] = {
+    1.06475800154489, 0.0, -0.13524199845510998, 0.0, 0.0, 0.0, -1.06475800154489, 0.0,
+    0.13524199845510998
+};
+/* c23 = 2*eta^2*xi - 2*xi at the points of gauss-3x3 */
+static const double KS0_c23[9] = {
+    0.6196773353931867, 0.0, -0.6196773353931867, 1.5491933384829668, 0.0, -1.5491933384829668,
+    0.6196773353931867, 0.0, -0.6196773353931867
+};
+/* c24 = 2*eta*xi^2 - 2*eta at the points of gauss-3x3 */
+static const double KS0_c24[9] = {
+    0.6196773353931867, 1.5491933384829668, 0.6196773353931867, 0.0, 0.0, 0.0, -0.6196773353931867,
+    -1.5491933384829668, -0.6196773353931867
+};
+/* eta = eta at the points of gauss-3x3 */
 static const double KS0_eta[9] = {
     -0.7745966692414834, -0.7745966692414834, -0.7745966692414834, 0.0, 0.0, 0.0,
     0.7745966692414834, 0.7745966692414834, 0.7745966692414834
 };
+/* w = the point weight at the points of gauss-3x3 */
 static const double KS0_w[9] = {
     0.30864197530864196, 0.49382716049382713, 0.30864197530864196, 0.49382716049382713,
     0.7901234567901234, 0.49382716049382713, 0.30864197530864196, 0.49382716049382713,
     0.30864197530864196
 };
+/* xi = xi at the points of gauss-3x3 */
 static const double KS0_xi[9] = {
     -0.7745966692414834, 0.0, 0.7745966692414834, -0.7745966692414834, 0.0, 0.7745966692414834,
     -0.7745966692414834, 0.0, 0.7745966692414834
 };
+/* c0 = eta^2 at the points of gauss-3x3 */
 static const double KR0_c0[9] = {
     0.6, 0.6, 0.6, 0.0, 0.0, 0.0, 0.6, 0.6, 0.6
 };
+/* c1 = 2*xi at the points of gauss-3x3 */
 static const double KR0_c1[9] = {
     -1.5491933384829668, 0.0, 1.5491933384829668, -1.5491933384829668, 0.0, 1.5491933384829668,
     -1.5491933384829668, 0.0, 1.5491933384829668
 };
-static const double KR0_c10[9] = {
-    0.11127016653792583, 0.0, -0.8760281680828158, 0.04364916731037084, 0.0, -0.3436491673103708,
-    -0.023971831917184144, 0.0, 0.18872983346207417
-};
-static const double KR0_c11[9] = {
-    0.023971831917184144, -0.04364916731037084, -0.11127016653792583, 0.0, 0.0, 0.0,
-    -0.18872983346207417, 0.3436491673103708, 0.8760281680828158
-};
-static const double KR0_c12[9] = {
-    0.023971831917184144, 0.0, -0.18872983346207417, -0.04364916731037084, 0.0, 0.3436491673103708,
-    -0.11127016653792583, 0.0, 0.8760281680828158
-};
-static const double KR0_c13[9] = {
-    0.11127016653792583, 0.04364916731037084, -0.023971831917184144, 0.0, 0.0, 0.0,
-    -0.8760281680828158, -0.3436491673103708, 0.18872983346207417
-};
-static const double KR0_c14[9] = {
-    -0.18872983346207417, 0.0, 0.023971831917184144, 0.3436491673103708, 0.0, -0.04364916731037084,
-    0.8760281680828158, 0.0, -0.11127016653792583
-};
-static const double KR0_c15[9] = {
-    1.06475800154489, 0.0, -1.06475800154489, 0.0, 0.0, 0.0, -0.13524199845510998, 0.0,
-    0.13524199845510998
-};
-static const double KR0_c16[9] = {
-    -0.5098386676965934, -1.2745966692414834, -0.5098386676965934, -0.2, -0.5, -0.2,
-    0.10983866769659335, 0.2745966692414834, 0.10983866769659335
-};
-static const double KR0_c17[9] = {
-    -0.10983866769659335, 0.2, 0.5098386676965934, -0.2745966692414834, 0.5, 1.2745966692414834,
-    -0.10983866769659335, 0.2, 0.5098386676965934
-};
-static const double KR0_c18[9] = {
-    -0.13524199845510998, 0.0, 1.06475800154489, 0.0, 0.0, 0.0, 0.13524199845510998, 0.0,
-    -1.06475800154489
-};
-static const double KR0_c19[9] = {
-    -0.13524199845510998, 0.0, 0.13524199845510998, 0.0, 0.0, 0.0, 1.06475800154489, 0.0,
-    -1.06475800154489
-};
+/* c2 = 2*eta*xi at the points of gauss-3x3 */
 static const double KR0_c2[9] = {
     1.2, 0.0, -1.2, 0.0, 0.0, 0.0, -1.2, 0.0, 1.2
 };
-static const double KR0_c20[9] = {
-    -0.10983866769659335, -0.2745966692414834, -0.10983866769659335, 0.2, 0.5, 0.2,
-    0.5098386676965934, 1.2745966692414834, 0.5098386676965934
-};
-static const double KR0_c21[9] = {
-    -0.5098386676965934, -0.2, 0.10983866769659335, -1.2745966692414834, -0.5, 0.2745966692414834,
-    -0.5098386676965934, -0.2, 0.10983866769659335
-};
-static const double KR0_c22[9] = {
-    1.06475800154489, 0.0, -0.13524199845510998, 0.0, 0.0, 0.0, -1.06475800154489, 0.0,
-    0.13524199845510998
-};
-static const double KR0_c23[9] = {
-    0.6196773353931867, 0.0, -0.6196773353931867, 1.5491933384829668, 0.0, -1.5491933384829668,
-    0.6196773353931867, 0.0, -0.6196773353931867
-};
-static const double KR0_c24[9] = {
-    0.6196773353931867, 1.5491933384829668, 0.6196773353931867, 0.0, 0.0, 0.0, -0.6196773353931867,
-    -1.5491933384829668, -0.6196773353931867
-};
+/* c3 = 2*eta^2*xi at the points of gauss-3x3 */
 static const double KR0_c3[9] = {
     -0.9295160030897801, 0.0, 0.9295160030897801, 0.0, 0.0, 0.0, -0.9295160030897801, 0.0,
     0.9295160030897801
 };
+/* c4 = 2*eta at the points of gauss-3x3 */
 static const double KR0_c4[9] = {
     -1.5491933384829668, -1.5491933384829668, -1.5491933384829668, 0.0, 0.0, 0.0,
     1.5491933384829668, 1.5491933384829668, 1.5491933384829668
 };
+/* c5 = xi^2 at the points of gauss-3x3 */
 static const double KR0_c5[9] = {
     0.6, 0.0, 0.6, 0.6, 0.0, 0.6, 0.6, 0.0, 0.6
 };
+/* c6 = 2*eta*xi^2 at the points of gauss-3x3 */
 static const double KR0_c6[9] = {
     -0.9295160030897801, 0.0, -0.9295160030897801, 0.0, 0.0, 0.0, 0.9295160030897801, 0.0,
     0.9295160030897801
 };
+/* c7 = eta^2*xi/2 - eta^2/4 - eta*xi/2 + eta/4 at the points of gauss-3x3 */
 static const double KR0_c7[9] = {
     -0.8760281680828158, -0.3436491673103708, 0.18872983346207417, 0.0, 0.0, 0.0,
     0.11127016653792583, 0.04364916731037084, -0.023971831917184144
 };
+/* c8 = eta*xi^2/2 - eta*xi/2 - xi^2/4 + xi/4 at the points of gauss-3x3 */
 static const double KR0_c8[9] = {
     -0.8760281680828158, 0.0, 0.11127016653792583, -0.3436491673103708, 0.0, 0.04364916731037084,
     0.18872983346207417, 0.0, -0.023971831917184144
 };
+/* c9 = eta^2*xi/2 + eta^2/4 - eta*xi/2 - eta/4 at the points of gauss-3x3 */
 static const double KR0_c9[9] = {
     -0.18872983346207417, 0.3436491673103708, 0.8760281680828158, 0.0, 0.0, 0.0,
     0.023971831917184144, -0.04364916731037084, -0.11127016653792583
 };
+/* c10 = eta*xi^2/2 + eta*xi/2 - xi^2/4 - xi/4 at the points of gauss-3x3 */
+static const double KR0_c10[9] = {
+    0.11127016653792583, 0.0, -0.8760281680828158, 0.04364916731037084, 0.0, -0.3436491673103708,
+    -0.023971831917184144, 0.0, 0.18872983346207417
+};
+/* c11 = eta^2*xi/2 + eta^2/4 + eta*xi/2 + eta/4 at the points of gauss-3x3 */
+static const double KR0_c11[9] = {
+    0.023971831917184144, -0.04364916731037084, -0.11127016653792583, 0.0, 0.0, 0.0,
+    -0.18872983346207417, 0.3436491673103708, 0.8760281680828158
+};
+/* c12 = eta*xi^2/2 + eta*xi/2 + xi^2/4 + xi/4 at the points of gauss-3x3 */
+static const double KR0_c12[9] = {
+    0.023971831917184144, 0.0, -0.18872983346207417, -0.04364916731037084, 0.0, 0.3436491673103708,
+    -0.11127016653792583, 0.0, 0.8760281680828158
+};
+/* c13 = eta^2*xi/2 - eta^2/4 + eta*xi/2 - eta/4 at the points of gauss-3x3 */
+static const double KR0_c13[9] = {
+    0.11127016653792583, 0.04364916731037084, -0.023971831917184144, 0.0, 0.0, 0.0,
+    -0.8760281680828158, -0.3436491673103708, 0.18872983346207417
+};
+/* c14 = eta*xi^2/2 - eta*xi/2 + xi^2/4 - xi/4 at the points of gauss-3x3 */
+static const double KR0_c14[9] = {
+    -0.18872983346207417, 0.0, 0.023971831917184144, 0.3436491673103708, 0.0, -0.04364916731037084,
+    0.8760281680828158, 0.0, -0.11127016653792583
+};
+/* c15 = -eta^2*xi + eta*xi at the points of gauss-3x3 */
+static const double KR0_c15[9] = {
+    1.06475800154489, 0.0, -1.06475800154489, 0.0, 0.0, 0.0, -0.13524199845510998, 0.0,
+    0.13524199845510998
+};
+/* c16 = -eta*xi^2 + eta + xi^2/2 - 1/2 at the points of gauss-3x3 */
+static const double KR0_c16[9] = {
+    -0.5098386676965934, -1.2745966692414834, -0.5098386676965934, -0.2, -0.5, -0.2,
+    0.10983866769659335, 0.2745966692414834, 0.10983866769659335
+};
+/* c17 = -eta^2*xi - eta^2/2 + xi + 1/2 at the points of gauss-3x3 */
+static const double KR0_c17[9] = {
+    -0.10983866769659335, 0.2, 0.5098386676965934, -0.2745966692414834, 0.5, 1.2745966692414834,
+    -0.10983866769659335, 0.2, 0.5098386676965934
+};
+/* c18 = -eta*xi^2 - eta*xi at the points of gauss-3x3 */
+static const double KR0_c18[9] = {
+    -0.13524199845510998, 0.0, 1.06475800154489, 0.0, 0.0, 0.0, 0.13524199845510998, 0.0,
+    -1.06475800154489
+};
+/* c19 = -eta^2*xi - eta*xi at the points of gauss-3x3 */
+static const double KR0_c19[9] = {
+    -0.13524199845510998, 0.0, 0.13524199845510998, 0.0, 0.0, 0.0, 1.06475800154489, 0.0,
+    -1.06475800154489
+};
+/* c20 = -eta*xi^2 + eta - xi^2/2 + 1/2 at the points of gauss-3x3 */
+static const double KR0_c20[9] = {
+    -0.10983866769659335, -0.2745966692414834, -0.10983866769659335, 0.2, 0.5, 0.2,
+    0.5098386676965934, 1.2745966692414834, 0.5098386676965934
+};
+/* c21 = -eta^2*xi + eta^2/2 + xi - 1/2 at the points of gauss-3x3 */
+static const double KR0_c21[9] = {
+    -0.5098386676965934, -0.2, 0.10983866769659335, -1.2745966692414834, -0.5, 0.2745966692414834,
+    -0.5098386676965934, -0.2, 0.10983866769659335
+};
+/* c22 = -eta*xi^2 + eta*xi at the points of gauss-3x3 */
+static const double KR0_c22[9] = {
+    1.06475800154489, 0.0, -0.13524199845510998, 0.0, 0.0, 0.0, -1.06475800154489, 0.0,
+    0.13524199845510998
+};
+/* c23 = 2*eta^2*xi - 2*xi at the points of gauss-3x3 */
+static const double KR0_c23[9] = {
+    0.6196773353931867, 0.0, -0.6196773353931867, 1.5491933384829668, 0.0, -1.5491933384829668,
+    0.6196773353931867, 0.0, -0.6196773353931867
+};
+/* c24 = 2*eta*xi^2 - 2*eta at the points of gauss-3x3 */
+static const double KR0_c24[9] = {
+    0.6196773353931867, 1.5491933384829668, 0.6196773353931867, 0.0, 0.0, 0.0, -0.6196773353931867,
+    -1.5491933384829668, -0.6196773353931867
+};
+/* eta = eta at the points of gauss-3x3 */
 static const double KR0_eta[9] = {
     -0.7745966692414834, -0.7745966692414834, -0.7745966692414834, 0.0, 0.0, 0.0,
     0.7745966692414834, 0.7745966692414834, 0.7745966692414834
 };
+/* w = the point weight at the points of gauss-3x3 */
 static const double KR0_w[9] = {
     0.30864197530864196, 0.49382716049382713, 0.30864197530864196, 0.49382716049382713,
     0.7901234567901234, 0.49382716049382713, 0.30864197530864196, 0.49382716049382713,
     0.30864197530864196
 };
+/* xi = xi at the points of gauss-3x3 */
 static const double KR0_xi[9] = {
     -0.7745966692414834, 0.0, 0.7745966692414834, -0.7745966692414834, 0.0, 0.7745966692414834,
     -0.7745966692414834, 0.0, 0.7745966692414834
@@ -380,6 +445,14 @@ DERIVE_INLINE void q9_bbar_plane_stress_stiffness_body(const double *restrict xy
     for (int p = 0; p < 9; ++p) {   /* gauss-3x3: loop over the 9 points */
         const double c0 = KS0_c0[p];
         const double c1 = KS0_c1[p];
+        const double c2 = KS0_c2[p];
+        const double c3 = KS0_c3[p];
+        const double c4 = KS0_c4[p];
+        const double c5 = KS0_c5[p];
+        const double c6 = KS0_c6[p];
+        const double c7 = KS0_c7[p];
+        const double c8 = KS0_c8[p];
+        const double c9 = KS0_c9[p];
         const double c10 = KS0_c10[p];
         const double c11 = KS0_c11[p];
         const double c12 = KS0_c12[p];
@@ -390,19 +463,11 @@ DERIVE_INLINE void q9_bbar_plane_stress_stiffness_body(const double *restrict xy
         const double c17 = KS0_c17[p];
         const double c18 = KS0_c18[p];
         const double c19 = KS0_c19[p];
-        const double c2 = KS0_c2[p];
         const double c20 = KS0_c20[p];
         const double c21 = KS0_c21[p];
         const double c22 = KS0_c22[p];
         const double c23 = KS0_c23[p];
         const double c24 = KS0_c24[p];
-        const double c3 = KS0_c3[p];
-        const double c4 = KS0_c4[p];
-        const double c5 = KS0_c5[p];
-        const double c6 = KS0_c6[p];
-        const double c7 = KS0_c7[p];
-        const double c8 = KS0_c8[p];
-        const double c9 = KS0_c9[p];
         const double eta = KS0_eta[p];
         const double w = KS0_w[p];
         const double xi = KS0_xi[p];
@@ -1290,6 +1355,14 @@ static inline void q9_bbar_plane_stress_recovery_body(const double *restrict xy,
     for (int p = 0; p < 9; ++p) {   /* gauss-3x3: loop over the 9 points */
         const double c0 = KR0_c0[p];
         const double c1 = KR0_c1[p];
+        const double c2 = KR0_c2[p];
+        const double c3 = KR0_c3[p];
+        const double c4 = KR0_c4[p];
+        const double c5 = KR0_c5[p];
+        const double c6 = KR0_c6[p];
+        const double c7 = KR0_c7[p];
+        const double c8 = KR0_c8[p];
+        const double c9 = KR0_c9[p];
         const double c10 = KR0_c10[p];
         const double c11 = KR0_c11[p];
         const double c12 = KR0_c12[p];
@@ -1300,19 +1373,11 @@ static inline void q9_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double c17 = KR0_c17[p];
         const double c18 = KR0_c18[p];
         const double c19 = KR0_c19[p];
-        const double c2 = KR0_c2[p];
         const double c20 = KR0_c20[p];
         const double c21 = KR0_c21[p];
         const double c22 = KR0_c22[p];
         const double c23 = KR0_c23[p];
         const double c24 = KR0_c24[p];
-        const double c3 = KR0_c3[p];
-        const double c4 = KR0_c4[p];
-        const double c5 = KR0_c5[p];
-        const double c6 = KR0_c6[p];
-        const double c7 = KR0_c7[p];
-        const double c8 = KR0_c8[p];
-        const double c9 = KR0_c9[p];
         const double eta = KR0_eta[p];
         const double w = KR0_w[p];
         const double xi = KR0_xi[p];

@@ -1,28 +1,34 @@
 /*
  * derive generated kernel: Q9 reduced plane-stress
- * 
+ *
  * element      Q9, 9 nodes, 18 DOFs interleaved u1, v1, u2, v2, ...
- * formulation  displacement element, uniformly reduced integration [standard displacement formulation]
+ * formulation  displacement element, uniformly reduced integration [standard displacement
+ *              formulation]
  * integration  B^T D B: gauss-2x2 (4 points)
  * flops        stiffness 3529, validity 366, recovery 1380 per element (add, mul, div, sqrt)
- * 
+ *
  * arguments (units-agnostic; any consistent set of units):
- *   xy      nodal coordinates, shape (n, 9, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+ *   xy      nodal coordinates, shape (n, 9, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+ *           node i+1 (counter-clockwise corners first, then mid-side, then interior)
  *   E       Young's modulus (> 0), scalar
  *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
  *   t       thickness t (the out-of-plane thickness)
  *   u       nodal displacements for recovery, shape (n, 18), interleaved u1, v1, u2, v2, ...
  *   K       stiffness, shape (n, 18, 18), DOFs interleaved u1, v1, u2, v2, ...; symmetric
- *   detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted or degenerate element
- *   strain  recovery: strain at the 9 points of gauss-3x3, shape (n, 9, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
- *   stress  recovery: stress D strain at the same points, shape (n, 9, 3), [sigma_xx, sigma_yy, tau_xy]
- * 
+ *   detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted
+ *            or degenerate element
+ *   strain  recovery: strain at the 9 points of gauss-3x3, shape (n, 9, 3), Voigt [eps_xx, eps_yy,
+ *           gamma_xy] (engineering shear)
+ *   stress  recovery: stress D strain at the same points, shape (n, 9, 3), [sigma_xx, sigma_yy,
+ *           tau_xy]
+ *
  * The kernels do not check their inputs; derive.kernel() checks shapes, finite
  * coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
  * generator    derive.codegen 1.0; regenerate with
  *              derive kernel Q9 --variant reduced --state plane-stress --lang c
  *
  * C99.  Compile e.g. with: cc -O3 -march=native -fopenmp-simd -c q9_reduced_plane_stress.c
+ * (with GCC add -fno-tree-slp-vectorize: same speed, much shorter compile times).
  * Data layout: every array is dense, row-major (C order), float64.  The batch kernel
  * copies 8 elements at a time into element-innermost scratch arrays so that the
  * per-element body is vectorised across elements (one SIMD lane per element).
@@ -62,87 +68,115 @@
 #endif
 
 /* point tables of the rules evaluated in a loop: shape-function derivatives, weights, ... */
+/* c0 = eta^2 at the points of gauss-2x2 */
 static const double KS0_c0[4] = {
     0.3333333333333333, 0.3333333333333333, 0.3333333333333333, 0.3333333333333333
 };
+/* c1 = 2*xi at the points of gauss-2x2 */
 static const double KS0_c1[4] = {
     -1.1547005383792515, 1.1547005383792515, -1.1547005383792515, 1.1547005383792515
 };
-static const double KS0_c10[4] = {
-    0.13144585576580214, -0.4905626121623441, -0.009437387837655931, 0.03522081090086452
-};
-static const double KS0_c11[4] = {
-    0.009437387837655931, -0.13144585576580214, -0.03522081090086452, 0.4905626121623441
-};
-static const double KS0_c12[4] = {
-    0.009437387837655931, -0.03522081090086452, -0.13144585576580214, 0.4905626121623441
-};
-static const double KS0_c13[4] = {
-    0.13144585576580214, -0.009437387837655931, -0.4905626121623441, 0.03522081090086452
-};
-static const double KS0_c14[4] = {
-    -0.03522081090086452, 0.009437387837655931, 0.4905626121623441, -0.13144585576580214
-};
-static const double KS0_c15[4] = {
-    0.5257834230632086, -0.5257834230632086, -0.14088324360345808, 0.14088324360345808
-};
-static const double KS0_c16[4] = {
-    -0.7182335127930839, -0.7182335127930839, 0.051566846126417175, 0.051566846126417175
-};
-static const double KS0_c17[4] = {
-    -0.051566846126417175, 0.7182335127930839, -0.051566846126417175, 0.7182335127930839
-};
-static const double KS0_c18[4] = {
-    -0.14088324360345808, 0.5257834230632086, 0.14088324360345808, -0.5257834230632086
-};
-static const double KS0_c19[4] = {
-    -0.14088324360345808, 0.14088324360345808, 0.5257834230632086, -0.5257834230632086
-};
+/* c2 = 2*eta*xi at the points of gauss-2x2 */
 static const double KS0_c2[4] = {
     0.6666666666666666, -0.6666666666666666, -0.6666666666666666, 0.6666666666666666
 };
-static const double KS0_c20[4] = {
-    -0.051566846126417175, -0.051566846126417175, 0.7182335127930839, 0.7182335127930839
-};
-static const double KS0_c21[4] = {
-    -0.7182335127930839, 0.051566846126417175, -0.7182335127930839, 0.051566846126417175
-};
-static const double KS0_c22[4] = {
-    0.5257834230632086, -0.14088324360345808, -0.5257834230632086, 0.14088324360345808
-};
-static const double KS0_c23[4] = {
-    0.769800358919501, -0.769800358919501, 0.769800358919501, -0.769800358919501
-};
-static const double KS0_c24[4] = {
-    0.769800358919501, 0.769800358919501, -0.769800358919501, -0.769800358919501
-};
+/* c3 = 2*eta^2*xi at the points of gauss-2x2 */
 static const double KS0_c3[4] = {
     -0.3849001794597505, 0.3849001794597505, -0.3849001794597505, 0.3849001794597505
 };
+/* c4 = 2*eta at the points of gauss-2x2 */
 static const double KS0_c4[4] = {
     -1.1547005383792515, -1.1547005383792515, 1.1547005383792515, 1.1547005383792515
 };
+/* c5 = xi^2 at the points of gauss-2x2 */
 static const double KS0_c5[4] = {
     0.3333333333333333, 0.3333333333333333, 0.3333333333333333, 0.3333333333333333
 };
+/* c6 = 2*eta*xi^2 at the points of gauss-2x2 */
 static const double KS0_c6[4] = {
     -0.3849001794597505, -0.3849001794597505, 0.3849001794597505, 0.3849001794597505
 };
+/* c7 = eta^2*xi/2 - eta^2/4 - eta*xi/2 + eta/4 at the points of gauss-2x2 */
 static const double KS0_c7[4] = {
     -0.4905626121623441, 0.03522081090086452, 0.13144585576580214, -0.009437387837655931
 };
+/* c8 = eta*xi^2/2 - eta*xi/2 - xi^2/4 + xi/4 at the points of gauss-2x2 */
 static const double KS0_c8[4] = {
     -0.4905626121623441, 0.13144585576580214, 0.03522081090086452, -0.009437387837655931
 };
+/* c9 = eta^2*xi/2 + eta^2/4 - eta*xi/2 - eta/4 at the points of gauss-2x2 */
 static const double KS0_c9[4] = {
     -0.03522081090086452, 0.4905626121623441, 0.009437387837655931, -0.13144585576580214
 };
+/* c10 = eta*xi^2/2 + eta*xi/2 - xi^2/4 - xi/4 at the points of gauss-2x2 */
+static const double KS0_c10[4] = {
+    0.13144585576580214, -0.4905626121623441, -0.009437387837655931, 0.03522081090086452
+};
+/* c11 = eta^2*xi/2 + eta^2/4 + eta*xi/2 + eta/4 at the points of gauss-2x2 */
+static const double KS0_c11[4] = {
+    0.009437387837655931, -0.13144585576580214, -0.03522081090086452, 0.4905626121623441
+};
+/* c12 = eta*xi^2/2 + eta*xi/2 + xi^2/4 + xi/4 at the points of gauss-2x2 */
+static const double KS0_c12[4] = {
+    0.009437387837655931, -0.03522081090086452, -0.13144585576580214, 0.4905626121623441
+};
+/* c13 = eta^2*xi/2 - eta^2/4 + eta*xi/2 - eta/4 at the points of gauss-2x2 */
+static const double KS0_c13[4] = {
+    0.13144585576580214, -0.009437387837655931, -0.4905626121623441, 0.03522081090086452
+};
+/* c14 = eta*xi^2/2 - eta*xi/2 + xi^2/4 - xi/4 at the points of gauss-2x2 */
+static const double KS0_c14[4] = {
+    -0.03522081090086452, 0.009437387837655931, 0.4905626121623441, -0.13144585576580214
+};
+/* c15 = -eta^2*xi + eta*xi at the points of gauss-2x2 */
+static const double KS0_c15[4] = {
+    0.5257834230632086, -0.5257834230632086, -0.14088324360345808, 0.14088324360345808
+};
+/* c16 = -eta*xi^2 + eta + xi^2/2 - 1/2 at the points of gauss-2x2 */
+static const double KS0_c16[4] = {
+    -0.7182335127930839, -0.7182335127930839, 0.051566846126417175, 0.051566846126417175
+};
+/* c17 = -eta^2*xi - eta^2/2 + xi + 1/2 at the points of gauss-2x2 */
+static const double KS0_c17[4] = {
+    -0.051566846126417175, 0.7182335127930839, -0.051566846126417175, 0.7182335127930839
+};
+/* c18 = -eta*xi^2 - eta*xi at the points of gauss-2x2 */
+static const double KS0_c18[4] = {
+    -0.14088324360345808, 0.5257834230632086, 0.14088324360345808, -0.5257834230632086
+};
+/* c19 = -eta^2*xi - eta*xi at the points of gauss-2x2 */
+static const double KS0_c19[4] = {
+    -0.14088324360345808, 0.14088324360345808, 0.5257834230632086, -0.5257834230632086
+};
+/* c20 = -eta*xi^2 + eta - xi^2/2 + 1/2 at the points of gauss-2x2 */
+static const double KS0_c20[4] = {
+    -0.051566846126417175, -0.051566846126417175, 0.7182335127930839, 0.7182335127930839
+};
+/* c21 = -eta^2*xi + eta^2/2 + xi - 1/2 at the points of gauss-2x2 */
+static const double KS0_c21[4] = {
+    -0.7182335127930839, 0.051566846126417175, -0.7182335127930839, 0.051566846126417175
+};
+/* c22 = -eta*xi^2 + eta*xi at the points of gauss-2x2 */
+static const double KS0_c22[4] = {
+    0.5257834230632086, -0.14088324360345808, -0.5257834230632086, 0.14088324360345808
+};
+/* c23 = 2*eta^2*xi - 2*xi at the points of gauss-2x2 */
+static const double KS0_c23[4] = {
+    0.769800358919501, -0.769800358919501, 0.769800358919501, -0.769800358919501
+};
+/* c24 = 2*eta*xi^2 - 2*eta at the points of gauss-2x2 */
+static const double KS0_c24[4] = {
+    0.769800358919501, 0.769800358919501, -0.769800358919501, -0.769800358919501
+};
+/* eta = eta at the points of gauss-2x2 */
 static const double KS0_eta[4] = {
     -0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257
 };
+/* w = the point weight at the points of gauss-2x2 */
 static const double KS0_w[4] = {
     1.0, 1.0, 1.0, 1.0
 };
+/* xi = xi at the points of gauss-2x2 */
 static const double KS0_xi[4] = {
     -0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257
 };
@@ -234,6 +268,14 @@ DERIVE_INLINE void q9_reduced_plane_stress_stiffness_body(const double *restrict
     for (int p = 0; p < 4; ++p) {   /* gauss-2x2: loop over the 4 points */
         const double c0 = KS0_c0[p];
         const double c1 = KS0_c1[p];
+        const double c2 = KS0_c2[p];
+        const double c3 = KS0_c3[p];
+        const double c4 = KS0_c4[p];
+        const double c5 = KS0_c5[p];
+        const double c6 = KS0_c6[p];
+        const double c7 = KS0_c7[p];
+        const double c8 = KS0_c8[p];
+        const double c9 = KS0_c9[p];
         const double c10 = KS0_c10[p];
         const double c11 = KS0_c11[p];
         const double c12 = KS0_c12[p];
@@ -244,19 +286,11 @@ DERIVE_INLINE void q9_reduced_plane_stress_stiffness_body(const double *restrict
         const double c17 = KS0_c17[p];
         const double c18 = KS0_c18[p];
         const double c19 = KS0_c19[p];
-        const double c2 = KS0_c2[p];
         const double c20 = KS0_c20[p];
         const double c21 = KS0_c21[p];
         const double c22 = KS0_c22[p];
         const double c23 = KS0_c23[p];
         const double c24 = KS0_c24[p];
-        const double c3 = KS0_c3[p];
-        const double c4 = KS0_c4[p];
-        const double c5 = KS0_c5[p];
-        const double c6 = KS0_c6[p];
-        const double c7 = KS0_c7[p];
-        const double c8 = KS0_c8[p];
-        const double c9 = KS0_c9[p];
         const double eta = KS0_eta[p];
         const double w = KS0_w[p];
         const double xi = KS0_xi[p];

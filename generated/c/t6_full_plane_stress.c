@@ -1,28 +1,33 @@
 /*
  * derive generated kernel: T6 full plane-stress
- * 
+ *
  * element      T6, 6 nodes, 12 DOFs interleaved u1, v1, u2, v2, ...
  * formulation  displacement element, full integration [standard displacement formulation]
  * integration  B^T D B: triangle-d2 (3 points)
  * flops        stiffness 1294, validity 114, recovery 384 per element (add, mul, div, sqrt)
- * 
+ *
  * arguments (units-agnostic; any consistent set of units):
- *   xy      nodal coordinates, shape (n, 6, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+ *   xy      nodal coordinates, shape (n, 6, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+ *           node i+1 (counter-clockwise corners first, then mid-side, then interior)
  *   E       Young's modulus (> 0), scalar
  *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
  *   t       thickness t (the out-of-plane thickness)
  *   u       nodal displacements for recovery, shape (n, 12), interleaved u1, v1, u2, v2, ...
  *   K       stiffness, shape (n, 12, 12), DOFs interleaved u1, v1, u2, v2, ...; symmetric
- *   detJ_min validity: min det J over the points of triangle-d2, shape (n,); <= 0 means an inverted or degenerate element
- *   strain  recovery: strain at the 3 points of triangle-d2, shape (n, 3, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
- *   stress  recovery: stress D strain at the same points, shape (n, 3, 3), [sigma_xx, sigma_yy, tau_xy]
- * 
+ *   detJ_min validity: min det J over the points of triangle-d2, shape (n,); <= 0 means an
+ *            inverted or degenerate element
+ *   strain  recovery: strain at the 3 points of triangle-d2, shape (n, 3, 3), Voigt [eps_xx,
+ *           eps_yy, gamma_xy] (engineering shear)
+ *   stress  recovery: stress D strain at the same points, shape (n, 3, 3), [sigma_xx, sigma_yy,
+ *           tau_xy]
+ *
  * The kernels do not check their inputs; derive.kernel() checks shapes, finite
  * coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
  * generator    derive.codegen 1.0; regenerate with
  *              derive kernel T6 --variant full --state plane-stress --lang c
  *
  * C99.  Compile e.g. with: cc -O3 -march=native -fopenmp-simd -c t6_full_plane_stress.c
+ * (with GCC add -fno-tree-slp-vectorize: same speed, much shorter compile times).
  * Data layout: every array is dense, row-major (C order), float64.  The batch kernel
  * copies 8 elements at a time into element-innermost scratch arrays so that the
  * per-element body is vectorised across elements (one SIMD lane per element).
@@ -62,45 +67,59 @@
 #endif
 
 /* point tables of the rules evaluated in a loop: shape-function derivatives, weights, ... */
+/* c0 = 2*xi at the points of triangle-d2 */
 static const double KS0_c0[3] = {
     0.3333333333333333, 1.3333333333333333, 0.3333333333333333
 };
+/* c1 = 2*eta at the points of triangle-d2 */
 static const double KS0_c1[3] = {
     0.3333333333333333, 0.3333333333333333, 1.3333333333333333
 };
-static const double KS0_c10[3] = {
-    2.0, 0.0, -2.0
-};
+/* c2 = 4*eta + 4*xi - 3 at the points of triangle-d2 */
 static const double KS0_c2[3] = {
     -1.6666666666666667, 0.3333333333333333, 0.3333333333333333
 };
+/* c3 = 4*xi - 1 at the points of triangle-d2 */
 static const double KS0_c3[3] = {
     -0.3333333333333333, 1.6666666666666667, -0.3333333333333333
 };
+/* c4 = 4*eta - 1 at the points of triangle-d2 */
 static const double KS0_c4[3] = {
     -0.3333333333333333, -0.3333333333333333, 1.6666666666666667
 };
+/* c5 = -4*eta - 8*xi + 4 at the points of triangle-d2 */
 static const double KS0_c5[3] = {
     2.0, -2.0, 0.0
 };
+/* c6 = -4*xi at the points of triangle-d2 */
 static const double KS0_c6[3] = {
     -0.6666666666666666, -2.6666666666666665, -0.6666666666666666
 };
+/* c7 = 4*eta at the points of triangle-d2 */
 static const double KS0_c7[3] = {
     0.6666666666666666, 0.6666666666666666, 2.6666666666666665
 };
+/* c8 = 4*xi at the points of triangle-d2 */
 static const double KS0_c8[3] = {
     0.6666666666666666, 2.6666666666666665, 0.6666666666666666
 };
+/* c9 = -4*eta at the points of triangle-d2 */
 static const double KS0_c9[3] = {
     -0.6666666666666666, -0.6666666666666666, -2.6666666666666665
 };
+/* c10 = -8*eta - 4*xi + 4 at the points of triangle-d2 */
+static const double KS0_c10[3] = {
+    2.0, 0.0, -2.0
+};
+/* eta = eta at the points of triangle-d2 */
 static const double KS0_eta[3] = {
     0.16666666666666666, 0.16666666666666666, 0.6666666666666666
 };
+/* w = the point weight at the points of triangle-d2 */
 static const double KS0_w[3] = {
     0.16666666666666666, 0.16666666666666666, 0.16666666666666666
 };
+/* xi = xi at the points of triangle-d2 */
 static const double KS0_xi[3] = {
     0.16666666666666666, 0.6666666666666666, 0.16666666666666666
 };
@@ -164,7 +183,6 @@ DERIVE_INLINE void t6_full_plane_stress_stiffness_body(const double *restrict xy
     for (int p = 0; p < 3; ++p) {   /* triangle-d2: loop over the 3 points */
         const double c0 = KS0_c0[p];
         const double c1 = KS0_c1[p];
-        const double c10 = KS0_c10[p];
         const double c2 = KS0_c2[p];
         const double c3 = KS0_c3[p];
         const double c4 = KS0_c4[p];
@@ -173,6 +191,7 @@ DERIVE_INLINE void t6_full_plane_stress_stiffness_body(const double *restrict xy
         const double c7 = KS0_c7[p];
         const double c8 = KS0_c8[p];
         const double c9 = KS0_c9[p];
+        const double c10 = KS0_c10[p];
         const double eta = KS0_eta[p];
         const double w = KS0_w[p];
         const double xi = KS0_xi[p];

@@ -1,21 +1,29 @@
 ! derive generated kernel: Q4 bbar plane-stress
 !
 ! element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
-! formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed) [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
-! integration  B^T D_dev B: gauss-2x2 (4 points); B^T m (g): gauss-2x2 (4 points); -1/kappa (-V/kappa): gauss-2x2 (4 points)
-! internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)
+! formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed)
+!              [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
+! integration  B^T D_dev B: gauss-2x2 (4 points); B^T m (g): gauss-2x2 (4 points); -1/kappa
+!              (-V/kappa): gauss-2x2 (4 points)
+! internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+!              (unrolled factorisation of K_aa, no pivoting)
 ! flops        stiffness 1144, validity 142, recovery 807 per element (add, mul, div, sqrt)
 !
 ! arguments (units-agnostic; any consistent set of units):
-!   xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+!   xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+!           node i+1 (counter-clockwise corners first, then mid-side, then interior)
 !   E       Young's modulus (> 0), scalar
 !   nu      Poisson's ratio (-1 < nu < 0.5), scalar
 !   t       thickness t (the out-of-plane thickness)
 !   u       nodal displacements for recovery, shape (n, 8), interleaved u1, v1, u2, v2, ...
-!   K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1 internal unknowns are condensed
-!   detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted or degenerate element
-!   strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
-!   stress  recovery: stress D strain at the same points, shape (n, 4, 3), [sigma_xx, sigma_yy, tau_xy]
+!   K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1
+!           internal unknowns are condensed
+!   detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted
+!            or degenerate element
+!   strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 3), Voigt [eps_xx, eps_yy,
+!           gamma_xy] (engineering shear)
+!   stress  recovery: stress D strain at the same points, shape (n, 4, 3), [sigma_xx, sigma_yy,
+!           tau_xy]
 !
 ! The kernels do not check their inputs; derive.kernel() checks shapes, finite
 ! coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
@@ -42,25 +50,36 @@ contains
     real(dp), intent(in) :: xy(2, 4)
     real(dp), value, intent(in) :: E, nu, t
     real(dp), intent(out) :: K(8, 8)
+    ! c0 = eta/4 - 1/4 at the points of gauss-2x2
     real(dp), parameter :: KS0_c0(4) = [-0.39433756729740643_dp, -0.39433756729740643_dp, &
         -0.10566243270259355_dp, -0.10566243270259355_dp]
+    ! c1 = xi/4 - 1/4 at the points of gauss-2x2
     real(dp), parameter :: KS0_c1(4) = [-0.39433756729740643_dp, -0.10566243270259355_dp, &
         -0.39433756729740643_dp, -0.10566243270259355_dp]
+    ! c2 = 1/4 - eta/4 at the points of gauss-2x2
     real(dp), parameter :: KS0_c2(4) = [0.39433756729740643_dp, 0.39433756729740643_dp, &
         0.10566243270259355_dp, 0.10566243270259355_dp]
+    ! c3 = -xi/4 - 1/4 at the points of gauss-2x2
     real(dp), parameter :: KS0_c3(4) = [-0.10566243270259355_dp, -0.39433756729740643_dp, &
         -0.10566243270259355_dp, -0.39433756729740643_dp]
+    ! c4 = eta/4 + 1/4 at the points of gauss-2x2
     real(dp), parameter :: KS0_c4(4) = [0.10566243270259355_dp, 0.10566243270259355_dp, &
         0.39433756729740643_dp, 0.39433756729740643_dp]
+    ! c5 = xi/4 + 1/4 at the points of gauss-2x2
     real(dp), parameter :: KS0_c5(4) = [0.10566243270259355_dp, 0.39433756729740643_dp, &
         0.10566243270259355_dp, 0.39433756729740643_dp]
+    ! c6 = -eta/4 - 1/4 at the points of gauss-2x2
     real(dp), parameter :: KS0_c6(4) = [-0.10566243270259355_dp, -0.10566243270259355_dp, &
         -0.39433756729740643_dp, -0.39433756729740643_dp]
+    ! c7 = 1/4 - xi/4 at the points of gauss-2x2
     real(dp), parameter :: KS0_c7(4) = [0.39433756729740643_dp, 0.10566243270259355_dp, &
         0.39433756729740643_dp, 0.10566243270259355_dp]
+    ! eta = eta at the points of gauss-2x2
     real(dp), parameter :: KS0_eta(4) = [-0.5773502691896257_dp, -0.5773502691896257_dp, &
         0.5773502691896257_dp, 0.5773502691896257_dp]
+    ! w = the point weight at the points of gauss-2x2
     real(dp), parameter :: KS0_w(4) = [1.0_dp, 1.0_dp, 1.0_dp, 1.0_dp]
+    ! xi = xi at the points of gauss-2x2
     real(dp), parameter :: KS0_xi(4) = [-0.5773502691896257_dp, 0.5773502691896257_dp, &
         -0.5773502691896257_dp, 0.5773502691896257_dp]
     real(dp) :: x1, y1, x2, y2, x3, y3, x4, y4, m0, m1, m2, m3, gx_0_1, gx_1_0, gx_1_1, gy_0_1, gy_1_0

@@ -1,21 +1,29 @@
 ! derive generated kernel: Q4 incompatible plane-stress
 !
 ! element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
-! formulation  incompatible bubble modes, own Jacobian (fails the patch test off parallelograms) [Wilson, Taylor, Doherty & Ghaboussi (1973)]
-! integration  B^T D B: gauss-2x2 (4 points); B^T D G: gauss-2x2 (4 points); G^T D G: gauss-2x2 (4 points)
-! internal     4 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)
+! formulation  incompatible bubble modes, own Jacobian (fails the patch test off parallelograms)
+!              [Wilson, Taylor, Doherty & Ghaboussi (1973)]
+! integration  B^T D B: gauss-2x2 (4 points); B^T D G: gauss-2x2 (4 points); G^T D G: gauss-2x2 (4
+!              points)
+! internal     4 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+!              (unrolled factorisation of K_aa, no pivoting)
 ! flops        stiffness 2427, validity 108, recovery 1691 per element (add, mul, div, sqrt)
 !
 ! arguments (units-agnostic; any consistent set of units):
-!   xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+!   xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+!           node i+1 (counter-clockwise corners first, then mid-side, then interior)
 !   E       Young's modulus (> 0), scalar
 !   nu      Poisson's ratio (-1 < nu < 0.5), scalar
 !   t       thickness t (the out-of-plane thickness)
 !   u       nodal displacements for recovery, shape (n, 8), interleaved u1, v1, u2, v2, ...
-!   K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 4 internal unknowns are condensed
-!   detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted or degenerate element
-!   strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
-!   stress  recovery: stress D strain at the same points, shape (n, 4, 3), [sigma_xx, sigma_yy, tau_xy]
+!   K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 4
+!           internal unknowns are condensed
+!   detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted
+!            or degenerate element
+!   strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 3), Voigt [eps_xx, eps_yy,
+!           gamma_xy] (engineering shear)
+!   stress  recovery: stress D strain at the same points, shape (n, 4, 3), [sigma_xx, sigma_yy,
+!           tau_xy]
 !
 ! The kernels do not check their inputs; derive.kernel() checks shapes, finite
 ! coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
@@ -42,29 +50,42 @@ contains
     real(dp), intent(in) :: xy(2, 4)
     real(dp), value, intent(in) :: E, nu, t
     real(dp), intent(out) :: K(8, 8)
+    ! c0 = eta/4 - 1/4 at the points of gauss-2x2
     real(dp), parameter :: KS0_c0(4) = [-0.39433756729740643_dp, -0.39433756729740643_dp, &
         -0.10566243270259355_dp, -0.10566243270259355_dp]
+    ! c1 = xi/4 - 1/4 at the points of gauss-2x2
     real(dp), parameter :: KS0_c1(4) = [-0.39433756729740643_dp, -0.10566243270259355_dp, &
         -0.39433756729740643_dp, -0.10566243270259355_dp]
-    real(dp), parameter :: KS0_c10(4) = [1.1547005383792515_dp, 1.1547005383792515_dp, &
-        -1.1547005383792515_dp, -1.1547005383792515_dp]
+    ! c2 = 1/4 - eta/4 at the points of gauss-2x2
     real(dp), parameter :: KS0_c2(4) = [0.39433756729740643_dp, 0.39433756729740643_dp, &
         0.10566243270259355_dp, 0.10566243270259355_dp]
+    ! c3 = -xi/4 - 1/4 at the points of gauss-2x2
     real(dp), parameter :: KS0_c3(4) = [-0.10566243270259355_dp, -0.39433756729740643_dp, &
         -0.10566243270259355_dp, -0.39433756729740643_dp]
+    ! c4 = eta/4 + 1/4 at the points of gauss-2x2
     real(dp), parameter :: KS0_c4(4) = [0.10566243270259355_dp, 0.10566243270259355_dp, &
         0.39433756729740643_dp, 0.39433756729740643_dp]
+    ! c5 = xi/4 + 1/4 at the points of gauss-2x2
     real(dp), parameter :: KS0_c5(4) = [0.10566243270259355_dp, 0.39433756729740643_dp, &
         0.10566243270259355_dp, 0.39433756729740643_dp]
+    ! c6 = -eta/4 - 1/4 at the points of gauss-2x2
     real(dp), parameter :: KS0_c6(4) = [-0.10566243270259355_dp, -0.10566243270259355_dp, &
         -0.39433756729740643_dp, -0.39433756729740643_dp]
+    ! c7 = 1/4 - xi/4 at the points of gauss-2x2
     real(dp), parameter :: KS0_c7(4) = [0.39433756729740643_dp, 0.10566243270259355_dp, &
         0.39433756729740643_dp, 0.10566243270259355_dp]
+    ! c9 = -2*xi at the points of gauss-2x2
     real(dp), parameter :: KS0_c9(4) = [1.1547005383792515_dp, -1.1547005383792515_dp, &
         1.1547005383792515_dp, -1.1547005383792515_dp]
+    ! c10 = -2*eta at the points of gauss-2x2
+    real(dp), parameter :: KS0_c10(4) = [1.1547005383792515_dp, 1.1547005383792515_dp, &
+        -1.1547005383792515_dp, -1.1547005383792515_dp]
+    ! eta = eta at the points of gauss-2x2
     real(dp), parameter :: KS0_eta(4) = [-0.5773502691896257_dp, -0.5773502691896257_dp, &
         0.5773502691896257_dp, 0.5773502691896257_dp]
+    ! w = the point weight at the points of gauss-2x2
     real(dp), parameter :: KS0_w(4) = [1.0_dp, 1.0_dp, 1.0_dp, 1.0_dp]
+    ! xi = xi at the points of gauss-2x2
     real(dp), parameter :: KS0_xi(4) = [-0.5773502691896257_dp, 0.5773502691896257_dp, &
         -0.5773502691896257_dp, 0.5773502691896257_dp]
     real(dp) :: x1, y1, x2, y2, x3, y3, x4, y4, m0, m1, m2, gx_0_1, gx_1_0, gx_1_1, gy_0_1, gy_1_0
@@ -179,14 +200,13 @@ contains
     H_3_3 = 0.0_dp
     do p = 1, 4   ! gauss-2x2: loop over the 4 points
       block
-        real(dp) :: c0, c1, c10, c2, c3, c4, c5, c6, c7, c9, eta, w, xi, J00, J01, J10, J11, detJ, idet
+        real(dp) :: c0, c1, c2, c3, c4, c5, c6, c7, c9, c10, eta, w, xi, J00, J01, J10, J11, detJ, idet
         real(dp) :: Ji00, Ji01, Ji10, Ji11, dNdx1, dNdy1, dNdx2, dNdy2, dNdx3, dNdy3, dNdx4, dNdy4, sc0
         real(dp) :: s1, s2, s3, T4, T6, T7, T8, T9, T10, T11, T12, T13, T14, T15, T16, T17, T18, T19, T20
         real(dp) :: T21, T22, T23, T24, T25, T26, T27, T28, T29, T30, T31, T32, T33, T34, T35, T36, T37
         real(dp) :: T38, T39
         c0 = KS0_c0(p)
         c1 = KS0_c1(p)
-        c10 = KS0_c10(p)
         c2 = KS0_c2(p)
         c3 = KS0_c3(p)
         c4 = KS0_c4(p)
@@ -194,6 +214,7 @@ contains
         c6 = KS0_c6(p)
         c7 = KS0_c7(p)
         c9 = KS0_c9(p)
+        c10 = KS0_c10(p)
         eta = KS0_eta(p)
         w = KS0_w(p)
         xi = KS0_xi(p)
@@ -559,29 +580,42 @@ contains
     real(dp), intent(in) :: E, nu
     real(dp), intent(out) :: strain(3, 4), stress(3, 4)
     real(dp), parameter :: t = 1.0_dp
+    ! c0 = eta/4 - 1/4 at the points of gauss-2x2
     real(dp), parameter :: KR0_c0(4) = [-0.39433756729740643_dp, -0.39433756729740643_dp, &
         -0.10566243270259355_dp, -0.10566243270259355_dp]
+    ! c1 = xi/4 - 1/4 at the points of gauss-2x2
     real(dp), parameter :: KR0_c1(4) = [-0.39433756729740643_dp, -0.10566243270259355_dp, &
         -0.39433756729740643_dp, -0.10566243270259355_dp]
-    real(dp), parameter :: KR0_c10(4) = [1.1547005383792515_dp, 1.1547005383792515_dp, &
-        -1.1547005383792515_dp, -1.1547005383792515_dp]
+    ! c2 = 1/4 - eta/4 at the points of gauss-2x2
     real(dp), parameter :: KR0_c2(4) = [0.39433756729740643_dp, 0.39433756729740643_dp, &
         0.10566243270259355_dp, 0.10566243270259355_dp]
+    ! c3 = -xi/4 - 1/4 at the points of gauss-2x2
     real(dp), parameter :: KR0_c3(4) = [-0.10566243270259355_dp, -0.39433756729740643_dp, &
         -0.10566243270259355_dp, -0.39433756729740643_dp]
+    ! c4 = eta/4 + 1/4 at the points of gauss-2x2
     real(dp), parameter :: KR0_c4(4) = [0.10566243270259355_dp, 0.10566243270259355_dp, &
         0.39433756729740643_dp, 0.39433756729740643_dp]
+    ! c5 = xi/4 + 1/4 at the points of gauss-2x2
     real(dp), parameter :: KR0_c5(4) = [0.10566243270259355_dp, 0.39433756729740643_dp, &
         0.10566243270259355_dp, 0.39433756729740643_dp]
+    ! c6 = -eta/4 - 1/4 at the points of gauss-2x2
     real(dp), parameter :: KR0_c6(4) = [-0.10566243270259355_dp, -0.10566243270259355_dp, &
         -0.39433756729740643_dp, -0.39433756729740643_dp]
+    ! c7 = 1/4 - xi/4 at the points of gauss-2x2
     real(dp), parameter :: KR0_c7(4) = [0.39433756729740643_dp, 0.10566243270259355_dp, &
         0.39433756729740643_dp, 0.10566243270259355_dp]
+    ! c9 = -2*xi at the points of gauss-2x2
     real(dp), parameter :: KR0_c9(4) = [1.1547005383792515_dp, -1.1547005383792515_dp, &
         1.1547005383792515_dp, -1.1547005383792515_dp]
+    ! c10 = -2*eta at the points of gauss-2x2
+    real(dp), parameter :: KR0_c10(4) = [1.1547005383792515_dp, 1.1547005383792515_dp, &
+        -1.1547005383792515_dp, -1.1547005383792515_dp]
+    ! eta = eta at the points of gauss-2x2
     real(dp), parameter :: KR0_eta(4) = [-0.5773502691896257_dp, -0.5773502691896257_dp, &
         0.5773502691896257_dp, 0.5773502691896257_dp]
+    ! w = the point weight at the points of gauss-2x2
     real(dp), parameter :: KR0_w(4) = [1.0_dp, 1.0_dp, 1.0_dp, 1.0_dp]
+    ! xi = xi at the points of gauss-2x2
     real(dp), parameter :: KR0_xi(4) = [-0.5773502691896257_dp, 0.5773502691896257_dp, &
         -0.5773502691896257_dp, 0.5773502691896257_dp]
     real(dp) :: x1, y1, x2, y2, x3, y3, x4, y4, u1, u2, u3, u4, u5, u6, u7, u8, m0, m1, m2, gx_0_1
@@ -661,12 +695,11 @@ contains
     H_3_3 = 0.0_dp
     do p = 1, 4   ! gauss-2x2: loop over the 4 points
       block
-        real(dp) :: c0, c1, c10, c2, c3, c4, c5, c6, c7, c9, eta, w, xi, J00, J01, J10, J11, detJ, idet
+        real(dp) :: c0, c1, c2, c3, c4, c5, c6, c7, c9, c10, eta, w, xi, J00, J01, J10, J11, detJ, idet
         real(dp) :: Ji00, Ji01, Ji10, Ji11, dNdx1, dNdy1, dNdx2, dNdy2, dNdx3, dNdy3, dNdx4, dNdy4, sc0
         real(dp) :: s1, s2, s3, T28, T29, T30, T31, T32, T33, T34, T35, T36, T37, T38, T39
         c0 = KR0_c0(p)
         c1 = KR0_c1(p)
-        c10 = KR0_c10(p)
         c2 = KR0_c2(p)
         c3 = KR0_c3(p)
         c4 = KR0_c4(p)
@@ -674,6 +707,7 @@ contains
         c6 = KR0_c6(p)
         c7 = KR0_c7(p)
         c9 = KR0_c9(p)
+        c10 = KR0_c10(p)
         eta = KR0_eta(p)
         w = KR0_w(p)
         xi = KR0_xi(p)

@@ -1,21 +1,29 @@
 ! derive generated kernel: Q8 bbar plane-stress
 !
 ! element      Q8, 8 nodes, 16 DOFs interleaved u1, v1, u2, v2, ...
-! formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed) [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
-! integration  B^T D_dev B: gauss-3x3 (9 points); B^T m (g): gauss-3x3 (9 points); -1/kappa (-V/kappa): gauss-3x3 (9 points)
-! internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)
+! formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed)
+!              [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
+! integration  B^T D_dev B: gauss-3x3 (9 points); B^T m (g): gauss-3x3 (9 points); -1/kappa
+!              (-V/kappa): gauss-3x3 (9 points)
+! internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+!              (unrolled factorisation of K_aa, no pivoting)
 ! flops        stiffness 7081, validity 383, recovery 2856 per element (add, mul, div, sqrt)
 !
 ! arguments (units-agnostic; any consistent set of units):
-!   xy      nodal coordinates, shape (n, 8, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+!   xy      nodal coordinates, shape (n, 8, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+!           node i+1 (counter-clockwise corners first, then mid-side, then interior)
 !   E       Young's modulus (> 0), scalar
 !   nu      Poisson's ratio (-1 < nu < 0.5), scalar
 !   t       thickness t (the out-of-plane thickness)
 !   u       nodal displacements for recovery, shape (n, 16), interleaved u1, v1, u2, v2, ...
-!   K       stiffness, shape (n, 16, 16), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1 internal unknowns are condensed
-!   detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted or degenerate element
-!   strain  recovery: strain at the 9 points of gauss-3x3, shape (n, 9, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
-!   stress  recovery: stress D strain at the same points, shape (n, 9, 3), [sigma_xx, sigma_yy, tau_xy]
+!   K       stiffness, shape (n, 16, 16), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1
+!           internal unknowns are condensed
+!   detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted
+!            or degenerate element
+!   strain  recovery: strain at the 9 points of gauss-3x3, shape (n, 9, 3), Voigt [eps_xx, eps_yy,
+!           gamma_xy] (engineering shear)
+!   stress  recovery: stress D strain at the same points, shape (n, 9, 3), [sigma_xx, sigma_yy,
+!           tau_xy]
 !
 ! The kernels do not check their inputs; derive.kernel() checks shapes, finite
 ! coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
@@ -42,69 +50,93 @@ contains
     real(dp), intent(in) :: xy(2, 8)
     real(dp), value, intent(in) :: E, nu, t
     real(dp), intent(out) :: K(16, 16)
+    ! c0 = eta^2 at the points of gauss-3x3
     real(dp), parameter :: KS0_c0(9) = [0.6_dp, 0.6_dp, 0.6_dp, 0.0_dp, 0.0_dp, 0.0_dp, 0.6_dp, &
         0.6_dp, 0.6_dp]
+    ! c1 = 2*xi at the points of gauss-3x3
     real(dp), parameter :: KS0_c1(9) = [-1.5491933384829668_dp, 0.0_dp, 1.5491933384829668_dp, &
         -1.5491933384829668_dp, 0.0_dp, 1.5491933384829668_dp, -1.5491933384829668_dp, 0.0_dp, &
         1.5491933384829668_dp]
-    real(dp), parameter :: KS0_c10(9) = [-0.13094750193111254_dp, -0.3872983346207417_dp, &
-        -0.3436491673103708_dp, -0.04364916731037084_dp, 0.0_dp, 0.3436491673103708_dp, &
-        0.04364916731037084_dp, 0.3872983346207417_dp, 1.0309475019311125_dp]
-    real(dp), parameter :: KS0_c11(9) = [-0.04364916731037084_dp, 0.04364916731037084_dp, &
-        0.13094750193111254_dp, -0.3872983346207417_dp, 0.0_dp, 0.3872983346207417_dp, &
-        -1.0309475019311125_dp, -0.3436491673103708_dp, 0.3436491673103708_dp]
-    real(dp), parameter :: KS0_c12(9) = [-0.3436491673103708_dp, -0.3872983346207417_dp, &
-        -0.13094750193111254_dp, 0.3436491673103708_dp, 0.0_dp, -0.04364916731037084_dp, &
-        1.0309475019311125_dp, 0.3872983346207417_dp, 0.04364916731037084_dp]
-    real(dp), parameter :: KS0_c13(9) = [1.3745966692414833_dp, 0.0_dp, -1.3745966692414833_dp, &
-        0.7745966692414834_dp, 0.0_dp, -0.7745966692414834_dp, 0.17459666924148337_dp, 0.0_dp, &
-        -0.17459666924148337_dp]
-    real(dp), parameter :: KS0_c14(9) = [-0.2_dp, -0.5_dp, -0.2_dp, -0.2_dp, -0.5_dp, -0.2_dp, &
-        -0.2_dp, -0.5_dp, -0.2_dp]
-    real(dp), parameter :: KS0_c15(9) = [0.2_dp, 0.2_dp, 0.2_dp, 0.5_dp, 0.5_dp, 0.5_dp, 0.2_dp, &
-        0.2_dp, 0.2_dp]
-    real(dp), parameter :: KS0_c16(9) = [0.17459666924148337_dp, 0.7745966692414834_dp, &
-        1.3745966692414833_dp, 0.0_dp, 0.0_dp, 0.0_dp, -0.17459666924148337_dp, &
-        -0.7745966692414834_dp, -1.3745966692414833_dp]
-    real(dp), parameter :: KS0_c17(9) = [0.17459666924148337_dp, 0.0_dp, -0.17459666924148337_dp, &
-        0.7745966692414834_dp, 0.0_dp, -0.7745966692414834_dp, 1.3745966692414833_dp, 0.0_dp, &
-        -1.3745966692414833_dp]
-    real(dp), parameter :: KS0_c18(9) = [0.2_dp, 0.5_dp, 0.2_dp, 0.2_dp, 0.5_dp, 0.2_dp, 0.2_dp, &
-        0.5_dp, 0.2_dp]
-    real(dp), parameter :: KS0_c19(9) = [-0.2_dp, -0.2_dp, -0.2_dp, -0.5_dp, -0.5_dp, -0.5_dp, &
-        -0.2_dp, -0.2_dp, -0.2_dp]
+    ! c2 = 2*eta*xi at the points of gauss-3x3
     real(dp), parameter :: KS0_c2(9) = [1.2_dp, 0.0_dp, -1.2_dp, 0.0_dp, 0.0_dp, 0.0_dp, -1.2_dp, &
         0.0_dp, 1.2_dp]
-    real(dp), parameter :: KS0_c20(9) = [1.3745966692414833_dp, 0.7745966692414834_dp, &
-        0.17459666924148337_dp, 0.0_dp, 0.0_dp, 0.0_dp, -1.3745966692414833_dp, &
-        -0.7745966692414834_dp, -0.17459666924148337_dp]
+    ! c3 = 2*eta at the points of gauss-3x3
     real(dp), parameter :: KS0_c3(9) = [-1.5491933384829668_dp, -1.5491933384829668_dp, &
         -1.5491933384829668_dp, 0.0_dp, 0.0_dp, 0.0_dp, 1.5491933384829668_dp, &
         1.5491933384829668_dp, 1.5491933384829668_dp]
+    ! c4 = xi^2 at the points of gauss-3x3
     real(dp), parameter :: KS0_c4(9) = [0.6_dp, 0.0_dp, 0.6_dp, 0.6_dp, 0.0_dp, 0.6_dp, 0.6_dp, &
         0.0_dp, 0.6_dp]
+    ! c5 = -eta^2/4 - eta*xi/2 + eta/4 + xi/2 at the points of gauss-3x3
     real(dp), parameter :: KS0_c5(9) = [-1.0309475019311125_dp, -0.3436491673103708_dp, &
         0.3436491673103708_dp, -0.3872983346207417_dp, 0.0_dp, 0.3872983346207417_dp, &
         -0.04364916731037084_dp, 0.04364916731037084_dp, 0.13094750193111254_dp]
+    ! c6 = -eta*xi/2 + eta/2 - xi^2/4 + xi/4 at the points of gauss-3x3
     real(dp), parameter :: KS0_c6(9) = [-1.0309475019311125_dp, -0.3872983346207417_dp, &
         -0.04364916731037084_dp, -0.3436491673103708_dp, 0.0_dp, 0.04364916731037084_dp, &
         0.3436491673103708_dp, 0.3872983346207417_dp, 0.13094750193111254_dp]
+    ! c7 = eta^2/4 - eta*xi/2 - eta/4 + xi/2 at the points of gauss-3x3
     real(dp), parameter :: KS0_c7(9) = [-0.3436491673103708_dp, 0.3436491673103708_dp, &
         1.0309475019311125_dp, -0.3872983346207417_dp, 0.0_dp, 0.3872983346207417_dp, &
         -0.13094750193111254_dp, -0.04364916731037084_dp, 0.04364916731037084_dp]
+    ! c8 = eta*xi/2 + eta/2 - xi^2/4 - xi/4 at the points of gauss-3x3
     real(dp), parameter :: KS0_c8(9) = [-0.04364916731037084_dp, -0.3872983346207417_dp, &
         -1.0309475019311125_dp, 0.04364916731037084_dp, 0.0_dp, -0.3436491673103708_dp, &
         0.13094750193111254_dp, 0.3872983346207417_dp, 0.3436491673103708_dp]
+    ! c9 = eta^2/4 + eta*xi/2 + eta/4 + xi/2 at the points of gauss-3x3
     real(dp), parameter :: KS0_c9(9) = [-0.13094750193111254_dp, -0.04364916731037084_dp, &
         0.04364916731037084_dp, -0.3872983346207417_dp, 0.0_dp, 0.3872983346207417_dp, &
         -0.3436491673103708_dp, 0.3436491673103708_dp, 1.0309475019311125_dp]
+    ! c10 = eta*xi/2 + eta/2 + xi^2/4 + xi/4 at the points of gauss-3x3
+    real(dp), parameter :: KS0_c10(9) = [-0.13094750193111254_dp, -0.3872983346207417_dp, &
+        -0.3436491673103708_dp, -0.04364916731037084_dp, 0.0_dp, 0.3436491673103708_dp, &
+        0.04364916731037084_dp, 0.3872983346207417_dp, 1.0309475019311125_dp]
+    ! c11 = -eta^2/4 + eta*xi/2 - eta/4 + xi/2 at the points of gauss-3x3
+    real(dp), parameter :: KS0_c11(9) = [-0.04364916731037084_dp, 0.04364916731037084_dp, &
+        0.13094750193111254_dp, -0.3872983346207417_dp, 0.0_dp, 0.3872983346207417_dp, &
+        -1.0309475019311125_dp, -0.3436491673103708_dp, 0.3436491673103708_dp]
+    ! c12 = -eta*xi/2 + eta/2 + xi^2/4 - xi/4 at the points of gauss-3x3
+    real(dp), parameter :: KS0_c12(9) = [-0.3436491673103708_dp, -0.3872983346207417_dp, &
+        -0.13094750193111254_dp, 0.3436491673103708_dp, 0.0_dp, -0.04364916731037084_dp, &
+        1.0309475019311125_dp, 0.3872983346207417_dp, 0.04364916731037084_dp]
+    ! c13 = eta*xi - xi at the points of gauss-3x3
+    real(dp), parameter :: KS0_c13(9) = [1.3745966692414833_dp, 0.0_dp, -1.3745966692414833_dp, &
+        0.7745966692414834_dp, 0.0_dp, -0.7745966692414834_dp, 0.17459666924148337_dp, 0.0_dp, &
+        -0.17459666924148337_dp]
+    ! c14 = xi^2/2 - 1/2 at the points of gauss-3x3
+    real(dp), parameter :: KS0_c14(9) = [-0.2_dp, -0.5_dp, -0.2_dp, -0.2_dp, -0.5_dp, -0.2_dp, &
+        -0.2_dp, -0.5_dp, -0.2_dp]
+    ! c15 = 1/2 - eta^2/2 at the points of gauss-3x3
+    real(dp), parameter :: KS0_c15(9) = [0.2_dp, 0.2_dp, 0.2_dp, 0.5_dp, 0.5_dp, 0.5_dp, 0.2_dp, &
+        0.2_dp, 0.2_dp]
+    ! c16 = -eta*xi - eta at the points of gauss-3x3
+    real(dp), parameter :: KS0_c16(9) = [0.17459666924148337_dp, 0.7745966692414834_dp, &
+        1.3745966692414833_dp, 0.0_dp, 0.0_dp, 0.0_dp, -0.17459666924148337_dp, &
+        -0.7745966692414834_dp, -1.3745966692414833_dp]
+    ! c17 = -eta*xi - xi at the points of gauss-3x3
+    real(dp), parameter :: KS0_c17(9) = [0.17459666924148337_dp, 0.0_dp, -0.17459666924148337_dp, &
+        0.7745966692414834_dp, 0.0_dp, -0.7745966692414834_dp, 1.3745966692414833_dp, 0.0_dp, &
+        -1.3745966692414833_dp]
+    ! c18 = 1/2 - xi^2/2 at the points of gauss-3x3
+    real(dp), parameter :: KS0_c18(9) = [0.2_dp, 0.5_dp, 0.2_dp, 0.2_dp, 0.5_dp, 0.2_dp, 0.2_dp, &
+        0.5_dp, 0.2_dp]
+    ! c19 = eta^2/2 - 1/2 at the points of gauss-3x3
+    real(dp), parameter :: KS0_c19(9) = [-0.2_dp, -0.2_dp, -0.2_dp, -0.5_dp, -0.5_dp, -0.5_dp, &
+        -0.2_dp, -0.2_dp, -0.2_dp]
+    ! c20 = eta*xi - eta at the points of gauss-3x3
+    real(dp), parameter :: KS0_c20(9) = [1.3745966692414833_dp, 0.7745966692414834_dp, &
+        0.17459666924148337_dp, 0.0_dp, 0.0_dp, 0.0_dp, -1.3745966692414833_dp, &
+        -0.7745966692414834_dp, -0.17459666924148337_dp]
+    ! eta = eta at the points of gauss-3x3
     real(dp), parameter :: KS0_eta(9) = [-0.7745966692414834_dp, -0.7745966692414834_dp, &
         -0.7745966692414834_dp, 0.0_dp, 0.0_dp, 0.0_dp, 0.7745966692414834_dp, &
         0.7745966692414834_dp, 0.7745966692414834_dp]
+    ! w = the point weight at the points of gauss-3x3
     real(dp), parameter :: KS0_w(9) = [0.30864197530864196_dp, 0.49382716049382713_dp, &
         0.30864197530864196_dp, 0.49382716049382713_dp, 0.7901234567901234_dp, &
         0.49382716049382713_dp, 0.30864197530864196_dp, 0.49382716049382713_dp, &
         0.30864197530864196_dp]
+    ! xi = xi at the points of gauss-3x3
     real(dp), parameter :: KS0_xi(9) = [-0.7745966692414834_dp, 0.0_dp, 0.7745966692414834_dp, &
         -0.7745966692414834_dp, 0.0_dp, 0.7745966692414834_dp, -0.7745966692414834_dp, 0.0_dp, &
         0.7745966692414834_dp]
@@ -316,8 +348,8 @@ contains
     H_0_0 = 0.0_dp
     do p = 1, 9   ! gauss-3x3: loop over the 9 points
       block
-        real(dp) :: c0, c1, c10, c11, c12, c13, c14, c15, c16, c17, c18, c19, c2, c20, c3, c4, c5, c6
-        real(dp) :: c7, c8, c9, eta, w, xi, J00, J01, J10, J11, detJ, idet, Ji00, Ji01, Ji10, Ji11, dNdx1
+        real(dp) :: c0, c1, c2, c3, c4, c5, c6, c7, c8, c9, c10, c11, c12, c13, c14, c15, c16, c17, c18
+        real(dp) :: c19, c20, eta, w, xi, J00, J01, J10, J11, detJ, idet, Ji00, Ji01, Ji10, Ji11, dNdx1
         real(dp) :: dNdy1, dNdx2, dNdy2, dNdx3, dNdy3, dNdx4, dNdy4, dNdx5, dNdy5, dNdx6, dNdy6, dNdx7
         real(dp) :: dNdy7, dNdx8, dNdy8, sc0, s1, s2, s3, T4, T6, T7, T8, T9, T10, T11, T12, T13, T14
         real(dp) :: T15, T16, T17, T18, T19, T20, T21, T22, T23, T24, T25, T26, T27, T28, T29, T30, T31
@@ -325,6 +357,14 @@ contains
         real(dp) :: T49, T50, T51, s52
         c0 = KS0_c0(p)
         c1 = KS0_c1(p)
+        c2 = KS0_c2(p)
+        c3 = KS0_c3(p)
+        c4 = KS0_c4(p)
+        c5 = KS0_c5(p)
+        c6 = KS0_c6(p)
+        c7 = KS0_c7(p)
+        c8 = KS0_c8(p)
+        c9 = KS0_c9(p)
         c10 = KS0_c10(p)
         c11 = KS0_c11(p)
         c12 = KS0_c12(p)
@@ -335,15 +375,7 @@ contains
         c17 = KS0_c17(p)
         c18 = KS0_c18(p)
         c19 = KS0_c19(p)
-        c2 = KS0_c2(p)
         c20 = KS0_c20(p)
-        c3 = KS0_c3(p)
-        c4 = KS0_c4(p)
-        c5 = KS0_c5(p)
-        c6 = KS0_c6(p)
-        c7 = KS0_c7(p)
-        c8 = KS0_c8(p)
-        c9 = KS0_c9(p)
         eta = KS0_eta(p)
         w = KS0_w(p)
         xi = KS0_xi(p)

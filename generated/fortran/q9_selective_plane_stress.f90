@@ -1,20 +1,25 @@
 ! derive generated kernel: Q9 selective plane-stress
 !
 ! element      Q9, 9 nodes, 18 DOFs interleaved u1, v1, u2, v2, ...
-! formulation  selective integration: volumetric part of D with the reduced rule [Doherty, Wilson & Taylor (1969); Hughes (1987) Sec. 4.4]
+! formulation  selective integration: volumetric part of D with the reduced rule [Doherty, Wilson
+!              & Taylor (1969); Hughes (1987) Sec. 4.4]
 ! integration  B^T D_dev B: gauss-3x3 (9 points); B^T D_vol B (reduced rule): gauss-2x2 (4 points)
 ! flops        stiffness 9659, validity 408, recovery 1403 per element (add, mul, div, sqrt)
 !
 ! arguments (units-agnostic; any consistent set of units):
-!   xy      nodal coordinates, shape (n, 9, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+!   xy      nodal coordinates, shape (n, 9, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+!           node i+1 (counter-clockwise corners first, then mid-side, then interior)
 !   E       Young's modulus (> 0), scalar
 !   nu      Poisson's ratio (-1 < nu < 0.5), scalar
 !   t       thickness t (the out-of-plane thickness)
 !   u       nodal displacements for recovery, shape (n, 18), interleaved u1, v1, u2, v2, ...
 !   K       stiffness, shape (n, 18, 18), DOFs interleaved u1, v1, u2, v2, ...; symmetric
-!   detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted or degenerate element
-!   strain  recovery: strain at the 9 points of gauss-3x3, shape (n, 9, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
-!   stress  recovery: stress D strain at the same points, shape (n, 9, 3), [sigma_xx, sigma_yy, tau_xy]
+!   detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted
+!            or degenerate element
+!   strain  recovery: strain at the 9 points of gauss-3x3, shape (n, 9, 3), Voigt [eps_xx, eps_yy,
+!           gamma_xy] (engineering shear)
+!   stress  recovery: stress D strain at the same points, shape (n, 9, 3), [sigma_xx, sigma_yy,
+!           tau_xy]
 !
 ! The kernels do not check their inputs; derive.kernel() checks shapes, finite
 ! coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
@@ -41,135 +46,191 @@ contains
     real(dp), intent(in) :: xy(2, 9)
     real(dp), value, intent(in) :: E, nu, t
     real(dp), intent(out) :: K(18, 18)
+    ! c0 = eta^2 at the points of gauss-3x3
     real(dp), parameter :: KS0_c0(9) = [0.6_dp, 0.6_dp, 0.6_dp, 0.0_dp, 0.0_dp, 0.0_dp, 0.6_dp, &
         0.6_dp, 0.6_dp]
+    ! c1 = 2*xi at the points of gauss-3x3
     real(dp), parameter :: KS0_c1(9) = [-1.5491933384829668_dp, 0.0_dp, 1.5491933384829668_dp, &
         -1.5491933384829668_dp, 0.0_dp, 1.5491933384829668_dp, -1.5491933384829668_dp, 0.0_dp, &
         1.5491933384829668_dp]
-    real(dp), parameter :: KS0_c10(9) = [0.11127016653792583_dp, 0.0_dp, -0.8760281680828158_dp, &
-        0.04364916731037084_dp, 0.0_dp, -0.3436491673103708_dp, -0.023971831917184144_dp, 0.0_dp, &
-        0.18872983346207417_dp]
-    real(dp), parameter :: KS0_c11(9) = [0.023971831917184144_dp, -0.04364916731037084_dp, &
-        -0.11127016653792583_dp, 0.0_dp, 0.0_dp, 0.0_dp, -0.18872983346207417_dp, &
-        0.3436491673103708_dp, 0.8760281680828158_dp]
-    real(dp), parameter :: KS0_c12(9) = [0.023971831917184144_dp, 0.0_dp, &
-        -0.18872983346207417_dp, -0.04364916731037084_dp, 0.0_dp, 0.3436491673103708_dp, &
-        -0.11127016653792583_dp, 0.0_dp, 0.8760281680828158_dp]
-    real(dp), parameter :: KS0_c13(9) = [0.11127016653792583_dp, 0.04364916731037084_dp, &
-        -0.023971831917184144_dp, 0.0_dp, 0.0_dp, 0.0_dp, -0.8760281680828158_dp, &
-        -0.3436491673103708_dp, 0.18872983346207417_dp]
-    real(dp), parameter :: KS0_c14(9) = [-0.18872983346207417_dp, 0.0_dp, &
-        0.023971831917184144_dp, 0.3436491673103708_dp, 0.0_dp, -0.04364916731037084_dp, &
-        0.8760281680828158_dp, 0.0_dp, -0.11127016653792583_dp]
-    real(dp), parameter :: KS0_c15(9) = [1.06475800154489_dp, 0.0_dp, -1.06475800154489_dp, &
-        0.0_dp, 0.0_dp, 0.0_dp, -0.13524199845510998_dp, 0.0_dp, 0.13524199845510998_dp]
-    real(dp), parameter :: KS0_c16(9) = [-0.5098386676965934_dp, -1.2745966692414834_dp, &
-        -0.5098386676965934_dp, -0.2_dp, -0.5_dp, -0.2_dp, 0.10983866769659335_dp, &
-        0.2745966692414834_dp, 0.10983866769659335_dp]
-    real(dp), parameter :: KS0_c17(9) = [-0.10983866769659335_dp, 0.2_dp, 0.5098386676965934_dp, &
-        -0.2745966692414834_dp, 0.5_dp, 1.2745966692414834_dp, -0.10983866769659335_dp, 0.2_dp, &
-        0.5098386676965934_dp]
-    real(dp), parameter :: KS0_c18(9) = [-0.13524199845510998_dp, 0.0_dp, 1.06475800154489_dp, &
-        0.0_dp, 0.0_dp, 0.0_dp, 0.13524199845510998_dp, 0.0_dp, -1.06475800154489_dp]
-    real(dp), parameter :: KS0_c19(9) = [-0.13524199845510998_dp, 0.0_dp, 0.13524199845510998_dp, &
-        0.0_dp, 0.0_dp, 0.0_dp, 1.06475800154489_dp, 0.0_dp, -1.06475800154489_dp]
+    ! c2 = 2*eta*xi at the points of gauss-3x3
     real(dp), parameter :: KS0_c2(9) = [1.2_dp, 0.0_dp, -1.2_dp, 0.0_dp, 0.0_dp, 0.0_dp, -1.2_dp, &
         0.0_dp, 1.2_dp]
-    real(dp), parameter :: KS0_c20(9) = [-0.10983866769659335_dp, -0.2745966692414834_dp, &
-        -0.10983866769659335_dp, 0.2_dp, 0.5_dp, 0.2_dp, 0.5098386676965934_dp, &
-        1.2745966692414834_dp, 0.5098386676965934_dp]
-    real(dp), parameter :: KS0_c21(9) = [-0.5098386676965934_dp, -0.2_dp, 0.10983866769659335_dp, &
-        -1.2745966692414834_dp, -0.5_dp, 0.2745966692414834_dp, -0.5098386676965934_dp, -0.2_dp, &
-        0.10983866769659335_dp]
-    real(dp), parameter :: KS0_c22(9) = [1.06475800154489_dp, 0.0_dp, -0.13524199845510998_dp, &
-        0.0_dp, 0.0_dp, 0.0_dp, -1.06475800154489_dp, 0.0_dp, 0.13524199845510998_dp]
-    real(dp), parameter :: KS0_c23(9) = [0.6196773353931867_dp, 0.0_dp, -0.6196773353931867_dp, &
-        1.5491933384829668_dp, 0.0_dp, -1.5491933384829668_dp, 0.6196773353931867_dp, 0.0_dp, &
-        -0.6196773353931867_dp]
-    real(dp), parameter :: KS0_c24(9) = [0.6196773353931867_dp, 1.5491933384829668_dp, &
-        0.6196773353931867_dp, 0.0_dp, 0.0_dp, 0.0_dp, -0.6196773353931867_dp, &
-        -1.5491933384829668_dp, -0.6196773353931867_dp]
+    ! c3 = 2*eta^2*xi at the points of gauss-3x3
     real(dp), parameter :: KS0_c3(9) = [-0.9295160030897801_dp, 0.0_dp, 0.9295160030897801_dp, &
         0.0_dp, 0.0_dp, 0.0_dp, -0.9295160030897801_dp, 0.0_dp, 0.9295160030897801_dp]
+    ! c4 = 2*eta at the points of gauss-3x3
     real(dp), parameter :: KS0_c4(9) = [-1.5491933384829668_dp, -1.5491933384829668_dp, &
         -1.5491933384829668_dp, 0.0_dp, 0.0_dp, 0.0_dp, 1.5491933384829668_dp, &
         1.5491933384829668_dp, 1.5491933384829668_dp]
+    ! c5 = xi^2 at the points of gauss-3x3
     real(dp), parameter :: KS0_c5(9) = [0.6_dp, 0.0_dp, 0.6_dp, 0.6_dp, 0.0_dp, 0.6_dp, 0.6_dp, &
         0.0_dp, 0.6_dp]
+    ! c6 = 2*eta*xi^2 at the points of gauss-3x3
     real(dp), parameter :: KS0_c6(9) = [-0.9295160030897801_dp, 0.0_dp, -0.9295160030897801_dp, &
         0.0_dp, 0.0_dp, 0.0_dp, 0.9295160030897801_dp, 0.0_dp, 0.9295160030897801_dp]
+    ! c7 = eta^2*xi/2 - eta^2/4 - eta*xi/2 + eta/4 at the points of gauss-3x3
     real(dp), parameter :: KS0_c7(9) = [-0.8760281680828158_dp, -0.3436491673103708_dp, &
         0.18872983346207417_dp, 0.0_dp, 0.0_dp, 0.0_dp, 0.11127016653792583_dp, &
         0.04364916731037084_dp, -0.023971831917184144_dp]
+    ! c8 = eta*xi^2/2 - eta*xi/2 - xi^2/4 + xi/4 at the points of gauss-3x3
     real(dp), parameter :: KS0_c8(9) = [-0.8760281680828158_dp, 0.0_dp, 0.11127016653792583_dp, &
         -0.3436491673103708_dp, 0.0_dp, 0.04364916731037084_dp, 0.18872983346207417_dp, 0.0_dp, &
         -0.023971831917184144_dp]
+    ! c9 = eta^2*xi/2 + eta^2/4 - eta*xi/2 - eta/4 at the points of gauss-3x3
     real(dp), parameter :: KS0_c9(9) = [-0.18872983346207417_dp, 0.3436491673103708_dp, &
         0.8760281680828158_dp, 0.0_dp, 0.0_dp, 0.0_dp, 0.023971831917184144_dp, &
         -0.04364916731037084_dp, -0.11127016653792583_dp]
+    ! c10 = eta*xi^2/2 + eta*xi/2 - xi^2/4 - xi/4 at the points of gauss-3x3
+    real(dp), parameter :: KS0_c10(9) = [0.11127016653792583_dp, 0.0_dp, -0.8760281680828158_dp, &
+        0.04364916731037084_dp, 0.0_dp, -0.3436491673103708_dp, -0.023971831917184144_dp, 0.0_dp, &
+        0.18872983346207417_dp]
+    ! c11 = eta^2*xi/2 + eta^2/4 + eta*xi/2 + eta/4 at the points of gauss-3x3
+    real(dp), parameter :: KS0_c11(9) = [0.023971831917184144_dp, -0.04364916731037084_dp, &
+        -0.11127016653792583_dp, 0.0_dp, 0.0_dp, 0.0_dp, -0.18872983346207417_dp, &
+        0.3436491673103708_dp, 0.8760281680828158_dp]
+    ! c12 = eta*xi^2/2 + eta*xi/2 + xi^2/4 + xi/4 at the points of gauss-3x3
+    real(dp), parameter :: KS0_c12(9) = [0.023971831917184144_dp, 0.0_dp, &
+        -0.18872983346207417_dp, -0.04364916731037084_dp, 0.0_dp, 0.3436491673103708_dp, &
+        -0.11127016653792583_dp, 0.0_dp, 0.8760281680828158_dp]
+    ! c13 = eta^2*xi/2 - eta^2/4 + eta*xi/2 - eta/4 at the points of gauss-3x3
+    real(dp), parameter :: KS0_c13(9) = [0.11127016653792583_dp, 0.04364916731037084_dp, &
+        -0.023971831917184144_dp, 0.0_dp, 0.0_dp, 0.0_dp, -0.8760281680828158_dp, &
+        -0.3436491673103708_dp, 0.18872983346207417_dp]
+    ! c14 = eta*xi^2/2 - eta*xi/2 + xi^2/4 - xi/4 at the points of gauss-3x3
+    real(dp), parameter :: KS0_c14(9) = [-0.18872983346207417_dp, 0.0_dp, &
+        0.023971831917184144_dp, 0.3436491673103708_dp, 0.0_dp, -0.04364916731037084_dp, &
+        0.8760281680828158_dp, 0.0_dp, -0.11127016653792583_dp]
+    ! c15 = -eta^2*xi + eta*xi at the points of gauss-3x3
+    real(dp), parameter :: KS0_c15(9) = [1.06475800154489_dp, 0.0_dp, -1.06475800154489_dp, &
+        0.0_dp, 0.0_dp, 0.0_dp, -0.13524199845510998_dp, 0.0_dp, 0.13524199845510998_dp]
+    ! c16 = -eta*xi^2 + eta + xi^2/2 - 1/2 at the points of gauss-3x3
+    real(dp), parameter :: KS0_c16(9) = [-0.5098386676965934_dp, -1.2745966692414834_dp, &
+        -0.5098386676965934_dp, -0.2_dp, -0.5_dp, -0.2_dp, 0.10983866769659335_dp, &
+        0.2745966692414834_dp, 0.10983866769659335_dp]
+    ! c17 = -eta^2*xi - eta^2/2 + xi + 1/2 at the points of gauss-3x3
+    real(dp), parameter :: KS0_c17(9) = [-0.10983866769659335_dp, 0.2_dp, 0.5098386676965934_dp, &
+        -0.2745966692414834_dp, 0.5_dp, 1.2745966692414834_dp, -0.10983866769659335_dp, 0.2_dp, &
+        0.5098386676965934_dp]
+    ! c18 = -eta*xi^2 - eta*xi at the points of gauss-3x3
+    real(dp), parameter :: KS0_c18(9) = [-0.13524199845510998_dp, 0.0_dp, 1.06475800154489_dp, &
+        0.0_dp, 0.0_dp, 0.0_dp, 0.13524199845510998_dp, 0.0_dp, -1.06475800154489_dp]
+    ! c19 = -eta^2*xi - eta*xi at the points of gauss-3x3
+    real(dp), parameter :: KS0_c19(9) = [-0.13524199845510998_dp, 0.0_dp, 0.13524199845510998_dp, &
+        0.0_dp, 0.0_dp, 0.0_dp, 1.06475800154489_dp, 0.0_dp, -1.06475800154489_dp]
+    ! c20 = -eta*xi^2 + eta - xi^2/2 + 1/2 at the points of gauss-3x3
+    real(dp), parameter :: KS0_c20(9) = [-0.10983866769659335_dp, -0.2745966692414834_dp, &
+        -0.10983866769659335_dp, 0.2_dp, 0.5_dp, 0.2_dp, 0.5098386676965934_dp, &
+        1.2745966692414834_dp, 0.5098386676965934_dp]
+    ! c21 = -eta^2*xi + eta^2/2 + xi - 1/2 at the points of gauss-3x3
+    real(dp), parameter :: KS0_c21(9) = [-0.5098386676965934_dp, -0.2_dp, 0.10983866769659335_dp, &
+        -1.2745966692414834_dp, -0.5_dp, 0.2745966692414834_dp, -0.5098386676965934_dp, -0.2_dp, &
+        0.10983866769659335_dp]
+    ! c22 = -eta*xi^2 + eta*xi at the points of gauss-3x3
+    real(dp), parameter :: KS0_c22(9) = [1.06475800154489_dp, 0.0_dp, -0.13524199845510998_dp, &
+        0.0_dp, 0.0_dp, 0.0_dp, -1.06475800154489_dp, 0.0_dp, 0.13524199845510998_dp]
+    ! c23 = 2*eta^2*xi - 2*xi at the points of gauss-3x3
+    real(dp), parameter :: KS0_c23(9) = [0.6196773353931867_dp, 0.0_dp, -0.6196773353931867_dp, &
+        1.5491933384829668_dp, 0.0_dp, -1.5491933384829668_dp, 0.6196773353931867_dp, 0.0_dp, &
+        -0.6196773353931867_dp]
+    ! c24 = 2*eta*xi^2 - 2*eta at the points of gauss-3x3
+    real(dp), parameter :: KS0_c24(9) = [0.6196773353931867_dp, 1.5491933384829668_dp, &
+        0.6196773353931867_dp, 0.0_dp, 0.0_dp, 0.0_dp, -0.6196773353931867_dp, &
+        -1.5491933384829668_dp, -0.6196773353931867_dp]
+    ! eta = eta at the points of gauss-3x3
     real(dp), parameter :: KS0_eta(9) = [-0.7745966692414834_dp, -0.7745966692414834_dp, &
         -0.7745966692414834_dp, 0.0_dp, 0.0_dp, 0.0_dp, 0.7745966692414834_dp, &
         0.7745966692414834_dp, 0.7745966692414834_dp]
+    ! w = the point weight at the points of gauss-3x3
     real(dp), parameter :: KS0_w(9) = [0.30864197530864196_dp, 0.49382716049382713_dp, &
         0.30864197530864196_dp, 0.49382716049382713_dp, 0.7901234567901234_dp, &
         0.49382716049382713_dp, 0.30864197530864196_dp, 0.49382716049382713_dp, &
         0.30864197530864196_dp]
+    ! xi = xi at the points of gauss-3x3
     real(dp), parameter :: KS0_xi(9) = [-0.7745966692414834_dp, 0.0_dp, 0.7745966692414834_dp, &
         -0.7745966692414834_dp, 0.0_dp, 0.7745966692414834_dp, -0.7745966692414834_dp, 0.0_dp, &
         0.7745966692414834_dp]
+    ! c0 = eta^2 at the points of gauss-2x2
     real(dp), parameter :: KS1_c0(4) = [0.3333333333333333_dp, 0.3333333333333333_dp, &
         0.3333333333333333_dp, 0.3333333333333333_dp]
+    ! c1 = 2*xi at the points of gauss-2x2
     real(dp), parameter :: KS1_c1(4) = [-1.1547005383792515_dp, 1.1547005383792515_dp, &
         -1.1547005383792515_dp, 1.1547005383792515_dp]
-    real(dp), parameter :: KS1_c10(4) = [0.13144585576580214_dp, -0.4905626121623441_dp, &
-        -0.009437387837655931_dp, 0.03522081090086452_dp]
-    real(dp), parameter :: KS1_c11(4) = [0.009437387837655931_dp, -0.13144585576580214_dp, &
-        -0.03522081090086452_dp, 0.4905626121623441_dp]
-    real(dp), parameter :: KS1_c12(4) = [0.009437387837655931_dp, -0.03522081090086452_dp, &
-        -0.13144585576580214_dp, 0.4905626121623441_dp]
-    real(dp), parameter :: KS1_c13(4) = [0.13144585576580214_dp, -0.009437387837655931_dp, &
-        -0.4905626121623441_dp, 0.03522081090086452_dp]
-    real(dp), parameter :: KS1_c14(4) = [-0.03522081090086452_dp, 0.009437387837655931_dp, &
-        0.4905626121623441_dp, -0.13144585576580214_dp]
-    real(dp), parameter :: KS1_c15(4) = [0.5257834230632086_dp, -0.5257834230632086_dp, &
-        -0.14088324360345808_dp, 0.14088324360345808_dp]
-    real(dp), parameter :: KS1_c16(4) = [-0.7182335127930839_dp, -0.7182335127930839_dp, &
-        0.051566846126417175_dp, 0.051566846126417175_dp]
-    real(dp), parameter :: KS1_c17(4) = [-0.051566846126417175_dp, 0.7182335127930839_dp, &
-        -0.051566846126417175_dp, 0.7182335127930839_dp]
-    real(dp), parameter :: KS1_c18(4) = [-0.14088324360345808_dp, 0.5257834230632086_dp, &
-        0.14088324360345808_dp, -0.5257834230632086_dp]
-    real(dp), parameter :: KS1_c19(4) = [-0.14088324360345808_dp, 0.14088324360345808_dp, &
-        0.5257834230632086_dp, -0.5257834230632086_dp]
+    ! c2 = 2*eta*xi at the points of gauss-2x2
     real(dp), parameter :: KS1_c2(4) = [0.6666666666666666_dp, -0.6666666666666666_dp, &
         -0.6666666666666666_dp, 0.6666666666666666_dp]
-    real(dp), parameter :: KS1_c20(4) = [-0.051566846126417175_dp, -0.051566846126417175_dp, &
-        0.7182335127930839_dp, 0.7182335127930839_dp]
-    real(dp), parameter :: KS1_c21(4) = [-0.7182335127930839_dp, 0.051566846126417175_dp, &
-        -0.7182335127930839_dp, 0.051566846126417175_dp]
-    real(dp), parameter :: KS1_c22(4) = [0.5257834230632086_dp, -0.14088324360345808_dp, &
-        -0.5257834230632086_dp, 0.14088324360345808_dp]
-    real(dp), parameter :: KS1_c23(4) = [0.769800358919501_dp, -0.769800358919501_dp, &
-        0.769800358919501_dp, -0.769800358919501_dp]
-    real(dp), parameter :: KS1_c24(4) = [0.769800358919501_dp, 0.769800358919501_dp, &
-        -0.769800358919501_dp, -0.769800358919501_dp]
+    ! c3 = 2*eta^2*xi at the points of gauss-2x2
     real(dp), parameter :: KS1_c3(4) = [-0.3849001794597505_dp, 0.3849001794597505_dp, &
         -0.3849001794597505_dp, 0.3849001794597505_dp]
+    ! c4 = 2*eta at the points of gauss-2x2
     real(dp), parameter :: KS1_c4(4) = [-1.1547005383792515_dp, -1.1547005383792515_dp, &
         1.1547005383792515_dp, 1.1547005383792515_dp]
+    ! c5 = xi^2 at the points of gauss-2x2
     real(dp), parameter :: KS1_c5(4) = [0.3333333333333333_dp, 0.3333333333333333_dp, &
         0.3333333333333333_dp, 0.3333333333333333_dp]
+    ! c6 = 2*eta*xi^2 at the points of gauss-2x2
     real(dp), parameter :: KS1_c6(4) = [-0.3849001794597505_dp, -0.3849001794597505_dp, &
         0.3849001794597505_dp, 0.3849001794597505_dp]
+    ! c7 = eta^2*xi/2 - eta^2/4 - eta*xi/2 + eta/4 at the points of gauss-2x2
     real(dp), parameter :: KS1_c7(4) = [-0.4905626121623441_dp, 0.03522081090086452_dp, &
         0.13144585576580214_dp, -0.009437387837655931_dp]
+    ! c8 = eta*xi^2/2 - eta*xi/2 - xi^2/4 + xi/4 at the points of gauss-2x2
     real(dp), parameter :: KS1_c8(4) = [-0.4905626121623441_dp, 0.13144585576580214_dp, &
         0.03522081090086452_dp, -0.009437387837655931_dp]
+    ! c9 = eta^2*xi/2 + eta^2/4 - eta*xi/2 - eta/4 at the points of gauss-2x2
     real(dp), parameter :: KS1_c9(4) = [-0.03522081090086452_dp, 0.4905626121623441_dp, &
         0.009437387837655931_dp, -0.13144585576580214_dp]
+    ! c10 = eta*xi^2/2 + eta*xi/2 - xi^2/4 - xi/4 at the points of gauss-2x2
+    real(dp), parameter :: KS1_c10(4) = [0.13144585576580214_dp, -0.4905626121623441_dp, &
+        -0.009437387837655931_dp, 0.03522081090086452_dp]
+    ! c11 = eta^2*xi/2 + eta^2/4 + eta*xi/2 + eta/4 at the points of gauss-2x2
+    real(dp), parameter :: KS1_c11(4) = [0.009437387837655931_dp, -0.13144585576580214_dp, &
+        -0.03522081090086452_dp, 0.4905626121623441_dp]
+    ! c12 = eta*xi^2/2 + eta*xi/2 + xi^2/4 + xi/4 at the points of gauss-2x2
+    real(dp), parameter :: KS1_c12(4) = [0.009437387837655931_dp, -0.03522081090086452_dp, &
+        -0.13144585576580214_dp, 0.4905626121623441_dp]
+    ! c13 = eta^2*xi/2 - eta^2/4 + eta*xi/2 - eta/4 at the points of gauss-2x2
+    real(dp), parameter :: KS1_c13(4) = [0.13144585576580214_dp, -0.009437387837655931_dp, &
+        -0.4905626121623441_dp, 0.03522081090086452_dp]
+    ! c14 = eta*xi^2/2 - eta*xi/2 + xi^2/4 - xi/4 at the points of gauss-2x2
+    real(dp), parameter :: KS1_c14(4) = [-0.03522081090086452_dp, 0.009437387837655931_dp, &
+        0.4905626121623441_dp, -0.13144585576580214_dp]
+    ! c15 = -eta^2*xi + eta*xi at the points of gauss-2x2
+    real(dp), parameter :: KS1_c15(4) = [0.5257834230632086_dp, -0.5257834230632086_dp, &
+        -0.14088324360345808_dp, 0.14088324360345808_dp]
+    ! c16 = -eta*xi^2 + eta + xi^2/2 - 1/2 at the points of gauss-2x2
+    real(dp), parameter :: KS1_c16(4) = [-0.7182335127930839_dp, -0.7182335127930839_dp, &
+        0.051566846126417175_dp, 0.051566846126417175_dp]
+    ! c17 = -eta^2*xi - eta^2/2 + xi + 1/2 at the points of gauss-2x2
+    real(dp), parameter :: KS1_c17(4) = [-0.051566846126417175_dp, 0.7182335127930839_dp, &
+        -0.051566846126417175_dp, 0.7182335127930839_dp]
+    ! c18 = -eta*xi^2 - eta*xi at the points of gauss-2x2
+    real(dp), parameter :: KS1_c18(4) = [-0.14088324360345808_dp, 0.5257834230632086_dp, &
+        0.14088324360345808_dp, -0.5257834230632086_dp]
+    ! c19 = -eta^2*xi - eta*xi at the points of gauss-2x2
+    real(dp), parameter :: KS1_c19(4) = [-0.14088324360345808_dp, 0.14088324360345808_dp, &
+        0.5257834230632086_dp, -0.5257834230632086_dp]
+    ! c20 = -eta*xi^2 + eta - xi^2/2 + 1/2 at the points of gauss-2x2
+    real(dp), parameter :: KS1_c20(4) = [-0.051566846126417175_dp, -0.051566846126417175_dp, &
+        0.7182335127930839_dp, 0.7182335127930839_dp]
+    ! c21 = -eta^2*xi + eta^2/2 + xi - 1/2 at the points of gauss-2x2
+    real(dp), parameter :: KS1_c21(4) = [-0.7182335127930839_dp, 0.051566846126417175_dp, &
+        -0.7182335127930839_dp, 0.051566846126417175_dp]
+    ! c22 = -eta*xi^2 + eta*xi at the points of gauss-2x2
+    real(dp), parameter :: KS1_c22(4) = [0.5257834230632086_dp, -0.14088324360345808_dp, &
+        -0.5257834230632086_dp, 0.14088324360345808_dp]
+    ! c23 = 2*eta^2*xi - 2*xi at the points of gauss-2x2
+    real(dp), parameter :: KS1_c23(4) = [0.769800358919501_dp, -0.769800358919501_dp, &
+        0.769800358919501_dp, -0.769800358919501_dp]
+    ! c24 = 2*eta*xi^2 - 2*eta at the points of gauss-2x2
+    real(dp), parameter :: KS1_c24(4) = [0.769800358919501_dp, 0.769800358919501_dp, &
+        -0.769800358919501_dp, -0.769800358919501_dp]
+    ! eta = eta at the points of gauss-2x2
     real(dp), parameter :: KS1_eta(4) = [-0.5773502691896257_dp, -0.5773502691896257_dp, &
         0.5773502691896257_dp, 0.5773502691896257_dp]
+    ! w = the point weight at the points of gauss-2x2
     real(dp), parameter :: KS1_w(4) = [1.0_dp, 1.0_dp, 1.0_dp, 1.0_dp]
+    ! xi = xi at the points of gauss-2x2
     real(dp), parameter :: KS1_xi(4) = [-0.5773502691896257_dp, 0.5773502691896257_dp, &
         -0.5773502691896257_dp, 0.5773502691896257_dp]
     real(dp) :: x1, y1, x2, y2, x3, y3, x4, y4, x5, y5, x6, y6, x7, y7, x8, y8, x9, y9, m0, m1, m2
@@ -405,8 +466,8 @@ contains
     K_17_17 = 0.0_dp
     do p = 1, 9   ! gauss-3x3: loop over the 9 points
       block
-        real(dp) :: c0, c1, c10, c11, c12, c13, c14, c15, c16, c17, c18, c19, c2, c20, c21, c22, c23, c24
-        real(dp) :: c3, c4, c5, c6, c7, c8, c9, eta, w, xi, J00, J01, J10, J11, detJ, idet, Ji00, Ji01
+        real(dp) :: c0, c1, c2, c3, c4, c5, c6, c7, c8, c9, c10, c11, c12, c13, c14, c15, c16, c17, c18
+        real(dp) :: c19, c20, c21, c22, c23, c24, eta, w, xi, J00, J01, J10, J11, detJ, idet, Ji00, Ji01
         real(dp) :: Ji10, Ji11, dNdx1, dNdy1, dNdx2, dNdy2, dNdx3, dNdy3, dNdx4, dNdy4, dNdx5, dNdy5, dNdx6
         real(dp) :: dNdy6, dNdx7, dNdy7, dNdx8, dNdy8, dNdx9, dNdy9, sc0, s1, s2, s3, T4, T6, T7, T8, T9
         real(dp) :: T10, T11, T12, T13, T14, T15, T16, T17, T18, T19, T20, T21, T22, T23, T24, T25, T26
@@ -414,6 +475,14 @@ contains
         real(dp) :: T44, T45, T46, T47, T48, T49, T50, T51, T52, T53, T54, T55, T56, T57
         c0 = KS0_c0(p)
         c1 = KS0_c1(p)
+        c2 = KS0_c2(p)
+        c3 = KS0_c3(p)
+        c4 = KS0_c4(p)
+        c5 = KS0_c5(p)
+        c6 = KS0_c6(p)
+        c7 = KS0_c7(p)
+        c8 = KS0_c8(p)
+        c9 = KS0_c9(p)
         c10 = KS0_c10(p)
         c11 = KS0_c11(p)
         c12 = KS0_c12(p)
@@ -424,19 +493,11 @@ contains
         c17 = KS0_c17(p)
         c18 = KS0_c18(p)
         c19 = KS0_c19(p)
-        c2 = KS0_c2(p)
         c20 = KS0_c20(p)
         c21 = KS0_c21(p)
         c22 = KS0_c22(p)
         c23 = KS0_c23(p)
         c24 = KS0_c24(p)
-        c3 = KS0_c3(p)
-        c4 = KS0_c4(p)
-        c5 = KS0_c5(p)
-        c6 = KS0_c6(p)
-        c7 = KS0_c7(p)
-        c8 = KS0_c8(p)
-        c9 = KS0_c9(p)
         eta = KS0_eta(p)
         w = KS0_w(p)
         xi = KS0_xi(p)
@@ -700,13 +761,21 @@ contains
     end do
     do p = 1, 4   ! gauss-2x2: loop over the 4 points
       block
-        real(dp) :: c0, c1, c10, c11, c12, c13, c14, c15, c16, c17, c18, c19, c2, c20, c21, c22, c23, c24
-        real(dp) :: c3, c4, c5, c6, c7, c8, c9, eta, w, xi, J00, J01, J10, J11, detJ, idet, Ji00, Ji01
+        real(dp) :: c0, c1, c2, c3, c4, c5, c6, c7, c8, c9, c10, c11, c12, c13, c14, c15, c16, c17, c18
+        real(dp) :: c19, c20, c21, c22, c23, c24, eta, w, xi, J00, J01, J10, J11, detJ, idet, Ji00, Ji01
         real(dp) :: Ji10, Ji11, dNdx1, dNdy1, dNdx2, dNdy2, dNdx3, dNdy3, dNdx4, dNdy4, dNdx5, dNdy5, dNdx6
         real(dp) :: dNdy6, dNdx7, dNdy7, dNdx8, dNdy8, dNdx9, dNdy9, sc58, s59, T60, T61, T62, T63, T64
         real(dp) :: T65, T66, T67, T68, T69, T70, T71, T72, T73, T74, T75, T76, T77
         c0 = KS1_c0(p)
         c1 = KS1_c1(p)
+        c2 = KS1_c2(p)
+        c3 = KS1_c3(p)
+        c4 = KS1_c4(p)
+        c5 = KS1_c5(p)
+        c6 = KS1_c6(p)
+        c7 = KS1_c7(p)
+        c8 = KS1_c8(p)
+        c9 = KS1_c9(p)
         c10 = KS1_c10(p)
         c11 = KS1_c11(p)
         c12 = KS1_c12(p)
@@ -717,19 +786,11 @@ contains
         c17 = KS1_c17(p)
         c18 = KS1_c18(p)
         c19 = KS1_c19(p)
-        c2 = KS1_c2(p)
         c20 = KS1_c20(p)
         c21 = KS1_c21(p)
         c22 = KS1_c22(p)
         c23 = KS1_c23(p)
         c24 = KS1_c24(p)
-        c3 = KS1_c3(p)
-        c4 = KS1_c4(p)
-        c5 = KS1_c5(p)
-        c6 = KS1_c6(p)
-        c7 = KS1_c7(p)
-        c8 = KS1_c8(p)
-        c9 = KS1_c9(p)
         eta = KS1_eta(p)
         w = KS1_w(p)
         xi = KS1_xi(p)

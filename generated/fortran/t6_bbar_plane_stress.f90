@@ -1,21 +1,29 @@
 ! derive generated kernel: T6 bbar plane-stress
 !
 ! element      T6, 6 nodes, 12 DOFs interleaved u1, v1, u2, v2, ...
-! formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed) [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
-! integration  B^T D_dev B: triangle-d2 (3 points); B^T m (g): triangle-d2 (3 points); -1/kappa (-V/kappa): triangle-d2 (3 points)
-! internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)
+! formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed)
+!              [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
+! integration  B^T D_dev B: triangle-d2 (3 points); B^T m (g): triangle-d2 (3 points); -1/kappa
+!              (-V/kappa): triangle-d2 (3 points)
+! internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+!              (unrolled factorisation of K_aa, no pivoting)
 ! flops        stiffness 1653, validity 167, recovery 834 per element (add, mul, div, sqrt)
 !
 ! arguments (units-agnostic; any consistent set of units):
-!   xy      nodal coordinates, shape (n, 6, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+!   xy      nodal coordinates, shape (n, 6, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+!           node i+1 (counter-clockwise corners first, then mid-side, then interior)
 !   E       Young's modulus (> 0), scalar
 !   nu      Poisson's ratio (-1 < nu < 0.5), scalar
 !   t       thickness t (the out-of-plane thickness)
 !   u       nodal displacements for recovery, shape (n, 12), interleaved u1, v1, u2, v2, ...
-!   K       stiffness, shape (n, 12, 12), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1 internal unknowns are condensed
-!   detJ_min validity: min det J over the points of triangle-d2, shape (n,); <= 0 means an inverted or degenerate element
-!   strain  recovery: strain at the 3 points of triangle-d2, shape (n, 3, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
-!   stress  recovery: stress D strain at the same points, shape (n, 3, 3), [sigma_xx, sigma_yy, tau_xy]
+!   K       stiffness, shape (n, 12, 12), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1
+!           internal unknowns are condensed
+!   detJ_min validity: min det J over the points of triangle-d2, shape (n,); <= 0 means an
+!            inverted or degenerate element
+!   strain  recovery: strain at the 3 points of triangle-d2, shape (n, 3, 3), Voigt [eps_xx,
+!           eps_yy, gamma_xy] (engineering shear)
+!   stress  recovery: stress D strain at the same points, shape (n, 3, 3), [sigma_xx, sigma_yy,
+!           tau_xy]
 !
 ! The kernels do not check their inputs; derive.kernel() checks shapes, finite
 ! coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
@@ -42,30 +50,44 @@ contains
     real(dp), intent(in) :: xy(2, 6)
     real(dp), value, intent(in) :: E, nu, t
     real(dp), intent(out) :: K(12, 12)
+    ! c0 = 2*xi at the points of triangle-d2
     real(dp), parameter :: KS0_c0(3) = [0.3333333333333333_dp, 1.3333333333333333_dp, &
         0.3333333333333333_dp]
+    ! c1 = 2*eta at the points of triangle-d2
     real(dp), parameter :: KS0_c1(3) = [0.3333333333333333_dp, 0.3333333333333333_dp, &
         1.3333333333333333_dp]
-    real(dp), parameter :: KS0_c10(3) = [2.0_dp, 0.0_dp, -2.0_dp]
+    ! c2 = 4*eta + 4*xi - 3 at the points of triangle-d2
     real(dp), parameter :: KS0_c2(3) = [-1.6666666666666667_dp, 0.3333333333333333_dp, &
         0.3333333333333333_dp]
+    ! c3 = 4*xi - 1 at the points of triangle-d2
     real(dp), parameter :: KS0_c3(3) = [-0.3333333333333333_dp, 1.6666666666666667_dp, &
         -0.3333333333333333_dp]
+    ! c4 = 4*eta - 1 at the points of triangle-d2
     real(dp), parameter :: KS0_c4(3) = [-0.3333333333333333_dp, -0.3333333333333333_dp, &
         1.6666666666666667_dp]
+    ! c5 = -4*eta - 8*xi + 4 at the points of triangle-d2
     real(dp), parameter :: KS0_c5(3) = [2.0_dp, -2.0_dp, 0.0_dp]
+    ! c6 = -4*xi at the points of triangle-d2
     real(dp), parameter :: KS0_c6(3) = [-0.6666666666666666_dp, -2.6666666666666665_dp, &
         -0.6666666666666666_dp]
+    ! c7 = 4*eta at the points of triangle-d2
     real(dp), parameter :: KS0_c7(3) = [0.6666666666666666_dp, 0.6666666666666666_dp, &
         2.6666666666666665_dp]
+    ! c8 = 4*xi at the points of triangle-d2
     real(dp), parameter :: KS0_c8(3) = [0.6666666666666666_dp, 2.6666666666666665_dp, &
         0.6666666666666666_dp]
+    ! c9 = -4*eta at the points of triangle-d2
     real(dp), parameter :: KS0_c9(3) = [-0.6666666666666666_dp, -0.6666666666666666_dp, &
         -2.6666666666666665_dp]
+    ! c10 = -8*eta - 4*xi + 4 at the points of triangle-d2
+    real(dp), parameter :: KS0_c10(3) = [2.0_dp, 0.0_dp, -2.0_dp]
+    ! eta = eta at the points of triangle-d2
     real(dp), parameter :: KS0_eta(3) = [0.16666666666666666_dp, 0.16666666666666666_dp, &
         0.6666666666666666_dp]
+    ! w = the point weight at the points of triangle-d2
     real(dp), parameter :: KS0_w(3) = [0.16666666666666666_dp, 0.16666666666666666_dp, &
         0.16666666666666666_dp]
+    ! xi = xi at the points of triangle-d2
     real(dp), parameter :: KS0_xi(3) = [0.16666666666666666_dp, 0.6666666666666666_dp, &
         0.16666666666666666_dp]
     real(dp) :: x1, y1, x2, y2, x3, y3, x4, y4, x5, y5, x6, y6, m0, m1, m2, m3, gx_0_1, gx_0_2, gx_1_0
@@ -199,14 +221,13 @@ contains
     H_0_0 = 0.0_dp
     do p = 1, 3   ! triangle-d2: loop over the 3 points
       block
-        real(dp) :: c0, c1, c10, c2, c3, c4, c5, c6, c7, c8, c9, eta, w, xi, J00, J01, J10, J11, detJ
+        real(dp) :: c0, c1, c2, c3, c4, c5, c6, c7, c8, c9, c10, eta, w, xi, J00, J01, J10, J11, detJ
         real(dp) :: idet, Ji00, Ji01, Ji10, Ji11, dNdx1, dNdy1, dNdx2, dNdy2, dNdx3, dNdy3, dNdx4, dNdy4
         real(dp) :: dNdx5, dNdy5, dNdx6, dNdy6, sc0, s1, s2, s3, T4, T6, T7, T8, T9, T10, T11, T12, T13
         real(dp) :: T14, T15, T16, T17, T18, T19, T20, T21, T22, T23, T24, T25, T26, T27, T28, T29, T30
         real(dp) :: T31, T32, T33, T34, T35, T36, T37, T38, T39, s40
         c0 = KS0_c0(p)
         c1 = KS0_c1(p)
-        c10 = KS0_c10(p)
         c2 = KS0_c2(p)
         c3 = KS0_c3(p)
         c4 = KS0_c4(p)
@@ -215,6 +236,7 @@ contains
         c7 = KS0_c7(p)
         c8 = KS0_c8(p)
         c9 = KS0_c9(p)
+        c10 = KS0_c10(p)
         eta = KS0_eta(p)
         w = KS0_w(p)
         xi = KS0_xi(p)

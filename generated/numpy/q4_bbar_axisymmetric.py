@@ -2,21 +2,30 @@
 derive generated kernel: Q4 bbar axisymmetric
 
 element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
-formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed) [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
-integration  B^T D_dev B: gauss-2x2 (4 points); B^T m (g): gauss-2x2 (4 points); -1/kappa (-V/kappa): gauss-2x2 (4 points)
-internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)
+formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed)
+             [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
+integration  B^T D_dev B: gauss-2x2 (4 points); B^T m (g): gauss-2x2 (4 points); -1/kappa
+             (-V/kappa): gauss-2x2 (4 points)
+internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+             (unrolled factorisation of K_aa, no pivoting)
 flops        stiffness 1544, validity 89, recovery 1042 per element (add, mul, div, sqrt)
 
 arguments (units-agnostic; any consistent set of units):
-  xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior); x is the radius r > 0
+  xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+          node i+1 (counter-clockwise corners first, then mid-side, then interior); x is the
+          radius r > 0
   E       Young's modulus (> 0), scalar
   nu      Poisson's ratio (-1 < nu < 0.5), scalar
   t       ignored: axisymmetric kernels integrate over the full ring, thick = 2 pi r
   u       nodal displacements for recovery, shape (n, 8), interleaved u1, v1, u2, v2, ...
-  K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1 internal unknowns are condensed
-  detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted or degenerate element
-  strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 4), Voigt [eps_rr, eps_zz, eps_tt, gamma_rz] (engineering shear)
-  stress  recovery: stress D strain at the same points, shape (n, 4, 4), [sigma_rr, sigma_zz, sigma_tt, tau_rz]
+  K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1
+          internal unknowns are condensed
+  detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted
+           or degenerate element
+  strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 4), Voigt [eps_rr, eps_zz,
+          eps_tt, gamma_rz] (engineering shear)
+  stress  recovery: stress D strain at the same points, shape (n, 4, 4), [sigma_rr, sigma_zz,
+          sigma_tt, tau_rz]
 
 The kernels do not check their inputs; derive.kernel() checks shapes, finite
 coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
@@ -40,58 +49,111 @@ GENERATOR = "derive.codegen 1.0"
 _CHUNK = 2048
 
 # point constants (shape-function derivatives, monomials, weights) per rule, (points, 1)
+# c0 = eta/4 - 1/4 at the points of gauss-2x2
 _S0_c0 = np.array([-0.39433756729740643, -0.39433756729740643, -0.10566243270259355, -0.10566243270259355]).reshape(4, 1)
+# c1 = xi/4 - 1/4 at the points of gauss-2x2
 _S0_c1 = np.array([-0.39433756729740643, -0.10566243270259355, -0.39433756729740643, -0.10566243270259355]).reshape(4, 1)
-_S0_c10 = np.array([0.16666666666666666, 0.6220084679281462, 0.04465819873852045, 0.16666666666666666]).reshape(4, 1)
-_S0_c11 = np.array([0.04465819873852045, 0.16666666666666666, 0.16666666666666666, 0.6220084679281462]).reshape(4, 1)
-_S0_c12 = np.array([0.16666666666666666, 0.04465819873852045, 0.6220084679281462, 0.16666666666666666]).reshape(4, 1)
-_S0_c13 = np.array([6.283185307179586, 6.283185307179586, 6.283185307179586, 6.283185307179586]).reshape(4, 1)
+# c2 = 1/4 - eta/4 at the points of gauss-2x2
 _S0_c2 = np.array([0.39433756729740643, 0.39433756729740643, 0.10566243270259355, 0.10566243270259355]).reshape(4, 1)
+# c3 = -xi/4 - 1/4 at the points of gauss-2x2
 _S0_c3 = np.array([-0.10566243270259355, -0.39433756729740643, -0.10566243270259355, -0.39433756729740643]).reshape(4, 1)
+# c4 = eta/4 + 1/4 at the points of gauss-2x2
 _S0_c4 = np.array([0.10566243270259355, 0.10566243270259355, 0.39433756729740643, 0.39433756729740643]).reshape(4, 1)
+# c5 = xi/4 + 1/4 at the points of gauss-2x2
 _S0_c5 = np.array([0.10566243270259355, 0.39433756729740643, 0.10566243270259355, 0.39433756729740643]).reshape(4, 1)
+# c6 = -eta/4 - 1/4 at the points of gauss-2x2
 _S0_c6 = np.array([-0.10566243270259355, -0.10566243270259355, -0.39433756729740643, -0.39433756729740643]).reshape(4, 1)
+# c7 = 1/4 - xi/4 at the points of gauss-2x2
 _S0_c7 = np.array([0.39433756729740643, 0.10566243270259355, 0.39433756729740643, 0.10566243270259355]).reshape(4, 1)
+# c8 = eta*xi at the points of gauss-2x2
 _S0_c8 = np.array([0.3333333333333333, -0.3333333333333333, -0.3333333333333333, 0.3333333333333333]).reshape(4, 1)
+# c9 = (eta - 1)*(xi - 1)/4 at the points of gauss-2x2
 _S0_c9 = np.array([0.6220084679281462, 0.16666666666666666, 0.16666666666666666, 0.04465819873852045]).reshape(4, 1)
+# c10 = -(eta - 1)*(xi + 1)/4 at the points of gauss-2x2
+_S0_c10 = np.array([0.16666666666666666, 0.6220084679281462, 0.04465819873852045, 0.16666666666666666]).reshape(4, 1)
+# c11 = (eta + 1)*(xi + 1)/4 at the points of gauss-2x2
+_S0_c11 = np.array([0.04465819873852045, 0.16666666666666666, 0.16666666666666666, 0.6220084679281462]).reshape(4, 1)
+# c12 = -(eta + 1)*(xi - 1)/4 at the points of gauss-2x2
+_S0_c12 = np.array([0.16666666666666666, 0.04465819873852045, 0.6220084679281462, 0.16666666666666666]).reshape(4, 1)
+# c13 = 2*pi*w at the points of gauss-2x2
+_S0_c13 = np.array([6.283185307179586, 6.283185307179586, 6.283185307179586, 6.283185307179586]).reshape(4, 1)
+# eta = eta at the points of gauss-2x2
 _S0_eta = np.array([-0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# xi = xi at the points of gauss-2x2
 _S0_xi = np.array([-0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# eta = eta at the points of gauss-2x2
 _V0_eta = np.array([-0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# xi = xi at the points of gauss-2x2
 _V0_xi = np.array([-0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# c0 = eta/4 - 1/4 at the points of gauss-2x2
 _R0_c0 = np.array([-0.39433756729740643, -0.39433756729740643, -0.10566243270259355, -0.10566243270259355]).reshape(4, 1)
+# c1 = xi/4 - 1/4 at the points of gauss-2x2
 _R0_c1 = np.array([-0.39433756729740643, -0.10566243270259355, -0.39433756729740643, -0.10566243270259355]).reshape(4, 1)
-_R0_c10 = np.array([0.16666666666666666, 0.6220084679281462, 0.04465819873852045, 0.16666666666666666]).reshape(4, 1)
-_R0_c11 = np.array([0.04465819873852045, 0.16666666666666666, 0.16666666666666666, 0.6220084679281462]).reshape(4, 1)
-_R0_c12 = np.array([0.16666666666666666, 0.04465819873852045, 0.6220084679281462, 0.16666666666666666]).reshape(4, 1)
-_R0_c13 = np.array([6.283185307179586, 6.283185307179586, 6.283185307179586, 6.283185307179586]).reshape(4, 1)
+# c2 = 1/4 - eta/4 at the points of gauss-2x2
 _R0_c2 = np.array([0.39433756729740643, 0.39433756729740643, 0.10566243270259355, 0.10566243270259355]).reshape(4, 1)
+# c3 = -xi/4 - 1/4 at the points of gauss-2x2
 _R0_c3 = np.array([-0.10566243270259355, -0.39433756729740643, -0.10566243270259355, -0.39433756729740643]).reshape(4, 1)
+# c4 = eta/4 + 1/4 at the points of gauss-2x2
 _R0_c4 = np.array([0.10566243270259355, 0.10566243270259355, 0.39433756729740643, 0.39433756729740643]).reshape(4, 1)
+# c5 = xi/4 + 1/4 at the points of gauss-2x2
 _R0_c5 = np.array([0.10566243270259355, 0.39433756729740643, 0.10566243270259355, 0.39433756729740643]).reshape(4, 1)
+# c6 = -eta/4 - 1/4 at the points of gauss-2x2
 _R0_c6 = np.array([-0.10566243270259355, -0.10566243270259355, -0.39433756729740643, -0.39433756729740643]).reshape(4, 1)
+# c7 = 1/4 - xi/4 at the points of gauss-2x2
 _R0_c7 = np.array([0.39433756729740643, 0.10566243270259355, 0.39433756729740643, 0.10566243270259355]).reshape(4, 1)
+# c8 = eta*xi at the points of gauss-2x2
 _R0_c8 = np.array([0.3333333333333333, -0.3333333333333333, -0.3333333333333333, 0.3333333333333333]).reshape(4, 1)
+# c9 = (eta - 1)*(xi - 1)/4 at the points of gauss-2x2
 _R0_c9 = np.array([0.6220084679281462, 0.16666666666666666, 0.16666666666666666, 0.04465819873852045]).reshape(4, 1)
+# c10 = -(eta - 1)*(xi + 1)/4 at the points of gauss-2x2
+_R0_c10 = np.array([0.16666666666666666, 0.6220084679281462, 0.04465819873852045, 0.16666666666666666]).reshape(4, 1)
+# c11 = (eta + 1)*(xi + 1)/4 at the points of gauss-2x2
+_R0_c11 = np.array([0.04465819873852045, 0.16666666666666666, 0.16666666666666666, 0.6220084679281462]).reshape(4, 1)
+# c12 = -(eta + 1)*(xi - 1)/4 at the points of gauss-2x2
+_R0_c12 = np.array([0.16666666666666666, 0.04465819873852045, 0.6220084679281462, 0.16666666666666666]).reshape(4, 1)
+# c13 = 2*pi*w at the points of gauss-2x2
+_R0_c13 = np.array([6.283185307179586, 6.283185307179586, 6.283185307179586, 6.283185307179586]).reshape(4, 1)
+# eta = eta at the points of gauss-2x2
 _R0_eta = np.array([-0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# xi = xi at the points of gauss-2x2
 _R0_xi = np.array([-0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# c0 = eta/4 - 1/4 at the points of gauss-2x2
 _R2_c0 = np.array([-0.39433756729740643, -0.39433756729740643, -0.10566243270259355, -0.10566243270259355]).reshape(4, 1)
+# c1 = xi/4 - 1/4 at the points of gauss-2x2
 _R2_c1 = np.array([-0.39433756729740643, -0.10566243270259355, -0.39433756729740643, -0.10566243270259355]).reshape(4, 1)
-_R2_c14 = np.array([-0.20733615597604874, -0.05555555555555555, -0.05555555555555555, -0.014886066246173484]).reshape(4, 1)
-_R2_c15 = np.array([-0.05555555555555555, -0.20733615597604874, -0.014886066246173484, -0.05555555555555555]).reshape(4, 1)
-_R2_c16 = np.array([-0.014886066246173484, -0.05555555555555555, -0.05555555555555555, -0.20733615597604874]).reshape(4, 1)
-_R2_c17 = np.array([-0.05555555555555555, -0.014886066246173484, -0.20733615597604874, -0.05555555555555555]).reshape(4, 1)
-_R2_c18 = np.array([0.41467231195209747, 0.1111111111111111, 0.1111111111111111, 0.02977213249234697]).reshape(4, 1)
-_R2_c19 = np.array([0.1111111111111111, 0.41467231195209747, 0.02977213249234697, 0.1111111111111111]).reshape(4, 1)
+# c2 = 1/4 - eta/4 at the points of gauss-2x2
 _R2_c2 = np.array([0.39433756729740643, 0.39433756729740643, 0.10566243270259355, 0.10566243270259355]).reshape(4, 1)
-_R2_c20 = np.array([0.02977213249234697, 0.1111111111111111, 0.1111111111111111, 0.41467231195209747]).reshape(4, 1)
-_R2_c21 = np.array([0.1111111111111111, 0.02977213249234697, 0.41467231195209747, 0.1111111111111111]).reshape(4, 1)
+# c3 = -xi/4 - 1/4 at the points of gauss-2x2
 _R2_c3 = np.array([-0.10566243270259355, -0.39433756729740643, -0.10566243270259355, -0.39433756729740643]).reshape(4, 1)
+# c4 = eta/4 + 1/4 at the points of gauss-2x2
 _R2_c4 = np.array([0.10566243270259355, 0.10566243270259355, 0.39433756729740643, 0.39433756729740643]).reshape(4, 1)
+# c5 = xi/4 + 1/4 at the points of gauss-2x2
 _R2_c5 = np.array([0.10566243270259355, 0.39433756729740643, 0.10566243270259355, 0.39433756729740643]).reshape(4, 1)
+# c6 = -eta/4 - 1/4 at the points of gauss-2x2
 _R2_c6 = np.array([-0.10566243270259355, -0.10566243270259355, -0.39433756729740643, -0.39433756729740643]).reshape(4, 1)
+# c7 = 1/4 - xi/4 at the points of gauss-2x2
 _R2_c7 = np.array([0.39433756729740643, 0.10566243270259355, 0.39433756729740643, 0.10566243270259355]).reshape(4, 1)
+# c8 = eta*xi at the points of gauss-2x2
 _R2_c8 = np.array([0.3333333333333333, -0.3333333333333333, -0.3333333333333333, 0.3333333333333333]).reshape(4, 1)
+# c14 = -(eta - 1)*(xi - 1)/12 at the points of gauss-2x2
+_R2_c14 = np.array([-0.20733615597604874, -0.05555555555555555, -0.05555555555555555, -0.014886066246173484]).reshape(4, 1)
+# c15 = (eta - 1)*(xi + 1)/12 at the points of gauss-2x2
+_R2_c15 = np.array([-0.05555555555555555, -0.20733615597604874, -0.014886066246173484, -0.05555555555555555]).reshape(4, 1)
+# c16 = -(eta + 1)*(xi + 1)/12 at the points of gauss-2x2
+_R2_c16 = np.array([-0.014886066246173484, -0.05555555555555555, -0.05555555555555555, -0.20733615597604874]).reshape(4, 1)
+# c17 = (eta + 1)*(xi - 1)/12 at the points of gauss-2x2
+_R2_c17 = np.array([-0.05555555555555555, -0.014886066246173484, -0.20733615597604874, -0.05555555555555555]).reshape(4, 1)
+# c18 = (eta - 1)*(xi - 1)/6 at the points of gauss-2x2
+_R2_c18 = np.array([0.41467231195209747, 0.1111111111111111, 0.1111111111111111, 0.02977213249234697]).reshape(4, 1)
+# c19 = -(eta - 1)*(xi + 1)/6 at the points of gauss-2x2
+_R2_c19 = np.array([0.1111111111111111, 0.41467231195209747, 0.02977213249234697, 0.1111111111111111]).reshape(4, 1)
+# c20 = (eta + 1)*(xi + 1)/6 at the points of gauss-2x2
+_R2_c20 = np.array([0.02977213249234697, 0.1111111111111111, 0.1111111111111111, 0.41467231195209747]).reshape(4, 1)
+# c21 = -(eta + 1)*(xi - 1)/6 at the points of gauss-2x2
+_R2_c21 = np.array([0.1111111111111111, 0.02977213249234697, 0.41467231195209747, 0.1111111111111111]).reshape(4, 1)
+# eta = eta at the points of gauss-2x2
 _R2_eta = np.array([-0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# xi = xi at the points of gauss-2x2
 _R2_xi = np.array([-0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
 
 
@@ -140,10 +202,6 @@ def _stiffness_chunk(X, mat, buf):
     # gauss-2x2: all 4 points at once
     c0 = _S0_c0
     c1 = _S0_c1
-    c10 = _S0_c10
-    c11 = _S0_c11
-    c12 = _S0_c12
-    c13 = _S0_c13
     c2 = _S0_c2
     c3 = _S0_c3
     c4 = _S0_c4
@@ -152,6 +210,10 @@ def _stiffness_chunk(X, mat, buf):
     c7 = _S0_c7
     c8 = _S0_c8
     c9 = _S0_c9
+    c10 = _S0_c10
+    c11 = _S0_c11
+    c12 = _S0_c12
+    c13 = _S0_c13
     eta = _S0_eta
     xi = _S0_xi
     J00 = gx_1_0 + eta*gx_1_1
@@ -386,10 +448,6 @@ def _recovery_chunk(X, U, mat, strain, stress):
     # gauss-2x2: all 4 points at once
     c0 = _R0_c0
     c1 = _R0_c1
-    c10 = _R0_c10
-    c11 = _R0_c11
-    c12 = _R0_c12
-    c13 = _R0_c13
     c2 = _R0_c2
     c3 = _R0_c3
     c4 = _R0_c4
@@ -398,6 +456,10 @@ def _recovery_chunk(X, U, mat, strain, stress):
     c7 = _R0_c7
     c8 = _R0_c8
     c9 = _R0_c9
+    c10 = _R0_c10
+    c11 = _R0_c11
+    c12 = _R0_c12
+    c13 = _R0_c13
     eta = _R0_eta
     xi = _R0_xi
     J00 = gx_1_0 + eta*gx_1_1
@@ -437,21 +499,21 @@ def _recovery_chunk(X, U, mat, strain, stress):
     # gauss-2x2: all 4 points at once
     c0 = _R2_c0
     c1 = _R2_c1
-    c14 = _R2_c14
-    c15 = _R2_c15
-    c16 = _R2_c16
-    c17 = _R2_c17
-    c18 = _R2_c18
-    c19 = _R2_c19
     c2 = _R2_c2
-    c20 = _R2_c20
-    c21 = _R2_c21
     c3 = _R2_c3
     c4 = _R2_c4
     c5 = _R2_c5
     c6 = _R2_c6
     c7 = _R2_c7
     c8 = _R2_c8
+    c14 = _R2_c14
+    c15 = _R2_c15
+    c16 = _R2_c16
+    c17 = _R2_c17
+    c18 = _R2_c18
+    c19 = _R2_c19
+    c20 = _R2_c20
+    c21 = _R2_c21
     eta = _R2_eta
     xi = _R2_xi
     J00 = gx_1_0 + eta*gx_1_1

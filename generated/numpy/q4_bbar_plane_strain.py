@@ -2,21 +2,29 @@
 derive generated kernel: Q4 bbar plane-strain
 
 element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
-formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed) [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
-integration  B^T D_dev B: gauss-2x2 (4 points); B^T m (g): gauss-2x2 (4 points); -1/kappa (-V/kappa): gauss-2x2 (4 points)
-internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)
+formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed)
+             [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
+integration  B^T D_dev B: gauss-2x2 (4 points); B^T m (g): gauss-2x2 (4 points); -1/kappa
+             (-V/kappa): gauss-2x2 (4 points)
+internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+             (unrolled factorisation of K_aa, no pivoting)
 flops        stiffness 1109, validity 89, recovery 791 per element (add, mul, div, sqrt)
 
 arguments (units-agnostic; any consistent set of units):
-  xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+  xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+          node i+1 (counter-clockwise corners first, then mid-side, then interior)
   E       Young's modulus (> 0), scalar
   nu      Poisson's ratio (-1 < nu < 0.5), scalar
   t       thickness t (the out-of-plane thickness)
   u       nodal displacements for recovery, shape (n, 8), interleaved u1, v1, u2, v2, ...
-  K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1 internal unknowns are condensed
-  detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted or degenerate element
-  strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
-  stress  recovery: stress D strain at the same points, shape (n, 4, 3), [sigma_xx, sigma_yy, tau_xy]
+  K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1
+          internal unknowns are condensed
+  detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted
+           or degenerate element
+  strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 3), Voigt [eps_xx, eps_yy,
+          gamma_xy] (engineering shear)
+  stress  recovery: stress D strain at the same points, shape (n, 4, 3), [sigma_xx, sigma_yy,
+          tau_xy]
 
 The kernels do not check their inputs; derive.kernel() checks shapes, finite
 coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
@@ -40,39 +48,73 @@ GENERATOR = "derive.codegen 1.0"
 _CHUNK = 2048
 
 # point constants (shape-function derivatives, monomials, weights) per rule, (points, 1)
+# c0 = eta/4 - 1/4 at the points of gauss-2x2
 _S0_c0 = np.array([-0.39433756729740643, -0.39433756729740643, -0.10566243270259355, -0.10566243270259355]).reshape(4, 1)
+# c1 = xi/4 - 1/4 at the points of gauss-2x2
 _S0_c1 = np.array([-0.39433756729740643, -0.10566243270259355, -0.39433756729740643, -0.10566243270259355]).reshape(4, 1)
+# c2 = 1/4 - eta/4 at the points of gauss-2x2
 _S0_c2 = np.array([0.39433756729740643, 0.39433756729740643, 0.10566243270259355, 0.10566243270259355]).reshape(4, 1)
+# c3 = -xi/4 - 1/4 at the points of gauss-2x2
 _S0_c3 = np.array([-0.10566243270259355, -0.39433756729740643, -0.10566243270259355, -0.39433756729740643]).reshape(4, 1)
+# c4 = eta/4 + 1/4 at the points of gauss-2x2
 _S0_c4 = np.array([0.10566243270259355, 0.10566243270259355, 0.39433756729740643, 0.39433756729740643]).reshape(4, 1)
+# c5 = xi/4 + 1/4 at the points of gauss-2x2
 _S0_c5 = np.array([0.10566243270259355, 0.39433756729740643, 0.10566243270259355, 0.39433756729740643]).reshape(4, 1)
+# c6 = -eta/4 - 1/4 at the points of gauss-2x2
 _S0_c6 = np.array([-0.10566243270259355, -0.10566243270259355, -0.39433756729740643, -0.39433756729740643]).reshape(4, 1)
+# c7 = 1/4 - xi/4 at the points of gauss-2x2
 _S0_c7 = np.array([0.39433756729740643, 0.10566243270259355, 0.39433756729740643, 0.10566243270259355]).reshape(4, 1)
+# eta = eta at the points of gauss-2x2
 _S0_eta = np.array([-0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# w = the point weight at the points of gauss-2x2
 _S0_w = np.array([1.0, 1.0, 1.0, 1.0]).reshape(4, 1)
+# xi = xi at the points of gauss-2x2
 _S0_xi = np.array([-0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# eta = eta at the points of gauss-2x2
 _V0_eta = np.array([-0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# xi = xi at the points of gauss-2x2
 _V0_xi = np.array([-0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# c0 = eta/4 - 1/4 at the points of gauss-2x2
 _R0_c0 = np.array([-0.39433756729740643, -0.39433756729740643, -0.10566243270259355, -0.10566243270259355]).reshape(4, 1)
+# c1 = xi/4 - 1/4 at the points of gauss-2x2
 _R0_c1 = np.array([-0.39433756729740643, -0.10566243270259355, -0.39433756729740643, -0.10566243270259355]).reshape(4, 1)
+# c2 = 1/4 - eta/4 at the points of gauss-2x2
 _R0_c2 = np.array([0.39433756729740643, 0.39433756729740643, 0.10566243270259355, 0.10566243270259355]).reshape(4, 1)
+# c3 = -xi/4 - 1/4 at the points of gauss-2x2
 _R0_c3 = np.array([-0.10566243270259355, -0.39433756729740643, -0.10566243270259355, -0.39433756729740643]).reshape(4, 1)
+# c4 = eta/4 + 1/4 at the points of gauss-2x2
 _R0_c4 = np.array([0.10566243270259355, 0.10566243270259355, 0.39433756729740643, 0.39433756729740643]).reshape(4, 1)
+# c5 = xi/4 + 1/4 at the points of gauss-2x2
 _R0_c5 = np.array([0.10566243270259355, 0.39433756729740643, 0.10566243270259355, 0.39433756729740643]).reshape(4, 1)
+# c6 = -eta/4 - 1/4 at the points of gauss-2x2
 _R0_c6 = np.array([-0.10566243270259355, -0.10566243270259355, -0.39433756729740643, -0.39433756729740643]).reshape(4, 1)
+# c7 = 1/4 - xi/4 at the points of gauss-2x2
 _R0_c7 = np.array([0.39433756729740643, 0.10566243270259355, 0.39433756729740643, 0.10566243270259355]).reshape(4, 1)
+# eta = eta at the points of gauss-2x2
 _R0_eta = np.array([-0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# w = the point weight at the points of gauss-2x2
 _R0_w = np.array([1.0, 1.0, 1.0, 1.0]).reshape(4, 1)
+# xi = xi at the points of gauss-2x2
 _R0_xi = np.array([-0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# c0 = eta/4 - 1/4 at the points of gauss-2x2
 _R2_c0 = np.array([-0.39433756729740643, -0.39433756729740643, -0.10566243270259355, -0.10566243270259355]).reshape(4, 1)
+# c1 = xi/4 - 1/4 at the points of gauss-2x2
 _R2_c1 = np.array([-0.39433756729740643, -0.10566243270259355, -0.39433756729740643, -0.10566243270259355]).reshape(4, 1)
+# c2 = 1/4 - eta/4 at the points of gauss-2x2
 _R2_c2 = np.array([0.39433756729740643, 0.39433756729740643, 0.10566243270259355, 0.10566243270259355]).reshape(4, 1)
+# c3 = -xi/4 - 1/4 at the points of gauss-2x2
 _R2_c3 = np.array([-0.10566243270259355, -0.39433756729740643, -0.10566243270259355, -0.39433756729740643]).reshape(4, 1)
+# c4 = eta/4 + 1/4 at the points of gauss-2x2
 _R2_c4 = np.array([0.10566243270259355, 0.10566243270259355, 0.39433756729740643, 0.39433756729740643]).reshape(4, 1)
+# c5 = xi/4 + 1/4 at the points of gauss-2x2
 _R2_c5 = np.array([0.10566243270259355, 0.39433756729740643, 0.10566243270259355, 0.39433756729740643]).reshape(4, 1)
+# c6 = -eta/4 - 1/4 at the points of gauss-2x2
 _R2_c6 = np.array([-0.10566243270259355, -0.10566243270259355, -0.39433756729740643, -0.39433756729740643]).reshape(4, 1)
+# c7 = 1/4 - xi/4 at the points of gauss-2x2
 _R2_c7 = np.array([0.39433756729740643, 0.10566243270259355, 0.39433756729740643, 0.10566243270259355]).reshape(4, 1)
+# eta = eta at the points of gauss-2x2
 _R2_eta = np.array([-0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# xi = xi at the points of gauss-2x2
 _R2_xi = np.array([-0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
 
 

@@ -7,15 +7,20 @@ integration  B^T D B: gauss-2x2 (4 points)
 flops        stiffness 1237, validity 89, recovery 485 per element (add, mul, div, sqrt)
 
 arguments (units-agnostic; any consistent set of units):
-  xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior); x is the radius r > 0
+  xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+          node i+1 (counter-clockwise corners first, then mid-side, then interior); x is the
+          radius r > 0
   E       Young's modulus (> 0), scalar
   nu      Poisson's ratio (-1 < nu < 0.5), scalar
   t       ignored: axisymmetric kernels integrate over the full ring, thick = 2 pi r
   u       nodal displacements for recovery, shape (n, 8), interleaved u1, v1, u2, v2, ...
   K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric
-  detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted or degenerate element
-  strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 4), Voigt [eps_rr, eps_zz, eps_tt, gamma_rz] (engineering shear)
-  stress  recovery: stress D strain at the same points, shape (n, 4, 4), [sigma_rr, sigma_zz, sigma_tt, tau_rz]
+  detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted
+           or degenerate element
+  strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 4), Voigt [eps_rr, eps_zz,
+          eps_tt, gamma_rz] (engineering shear)
+  stress  recovery: stress D strain at the same points, shape (n, 4, 4), [sigma_rr, sigma_zz,
+          sigma_tt, tau_rz]
 
 The kernels do not check their inputs; derive.kernel() checks shapes, finite
 coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
@@ -39,38 +44,71 @@ GENERATOR = "derive.codegen 1.0"
 _CHUNK = 2048
 
 # point constants (shape-function derivatives, monomials, weights) per rule, (points, 1)
+# c0 = eta/4 - 1/4 at the points of gauss-2x2
 _S0_c0 = np.array([-0.39433756729740643, -0.39433756729740643, -0.10566243270259355, -0.10566243270259355]).reshape(4, 1)
+# c1 = xi/4 - 1/4 at the points of gauss-2x2
 _S0_c1 = np.array([-0.39433756729740643, -0.10566243270259355, -0.39433756729740643, -0.10566243270259355]).reshape(4, 1)
-_S0_c10 = np.array([0.16666666666666666, 0.6220084679281462, 0.04465819873852045, 0.16666666666666666]).reshape(4, 1)
-_S0_c11 = np.array([0.04465819873852045, 0.16666666666666666, 0.16666666666666666, 0.6220084679281462]).reshape(4, 1)
-_S0_c12 = np.array([0.16666666666666666, 0.04465819873852045, 0.6220084679281462, 0.16666666666666666]).reshape(4, 1)
-_S0_c13 = np.array([6.283185307179586, 6.283185307179586, 6.283185307179586, 6.283185307179586]).reshape(4, 1)
+# c2 = 1/4 - eta/4 at the points of gauss-2x2
 _S0_c2 = np.array([0.39433756729740643, 0.39433756729740643, 0.10566243270259355, 0.10566243270259355]).reshape(4, 1)
+# c3 = -xi/4 - 1/4 at the points of gauss-2x2
 _S0_c3 = np.array([-0.10566243270259355, -0.39433756729740643, -0.10566243270259355, -0.39433756729740643]).reshape(4, 1)
+# c4 = eta/4 + 1/4 at the points of gauss-2x2
 _S0_c4 = np.array([0.10566243270259355, 0.10566243270259355, 0.39433756729740643, 0.39433756729740643]).reshape(4, 1)
+# c5 = xi/4 + 1/4 at the points of gauss-2x2
 _S0_c5 = np.array([0.10566243270259355, 0.39433756729740643, 0.10566243270259355, 0.39433756729740643]).reshape(4, 1)
+# c6 = -eta/4 - 1/4 at the points of gauss-2x2
 _S0_c6 = np.array([-0.10566243270259355, -0.10566243270259355, -0.39433756729740643, -0.39433756729740643]).reshape(4, 1)
+# c7 = 1/4 - xi/4 at the points of gauss-2x2
 _S0_c7 = np.array([0.39433756729740643, 0.10566243270259355, 0.39433756729740643, 0.10566243270259355]).reshape(4, 1)
+# c8 = eta*xi at the points of gauss-2x2
 _S0_c8 = np.array([0.3333333333333333, -0.3333333333333333, -0.3333333333333333, 0.3333333333333333]).reshape(4, 1)
+# c9 = (eta - 1)*(xi - 1)/4 at the points of gauss-2x2
 _S0_c9 = np.array([0.6220084679281462, 0.16666666666666666, 0.16666666666666666, 0.04465819873852045]).reshape(4, 1)
+# c10 = -(eta - 1)*(xi + 1)/4 at the points of gauss-2x2
+_S0_c10 = np.array([0.16666666666666666, 0.6220084679281462, 0.04465819873852045, 0.16666666666666666]).reshape(4, 1)
+# c11 = (eta + 1)*(xi + 1)/4 at the points of gauss-2x2
+_S0_c11 = np.array([0.04465819873852045, 0.16666666666666666, 0.16666666666666666, 0.6220084679281462]).reshape(4, 1)
+# c12 = -(eta + 1)*(xi - 1)/4 at the points of gauss-2x2
+_S0_c12 = np.array([0.16666666666666666, 0.04465819873852045, 0.6220084679281462, 0.16666666666666666]).reshape(4, 1)
+# c13 = 2*pi*w at the points of gauss-2x2
+_S0_c13 = np.array([6.283185307179586, 6.283185307179586, 6.283185307179586, 6.283185307179586]).reshape(4, 1)
+# eta = eta at the points of gauss-2x2
 _S0_eta = np.array([-0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# xi = xi at the points of gauss-2x2
 _S0_xi = np.array([-0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# eta = eta at the points of gauss-2x2
 _V0_eta = np.array([-0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# xi = xi at the points of gauss-2x2
 _V0_xi = np.array([-0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# c0 = eta/4 - 1/4 at the points of gauss-2x2
 _R1_c0 = np.array([-0.39433756729740643, -0.39433756729740643, -0.10566243270259355, -0.10566243270259355]).reshape(4, 1)
+# c1 = xi/4 - 1/4 at the points of gauss-2x2
 _R1_c1 = np.array([-0.39433756729740643, -0.10566243270259355, -0.39433756729740643, -0.10566243270259355]).reshape(4, 1)
-_R1_c10 = np.array([0.16666666666666666, 0.6220084679281462, 0.04465819873852045, 0.16666666666666666]).reshape(4, 1)
-_R1_c11 = np.array([0.04465819873852045, 0.16666666666666666, 0.16666666666666666, 0.6220084679281462]).reshape(4, 1)
-_R1_c12 = np.array([0.16666666666666666, 0.04465819873852045, 0.6220084679281462, 0.16666666666666666]).reshape(4, 1)
+# c2 = 1/4 - eta/4 at the points of gauss-2x2
 _R1_c2 = np.array([0.39433756729740643, 0.39433756729740643, 0.10566243270259355, 0.10566243270259355]).reshape(4, 1)
+# c3 = -xi/4 - 1/4 at the points of gauss-2x2
 _R1_c3 = np.array([-0.10566243270259355, -0.39433756729740643, -0.10566243270259355, -0.39433756729740643]).reshape(4, 1)
+# c4 = eta/4 + 1/4 at the points of gauss-2x2
 _R1_c4 = np.array([0.10566243270259355, 0.10566243270259355, 0.39433756729740643, 0.39433756729740643]).reshape(4, 1)
+# c5 = xi/4 + 1/4 at the points of gauss-2x2
 _R1_c5 = np.array([0.10566243270259355, 0.39433756729740643, 0.10566243270259355, 0.39433756729740643]).reshape(4, 1)
+# c6 = -eta/4 - 1/4 at the points of gauss-2x2
 _R1_c6 = np.array([-0.10566243270259355, -0.10566243270259355, -0.39433756729740643, -0.39433756729740643]).reshape(4, 1)
+# c7 = 1/4 - xi/4 at the points of gauss-2x2
 _R1_c7 = np.array([0.39433756729740643, 0.10566243270259355, 0.39433756729740643, 0.10566243270259355]).reshape(4, 1)
+# c8 = eta*xi at the points of gauss-2x2
 _R1_c8 = np.array([0.3333333333333333, -0.3333333333333333, -0.3333333333333333, 0.3333333333333333]).reshape(4, 1)
+# c9 = (eta - 1)*(xi - 1)/4 at the points of gauss-2x2
 _R1_c9 = np.array([0.6220084679281462, 0.16666666666666666, 0.16666666666666666, 0.04465819873852045]).reshape(4, 1)
+# c10 = -(eta - 1)*(xi + 1)/4 at the points of gauss-2x2
+_R1_c10 = np.array([0.16666666666666666, 0.6220084679281462, 0.04465819873852045, 0.16666666666666666]).reshape(4, 1)
+# c11 = (eta + 1)*(xi + 1)/4 at the points of gauss-2x2
+_R1_c11 = np.array([0.04465819873852045, 0.16666666666666666, 0.16666666666666666, 0.6220084679281462]).reshape(4, 1)
+# c12 = -(eta + 1)*(xi - 1)/4 at the points of gauss-2x2
+_R1_c12 = np.array([0.16666666666666666, 0.04465819873852045, 0.6220084679281462, 0.16666666666666666]).reshape(4, 1)
+# eta = eta at the points of gauss-2x2
 _R1_eta = np.array([-0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# xi = xi at the points of gauss-2x2
 _R1_xi = np.array([-0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
 
 
@@ -113,10 +151,6 @@ def _stiffness_chunk(X, mat, buf):
     # gauss-2x2: all 4 points at once
     c0 = _S0_c0
     c1 = _S0_c1
-    c10 = _S0_c10
-    c11 = _S0_c11
-    c12 = _S0_c12
-    c13 = _S0_c13
     c2 = _S0_c2
     c3 = _S0_c3
     c4 = _S0_c4
@@ -125,6 +159,10 @@ def _stiffness_chunk(X, mat, buf):
     c7 = _S0_c7
     c8 = _S0_c8
     c9 = _S0_c9
+    c10 = _S0_c10
+    c11 = _S0_c11
+    c12 = _S0_c12
+    c13 = _S0_c13
     eta = _S0_eta
     xi = _S0_xi
     J00 = gx_1_0 + eta*gx_1_1
@@ -337,9 +375,6 @@ def _recovery_chunk(X, U, mat, strain, stress):
     # gauss-2x2: all 4 points at once
     c0 = _R1_c0
     c1 = _R1_c1
-    c10 = _R1_c10
-    c11 = _R1_c11
-    c12 = _R1_c12
     c2 = _R1_c2
     c3 = _R1_c3
     c4 = _R1_c4
@@ -348,6 +383,9 @@ def _recovery_chunk(X, U, mat, strain, stress):
     c7 = _R1_c7
     c8 = _R1_c8
     c9 = _R1_c9
+    c10 = _R1_c10
+    c11 = _R1_c11
+    c12 = _R1_c12
     eta = _R1_eta
     xi = _R1_xi
     J00 = gx_1_0 + eta*gx_1_1

@@ -2,21 +2,29 @@
 derive generated kernel: Q4 incompatible plane-stress
 
 element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
-formulation  incompatible bubble modes, own Jacobian (fails the patch test off parallelograms) [Wilson, Taylor, Doherty & Ghaboussi (1973)]
-integration  B^T D B: gauss-2x2 (4 points); B^T D G: gauss-2x2 (4 points); G^T D G: gauss-2x2 (4 points)
-internal     4 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)
+formulation  incompatible bubble modes, own Jacobian (fails the patch test off parallelograms)
+             [Wilson, Taylor, Doherty & Ghaboussi (1973)]
+integration  B^T D B: gauss-2x2 (4 points); B^T D G: gauss-2x2 (4 points); G^T D G: gauss-2x2 (4
+             points)
+internal     4 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+             (unrolled factorisation of K_aa, no pivoting)
 flops        stiffness 2427, validity 89, recovery 1691 per element (add, mul, div, sqrt)
 
 arguments (units-agnostic; any consistent set of units):
-  xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+  xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+          node i+1 (counter-clockwise corners first, then mid-side, then interior)
   E       Young's modulus (> 0), scalar
   nu      Poisson's ratio (-1 < nu < 0.5), scalar
   t       thickness t (the out-of-plane thickness)
   u       nodal displacements for recovery, shape (n, 8), interleaved u1, v1, u2, v2, ...
-  K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 4 internal unknowns are condensed
-  detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted or degenerate element
-  strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
-  stress  recovery: stress D strain at the same points, shape (n, 4, 3), [sigma_xx, sigma_yy, tau_xy]
+  K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 4
+          internal unknowns are condensed
+  detJ_min validity: min det J over the points of gauss-2x2, shape (n,); <= 0 means an inverted
+           or degenerate element
+  strain  recovery: strain at the 4 points of gauss-2x2, shape (n, 4, 3), Voigt [eps_xx, eps_yy,
+          gamma_xy] (engineering shear)
+  stress  recovery: stress D strain at the same points, shape (n, 4, 3), [sigma_xx, sigma_yy,
+          tau_xy]
 
 The kernels do not check their inputs; derive.kernel() checks shapes, finite
 coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
@@ -40,45 +48,85 @@ GENERATOR = "derive.codegen 1.0"
 _CHUNK = 2048
 
 # point constants (shape-function derivatives, monomials, weights) per rule, (points, 1)
+# c0 = eta/4 - 1/4 at the points of gauss-2x2
 _S0_c0 = np.array([-0.39433756729740643, -0.39433756729740643, -0.10566243270259355, -0.10566243270259355]).reshape(4, 1)
+# c1 = xi/4 - 1/4 at the points of gauss-2x2
 _S0_c1 = np.array([-0.39433756729740643, -0.10566243270259355, -0.39433756729740643, -0.10566243270259355]).reshape(4, 1)
-_S0_c10 = np.array([1.1547005383792515, 1.1547005383792515, -1.1547005383792515, -1.1547005383792515]).reshape(4, 1)
+# c2 = 1/4 - eta/4 at the points of gauss-2x2
 _S0_c2 = np.array([0.39433756729740643, 0.39433756729740643, 0.10566243270259355, 0.10566243270259355]).reshape(4, 1)
+# c3 = -xi/4 - 1/4 at the points of gauss-2x2
 _S0_c3 = np.array([-0.10566243270259355, -0.39433756729740643, -0.10566243270259355, -0.39433756729740643]).reshape(4, 1)
+# c4 = eta/4 + 1/4 at the points of gauss-2x2
 _S0_c4 = np.array([0.10566243270259355, 0.10566243270259355, 0.39433756729740643, 0.39433756729740643]).reshape(4, 1)
+# c5 = xi/4 + 1/4 at the points of gauss-2x2
 _S0_c5 = np.array([0.10566243270259355, 0.39433756729740643, 0.10566243270259355, 0.39433756729740643]).reshape(4, 1)
+# c6 = -eta/4 - 1/4 at the points of gauss-2x2
 _S0_c6 = np.array([-0.10566243270259355, -0.10566243270259355, -0.39433756729740643, -0.39433756729740643]).reshape(4, 1)
+# c7 = 1/4 - xi/4 at the points of gauss-2x2
 _S0_c7 = np.array([0.39433756729740643, 0.10566243270259355, 0.39433756729740643, 0.10566243270259355]).reshape(4, 1)
+# c9 = -2*xi at the points of gauss-2x2
 _S0_c9 = np.array([1.1547005383792515, -1.1547005383792515, 1.1547005383792515, -1.1547005383792515]).reshape(4, 1)
+# c10 = -2*eta at the points of gauss-2x2
+_S0_c10 = np.array([1.1547005383792515, 1.1547005383792515, -1.1547005383792515, -1.1547005383792515]).reshape(4, 1)
+# eta = eta at the points of gauss-2x2
 _S0_eta = np.array([-0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# w = the point weight at the points of gauss-2x2
 _S0_w = np.array([1.0, 1.0, 1.0, 1.0]).reshape(4, 1)
+# xi = xi at the points of gauss-2x2
 _S0_xi = np.array([-0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# eta = eta at the points of gauss-2x2
 _V0_eta = np.array([-0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# xi = xi at the points of gauss-2x2
 _V0_xi = np.array([-0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# c0 = eta/4 - 1/4 at the points of gauss-2x2
 _R0_c0 = np.array([-0.39433756729740643, -0.39433756729740643, -0.10566243270259355, -0.10566243270259355]).reshape(4, 1)
+# c1 = xi/4 - 1/4 at the points of gauss-2x2
 _R0_c1 = np.array([-0.39433756729740643, -0.10566243270259355, -0.39433756729740643, -0.10566243270259355]).reshape(4, 1)
-_R0_c10 = np.array([1.1547005383792515, 1.1547005383792515, -1.1547005383792515, -1.1547005383792515]).reshape(4, 1)
+# c2 = 1/4 - eta/4 at the points of gauss-2x2
 _R0_c2 = np.array([0.39433756729740643, 0.39433756729740643, 0.10566243270259355, 0.10566243270259355]).reshape(4, 1)
+# c3 = -xi/4 - 1/4 at the points of gauss-2x2
 _R0_c3 = np.array([-0.10566243270259355, -0.39433756729740643, -0.10566243270259355, -0.39433756729740643]).reshape(4, 1)
+# c4 = eta/4 + 1/4 at the points of gauss-2x2
 _R0_c4 = np.array([0.10566243270259355, 0.10566243270259355, 0.39433756729740643, 0.39433756729740643]).reshape(4, 1)
+# c5 = xi/4 + 1/4 at the points of gauss-2x2
 _R0_c5 = np.array([0.10566243270259355, 0.39433756729740643, 0.10566243270259355, 0.39433756729740643]).reshape(4, 1)
+# c6 = -eta/4 - 1/4 at the points of gauss-2x2
 _R0_c6 = np.array([-0.10566243270259355, -0.10566243270259355, -0.39433756729740643, -0.39433756729740643]).reshape(4, 1)
+# c7 = 1/4 - xi/4 at the points of gauss-2x2
 _R0_c7 = np.array([0.39433756729740643, 0.10566243270259355, 0.39433756729740643, 0.10566243270259355]).reshape(4, 1)
+# c9 = -2*xi at the points of gauss-2x2
 _R0_c9 = np.array([1.1547005383792515, -1.1547005383792515, 1.1547005383792515, -1.1547005383792515]).reshape(4, 1)
+# c10 = -2*eta at the points of gauss-2x2
+_R0_c10 = np.array([1.1547005383792515, 1.1547005383792515, -1.1547005383792515, -1.1547005383792515]).reshape(4, 1)
+# eta = eta at the points of gauss-2x2
 _R0_eta = np.array([-0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# w = the point weight at the points of gauss-2x2
 _R0_w = np.array([1.0, 1.0, 1.0, 1.0]).reshape(4, 1)
+# xi = xi at the points of gauss-2x2
 _R0_xi = np.array([-0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# c0 = eta/4 - 1/4 at the points of gauss-2x2
 _R2_c0 = np.array([-0.39433756729740643, -0.39433756729740643, -0.10566243270259355, -0.10566243270259355]).reshape(4, 1)
+# c1 = xi/4 - 1/4 at the points of gauss-2x2
 _R2_c1 = np.array([-0.39433756729740643, -0.10566243270259355, -0.39433756729740643, -0.10566243270259355]).reshape(4, 1)
-_R2_c10 = np.array([1.1547005383792515, 1.1547005383792515, -1.1547005383792515, -1.1547005383792515]).reshape(4, 1)
+# c2 = 1/4 - eta/4 at the points of gauss-2x2
 _R2_c2 = np.array([0.39433756729740643, 0.39433756729740643, 0.10566243270259355, 0.10566243270259355]).reshape(4, 1)
+# c3 = -xi/4 - 1/4 at the points of gauss-2x2
 _R2_c3 = np.array([-0.10566243270259355, -0.39433756729740643, -0.10566243270259355, -0.39433756729740643]).reshape(4, 1)
+# c4 = eta/4 + 1/4 at the points of gauss-2x2
 _R2_c4 = np.array([0.10566243270259355, 0.10566243270259355, 0.39433756729740643, 0.39433756729740643]).reshape(4, 1)
+# c5 = xi/4 + 1/4 at the points of gauss-2x2
 _R2_c5 = np.array([0.10566243270259355, 0.39433756729740643, 0.10566243270259355, 0.39433756729740643]).reshape(4, 1)
+# c6 = -eta/4 - 1/4 at the points of gauss-2x2
 _R2_c6 = np.array([-0.10566243270259355, -0.10566243270259355, -0.39433756729740643, -0.39433756729740643]).reshape(4, 1)
+# c7 = 1/4 - xi/4 at the points of gauss-2x2
 _R2_c7 = np.array([0.39433756729740643, 0.10566243270259355, 0.39433756729740643, 0.10566243270259355]).reshape(4, 1)
+# c9 = -2*xi at the points of gauss-2x2
 _R2_c9 = np.array([1.1547005383792515, -1.1547005383792515, 1.1547005383792515, -1.1547005383792515]).reshape(4, 1)
+# c10 = -2*eta at the points of gauss-2x2
+_R2_c10 = np.array([1.1547005383792515, 1.1547005383792515, -1.1547005383792515, -1.1547005383792515]).reshape(4, 1)
+# eta = eta at the points of gauss-2x2
 _R2_eta = np.array([-0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# xi = xi at the points of gauss-2x2
 _R2_xi = np.array([-0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
 
 
@@ -121,7 +169,6 @@ def _stiffness_chunk(X, mat, buf):
     # gauss-2x2: all 4 points at once
     c0 = _S0_c0
     c1 = _S0_c1
-    c10 = _S0_c10
     c2 = _S0_c2
     c3 = _S0_c3
     c4 = _S0_c4
@@ -129,6 +176,7 @@ def _stiffness_chunk(X, mat, buf):
     c6 = _S0_c6
     c7 = _S0_c7
     c9 = _S0_c9
+    c10 = _S0_c10
     eta = _S0_eta
     w = _S0_w
     xi = _S0_xi
@@ -461,7 +509,6 @@ def _recovery_chunk(X, U, mat, strain, stress):
     # gauss-2x2: all 4 points at once
     c0 = _R0_c0
     c1 = _R0_c1
-    c10 = _R0_c10
     c2 = _R0_c2
     c3 = _R0_c3
     c4 = _R0_c4
@@ -469,6 +516,7 @@ def _recovery_chunk(X, U, mat, strain, stress):
     c6 = _R0_c6
     c7 = _R0_c7
     c9 = _R0_c9
+    c10 = _R0_c10
     eta = _R0_eta
     w = _R0_w
     xi = _R0_xi
@@ -576,7 +624,6 @@ def _recovery_chunk(X, U, mat, strain, stress):
     # gauss-2x2: all 4 points at once
     c0 = _R2_c0
     c1 = _R2_c1
-    c10 = _R2_c10
     c2 = _R2_c2
     c3 = _R2_c3
     c4 = _R2_c4
@@ -584,6 +631,7 @@ def _recovery_chunk(X, U, mat, strain, stress):
     c6 = _R2_c6
     c7 = _R2_c7
     c9 = _R2_c9
+    c10 = _R2_c10
     eta = _R2_eta
     xi = _R2_xi
     J00 = gx_1_0 + eta*gx_1_1

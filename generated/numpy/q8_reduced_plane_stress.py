@@ -2,20 +2,25 @@
 derive generated kernel: Q8 reduced plane-stress
 
 element      Q8, 8 nodes, 16 DOFs interleaved u1, v1, u2, v2, ...
-formulation  displacement element, uniformly reduced integration [standard displacement formulation]
+formulation  displacement element, uniformly reduced integration [standard displacement
+             formulation]
 integration  B^T D B: gauss-2x2 (4 points)
 flops        stiffness 2881, validity 330, recovery 1312 per element (add, mul, div, sqrt)
 
 arguments (units-agnostic; any consistent set of units):
-  xy      nodal coordinates, shape (n, 8, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+  xy      nodal coordinates, shape (n, 8, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+          node i+1 (counter-clockwise corners first, then mid-side, then interior)
   E       Young's modulus (> 0), scalar
   nu      Poisson's ratio (-1 < nu < 0.5), scalar
   t       thickness t (the out-of-plane thickness)
   u       nodal displacements for recovery, shape (n, 16), interleaved u1, v1, u2, v2, ...
   K       stiffness, shape (n, 16, 16), DOFs interleaved u1, v1, u2, v2, ...; symmetric
-  detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted or degenerate element
-  strain  recovery: strain at the 9 points of gauss-3x3, shape (n, 9, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
-  stress  recovery: stress D strain at the same points, shape (n, 9, 3), [sigma_xx, sigma_yy, tau_xy]
+  detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted
+           or degenerate element
+  strain  recovery: strain at the 9 points of gauss-3x3, shape (n, 9, 3), Voigt [eps_xx, eps_yy,
+          gamma_xy] (engineering shear)
+  stress  recovery: stress D strain at the same points, shape (n, 9, 3), [sigma_xx, sigma_yy,
+          tau_xy]
 
 The kernels do not check their inputs; derive.kernel() checks shapes, finite
 coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
@@ -39,59 +44,113 @@ GENERATOR = "derive.codegen 1.0"
 _CHUNK = 2048
 
 # point constants (shape-function derivatives, monomials, weights) per rule, (points, 1)
+# c0 = eta^2 at the points of gauss-2x2
 _S0_c0 = np.array([0.3333333333333333, 0.3333333333333333, 0.3333333333333333, 0.3333333333333333]).reshape(4, 1)
+# c1 = 2*xi at the points of gauss-2x2
 _S0_c1 = np.array([-1.1547005383792515, 1.1547005383792515, -1.1547005383792515, 1.1547005383792515]).reshape(4, 1)
-_S0_c10 = np.array([-0.18301270189221933, -0.22767090063073978, 0.06100423396407311, 0.6830127018922193]).reshape(4, 1)
-_S0_c11 = np.array([-0.06100423396407311, 0.18301270189221933, -0.6830127018922193, 0.22767090063073978]).reshape(4, 1)
-_S0_c12 = np.array([-0.22767090063073978, -0.18301270189221933, 0.6830127018922193, 0.06100423396407311]).reshape(4, 1)
-_S0_c13 = np.array([0.9106836025229591, -0.9106836025229591, 0.24401693585629244, -0.24401693585629244]).reshape(4, 1)
-_S0_c14 = np.array([-0.3333333333333333, -0.3333333333333333, -0.3333333333333333, -0.3333333333333333]).reshape(4, 1)
-_S0_c15 = np.array([0.3333333333333333, 0.3333333333333333, 0.3333333333333333, 0.3333333333333333]).reshape(4, 1)
-_S0_c16 = np.array([0.24401693585629244, 0.9106836025229591, -0.24401693585629244, -0.9106836025229591]).reshape(4, 1)
-_S0_c17 = np.array([0.24401693585629244, -0.24401693585629244, 0.9106836025229591, -0.9106836025229591]).reshape(4, 1)
-_S0_c18 = np.array([0.3333333333333333, 0.3333333333333333, 0.3333333333333333, 0.3333333333333333]).reshape(4, 1)
-_S0_c19 = np.array([-0.3333333333333333, -0.3333333333333333, -0.3333333333333333, -0.3333333333333333]).reshape(4, 1)
+# c2 = 2*eta*xi at the points of gauss-2x2
 _S0_c2 = np.array([0.6666666666666666, -0.6666666666666666, -0.6666666666666666, 0.6666666666666666]).reshape(4, 1)
-_S0_c20 = np.array([0.9106836025229591, 0.24401693585629244, -0.9106836025229591, -0.24401693585629244]).reshape(4, 1)
+# c3 = 2*eta at the points of gauss-2x2
 _S0_c3 = np.array([-1.1547005383792515, -1.1547005383792515, 1.1547005383792515, 1.1547005383792515]).reshape(4, 1)
+# c4 = xi^2 at the points of gauss-2x2
 _S0_c4 = np.array([0.3333333333333333, 0.3333333333333333, 0.3333333333333333, 0.3333333333333333]).reshape(4, 1)
+# c5 = -eta^2/4 - eta*xi/2 + eta/4 + xi/2 at the points of gauss-2x2
 _S0_c5 = np.array([-0.6830127018922193, 0.22767090063073978, -0.06100423396407311, 0.18301270189221933]).reshape(4, 1)
+# c6 = -eta*xi/2 + eta/2 - xi^2/4 + xi/4 at the points of gauss-2x2
 _S0_c6 = np.array([-0.6830127018922193, -0.06100423396407311, 0.22767090063073978, 0.18301270189221933]).reshape(4, 1)
+# c7 = eta^2/4 - eta*xi/2 - eta/4 + xi/2 at the points of gauss-2x2
 _S0_c7 = np.array([-0.22767090063073978, 0.6830127018922193, -0.18301270189221933, 0.06100423396407311]).reshape(4, 1)
+# c8 = eta*xi/2 + eta/2 - xi^2/4 - xi/4 at the points of gauss-2x2
 _S0_c8 = np.array([-0.06100423396407311, -0.6830127018922193, 0.18301270189221933, 0.22767090063073978]).reshape(4, 1)
+# c9 = eta^2/4 + eta*xi/2 + eta/4 + xi/2 at the points of gauss-2x2
 _S0_c9 = np.array([-0.18301270189221933, 0.06100423396407311, -0.22767090063073978, 0.6830127018922193]).reshape(4, 1)
+# c10 = eta*xi/2 + eta/2 + xi^2/4 + xi/4 at the points of gauss-2x2
+_S0_c10 = np.array([-0.18301270189221933, -0.22767090063073978, 0.06100423396407311, 0.6830127018922193]).reshape(4, 1)
+# c11 = -eta^2/4 + eta*xi/2 - eta/4 + xi/2 at the points of gauss-2x2
+_S0_c11 = np.array([-0.06100423396407311, 0.18301270189221933, -0.6830127018922193, 0.22767090063073978]).reshape(4, 1)
+# c12 = -eta*xi/2 + eta/2 + xi^2/4 - xi/4 at the points of gauss-2x2
+_S0_c12 = np.array([-0.22767090063073978, -0.18301270189221933, 0.6830127018922193, 0.06100423396407311]).reshape(4, 1)
+# c13 = eta*xi - xi at the points of gauss-2x2
+_S0_c13 = np.array([0.9106836025229591, -0.9106836025229591, 0.24401693585629244, -0.24401693585629244]).reshape(4, 1)
+# c14 = xi^2/2 - 1/2 at the points of gauss-2x2
+_S0_c14 = np.array([-0.3333333333333333, -0.3333333333333333, -0.3333333333333333, -0.3333333333333333]).reshape(4, 1)
+# c15 = 1/2 - eta^2/2 at the points of gauss-2x2
+_S0_c15 = np.array([0.3333333333333333, 0.3333333333333333, 0.3333333333333333, 0.3333333333333333]).reshape(4, 1)
+# c16 = -eta*xi - eta at the points of gauss-2x2
+_S0_c16 = np.array([0.24401693585629244, 0.9106836025229591, -0.24401693585629244, -0.9106836025229591]).reshape(4, 1)
+# c17 = -eta*xi - xi at the points of gauss-2x2
+_S0_c17 = np.array([0.24401693585629244, -0.24401693585629244, 0.9106836025229591, -0.9106836025229591]).reshape(4, 1)
+# c18 = 1/2 - xi^2/2 at the points of gauss-2x2
+_S0_c18 = np.array([0.3333333333333333, 0.3333333333333333, 0.3333333333333333, 0.3333333333333333]).reshape(4, 1)
+# c19 = eta^2/2 - 1/2 at the points of gauss-2x2
+_S0_c19 = np.array([-0.3333333333333333, -0.3333333333333333, -0.3333333333333333, -0.3333333333333333]).reshape(4, 1)
+# c20 = eta*xi - eta at the points of gauss-2x2
+_S0_c20 = np.array([0.9106836025229591, 0.24401693585629244, -0.9106836025229591, -0.24401693585629244]).reshape(4, 1)
+# eta = eta at the points of gauss-2x2
 _S0_eta = np.array([-0.5773502691896257, -0.5773502691896257, 0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# w = the point weight at the points of gauss-2x2
 _S0_w = np.array([1.0, 1.0, 1.0, 1.0]).reshape(4, 1)
+# xi = xi at the points of gauss-2x2
 _S0_xi = np.array([-0.5773502691896257, 0.5773502691896257, -0.5773502691896257, 0.5773502691896257]).reshape(4, 1)
+# c0 = eta^2 at the points of gauss-3x3
 _V0_c0 = np.array([0.6, 0.6, 0.6, 0.0, 0.0, 0.0, 0.6, 0.6, 0.6]).reshape(9, 1)
+# c1 = 2*xi at the points of gauss-3x3
 _V0_c1 = np.array([-1.5491933384829668, 0.0, 1.5491933384829668, -1.5491933384829668, 0.0, 1.5491933384829668, -1.5491933384829668, 0.0, 1.5491933384829668]).reshape(9, 1)
+# c2 = 2*eta*xi at the points of gauss-3x3
 _V0_c2 = np.array([1.2, 0.0, -1.2, 0.0, 0.0, 0.0, -1.2, 0.0, 1.2]).reshape(9, 1)
+# c3 = 2*eta at the points of gauss-3x3
 _V0_c3 = np.array([-1.5491933384829668, -1.5491933384829668, -1.5491933384829668, 0.0, 0.0, 0.0, 1.5491933384829668, 1.5491933384829668, 1.5491933384829668]).reshape(9, 1)
+# c4 = xi^2 at the points of gauss-3x3
 _V0_c4 = np.array([0.6, 0.0, 0.6, 0.6, 0.0, 0.6, 0.6, 0.0, 0.6]).reshape(9, 1)
+# eta = eta at the points of gauss-3x3
 _V0_eta = np.array([-0.7745966692414834, -0.7745966692414834, -0.7745966692414834, 0.0, 0.0, 0.0, 0.7745966692414834, 0.7745966692414834, 0.7745966692414834]).reshape(9, 1)
+# xi = xi at the points of gauss-3x3
 _V0_xi = np.array([-0.7745966692414834, 0.0, 0.7745966692414834, -0.7745966692414834, 0.0, 0.7745966692414834, -0.7745966692414834, 0.0, 0.7745966692414834]).reshape(9, 1)
+# c0 = eta^2 at the points of gauss-3x3
 _R1_c0 = np.array([0.6, 0.6, 0.6, 0.0, 0.0, 0.0, 0.6, 0.6, 0.6]).reshape(9, 1)
+# c1 = 2*xi at the points of gauss-3x3
 _R1_c1 = np.array([-1.5491933384829668, 0.0, 1.5491933384829668, -1.5491933384829668, 0.0, 1.5491933384829668, -1.5491933384829668, 0.0, 1.5491933384829668]).reshape(9, 1)
-_R1_c10 = np.array([-0.13094750193111254, -0.3872983346207417, -0.3436491673103708, -0.04364916731037084, 0.0, 0.3436491673103708, 0.04364916731037084, 0.3872983346207417, 1.0309475019311125]).reshape(9, 1)
-_R1_c11 = np.array([-0.04364916731037084, 0.04364916731037084, 0.13094750193111254, -0.3872983346207417, 0.0, 0.3872983346207417, -1.0309475019311125, -0.3436491673103708, 0.3436491673103708]).reshape(9, 1)
-_R1_c12 = np.array([-0.3436491673103708, -0.3872983346207417, -0.13094750193111254, 0.3436491673103708, 0.0, -0.04364916731037084, 1.0309475019311125, 0.3872983346207417, 0.04364916731037084]).reshape(9, 1)
-_R1_c13 = np.array([1.3745966692414833, 0.0, -1.3745966692414833, 0.7745966692414834, 0.0, -0.7745966692414834, 0.17459666924148337, 0.0, -0.17459666924148337]).reshape(9, 1)
-_R1_c14 = np.array([-0.2, -0.5, -0.2, -0.2, -0.5, -0.2, -0.2, -0.5, -0.2]).reshape(9, 1)
-_R1_c15 = np.array([0.2, 0.2, 0.2, 0.5, 0.5, 0.5, 0.2, 0.2, 0.2]).reshape(9, 1)
-_R1_c16 = np.array([0.17459666924148337, 0.7745966692414834, 1.3745966692414833, 0.0, 0.0, 0.0, -0.17459666924148337, -0.7745966692414834, -1.3745966692414833]).reshape(9, 1)
-_R1_c17 = np.array([0.17459666924148337, 0.0, -0.17459666924148337, 0.7745966692414834, 0.0, -0.7745966692414834, 1.3745966692414833, 0.0, -1.3745966692414833]).reshape(9, 1)
-_R1_c18 = np.array([0.2, 0.5, 0.2, 0.2, 0.5, 0.2, 0.2, 0.5, 0.2]).reshape(9, 1)
-_R1_c19 = np.array([-0.2, -0.2, -0.2, -0.5, -0.5, -0.5, -0.2, -0.2, -0.2]).reshape(9, 1)
+# c2 = 2*eta*xi at the points of gauss-3x3
 _R1_c2 = np.array([1.2, 0.0, -1.2, 0.0, 0.0, 0.0, -1.2, 0.0, 1.2]).reshape(9, 1)
-_R1_c20 = np.array([1.3745966692414833, 0.7745966692414834, 0.17459666924148337, 0.0, 0.0, 0.0, -1.3745966692414833, -0.7745966692414834, -0.17459666924148337]).reshape(9, 1)
+# c3 = 2*eta at the points of gauss-3x3
 _R1_c3 = np.array([-1.5491933384829668, -1.5491933384829668, -1.5491933384829668, 0.0, 0.0, 0.0, 1.5491933384829668, 1.5491933384829668, 1.5491933384829668]).reshape(9, 1)
+# c4 = xi^2 at the points of gauss-3x3
 _R1_c4 = np.array([0.6, 0.0, 0.6, 0.6, 0.0, 0.6, 0.6, 0.0, 0.6]).reshape(9, 1)
+# c5 = -eta^2/4 - eta*xi/2 + eta/4 + xi/2 at the points of gauss-3x3
 _R1_c5 = np.array([-1.0309475019311125, -0.3436491673103708, 0.3436491673103708, -0.3872983346207417, 0.0, 0.3872983346207417, -0.04364916731037084, 0.04364916731037084, 0.13094750193111254]).reshape(9, 1)
+# c6 = -eta*xi/2 + eta/2 - xi^2/4 + xi/4 at the points of gauss-3x3
 _R1_c6 = np.array([-1.0309475019311125, -0.3872983346207417, -0.04364916731037084, -0.3436491673103708, 0.0, 0.04364916731037084, 0.3436491673103708, 0.3872983346207417, 0.13094750193111254]).reshape(9, 1)
+# c7 = eta^2/4 - eta*xi/2 - eta/4 + xi/2 at the points of gauss-3x3
 _R1_c7 = np.array([-0.3436491673103708, 0.3436491673103708, 1.0309475019311125, -0.3872983346207417, 0.0, 0.3872983346207417, -0.13094750193111254, -0.04364916731037084, 0.04364916731037084]).reshape(9, 1)
+# c8 = eta*xi/2 + eta/2 - xi^2/4 - xi/4 at the points of gauss-3x3
 _R1_c8 = np.array([-0.04364916731037084, -0.3872983346207417, -1.0309475019311125, 0.04364916731037084, 0.0, -0.3436491673103708, 0.13094750193111254, 0.3872983346207417, 0.3436491673103708]).reshape(9, 1)
+# c9 = eta^2/4 + eta*xi/2 + eta/4 + xi/2 at the points of gauss-3x3
 _R1_c9 = np.array([-0.13094750193111254, -0.04364916731037084, 0.04364916731037084, -0.3872983346207417, 0.0, 0.3872983346207417, -0.3436491673103708, 0.3436491673103708, 1.0309475019311125]).reshape(9, 1)
+# c10 = eta*xi/2 + eta/2 + xi^2/4 + xi/4 at the points of gauss-3x3
+_R1_c10 = np.array([-0.13094750193111254, -0.3872983346207417, -0.3436491673103708, -0.04364916731037084, 0.0, 0.3436491673103708, 0.04364916731037084, 0.3872983346207417, 1.0309475019311125]).reshape(9, 1)
+# c11 = -eta^2/4 + eta*xi/2 - eta/4 + xi/2 at the points of gauss-3x3
+_R1_c11 = np.array([-0.04364916731037084, 0.04364916731037084, 0.13094750193111254, -0.3872983346207417, 0.0, 0.3872983346207417, -1.0309475019311125, -0.3436491673103708, 0.3436491673103708]).reshape(9, 1)
+# c12 = -eta*xi/2 + eta/2 + xi^2/4 - xi/4 at the points of gauss-3x3
+_R1_c12 = np.array([-0.3436491673103708, -0.3872983346207417, -0.13094750193111254, 0.3436491673103708, 0.0, -0.04364916731037084, 1.0309475019311125, 0.3872983346207417, 0.04364916731037084]).reshape(9, 1)
+# c13 = eta*xi - xi at the points of gauss-3x3
+_R1_c13 = np.array([1.3745966692414833, 0.0, -1.3745966692414833, 0.7745966692414834, 0.0, -0.7745966692414834, 0.17459666924148337, 0.0, -0.17459666924148337]).reshape(9, 1)
+# c14 = xi^2/2 - 1/2 at the points of gauss-3x3
+_R1_c14 = np.array([-0.2, -0.5, -0.2, -0.2, -0.5, -0.2, -0.2, -0.5, -0.2]).reshape(9, 1)
+# c15 = 1/2 - eta^2/2 at the points of gauss-3x3
+_R1_c15 = np.array([0.2, 0.2, 0.2, 0.5, 0.5, 0.5, 0.2, 0.2, 0.2]).reshape(9, 1)
+# c16 = -eta*xi - eta at the points of gauss-3x3
+_R1_c16 = np.array([0.17459666924148337, 0.7745966692414834, 1.3745966692414833, 0.0, 0.0, 0.0, -0.17459666924148337, -0.7745966692414834, -1.3745966692414833]).reshape(9, 1)
+# c17 = -eta*xi - xi at the points of gauss-3x3
+_R1_c17 = np.array([0.17459666924148337, 0.0, -0.17459666924148337, 0.7745966692414834, 0.0, -0.7745966692414834, 1.3745966692414833, 0.0, -1.3745966692414833]).reshape(9, 1)
+# c18 = 1/2 - xi^2/2 at the points of gauss-3x3
+_R1_c18 = np.array([0.2, 0.5, 0.2, 0.2, 0.5, 0.2, 0.2, 0.5, 0.2]).reshape(9, 1)
+# c19 = eta^2/2 - 1/2 at the points of gauss-3x3
+_R1_c19 = np.array([-0.2, -0.2, -0.2, -0.5, -0.5, -0.5, -0.2, -0.2, -0.2]).reshape(9, 1)
+# c20 = eta*xi - eta at the points of gauss-3x3
+_R1_c20 = np.array([1.3745966692414833, 0.7745966692414834, 0.17459666924148337, 0.0, 0.0, 0.0, -1.3745966692414833, -0.7745966692414834, -0.17459666924148337]).reshape(9, 1)
+# eta = eta at the points of gauss-3x3
 _R1_eta = np.array([-0.7745966692414834, -0.7745966692414834, -0.7745966692414834, 0.0, 0.0, 0.0, 0.7745966692414834, 0.7745966692414834, 0.7745966692414834]).reshape(9, 1)
+# xi = xi at the points of gauss-3x3
 _R1_xi = np.array([-0.7745966692414834, 0.0, 0.7745966692414834, -0.7745966692414834, 0.0, 0.7745966692414834, -0.7745966692414834, 0.0, 0.7745966692414834]).reshape(9, 1)
 
 
@@ -150,6 +209,14 @@ def _stiffness_chunk(X, mat, buf):
     # gauss-2x2: all 4 points at once
     c0 = _S0_c0
     c1 = _S0_c1
+    c2 = _S0_c2
+    c3 = _S0_c3
+    c4 = _S0_c4
+    c5 = _S0_c5
+    c6 = _S0_c6
+    c7 = _S0_c7
+    c8 = _S0_c8
+    c9 = _S0_c9
     c10 = _S0_c10
     c11 = _S0_c11
     c12 = _S0_c12
@@ -160,15 +227,7 @@ def _stiffness_chunk(X, mat, buf):
     c17 = _S0_c17
     c18 = _S0_c18
     c19 = _S0_c19
-    c2 = _S0_c2
     c20 = _S0_c20
-    c3 = _S0_c3
-    c4 = _S0_c4
-    c5 = _S0_c5
-    c6 = _S0_c6
-    c7 = _S0_c7
-    c8 = _S0_c8
-    c9 = _S0_c9
     eta = _S0_eta
     w = _S0_w
     xi = _S0_xi
@@ -745,6 +804,14 @@ def _recovery_chunk(X, U, mat, strain, stress):
     # gauss-3x3: all 9 points at once
     c0 = _R1_c0
     c1 = _R1_c1
+    c2 = _R1_c2
+    c3 = _R1_c3
+    c4 = _R1_c4
+    c5 = _R1_c5
+    c6 = _R1_c6
+    c7 = _R1_c7
+    c8 = _R1_c8
+    c9 = _R1_c9
     c10 = _R1_c10
     c11 = _R1_c11
     c12 = _R1_c12
@@ -755,15 +822,7 @@ def _recovery_chunk(X, U, mat, strain, stress):
     c17 = _R1_c17
     c18 = _R1_c18
     c19 = _R1_c19
-    c2 = _R1_c2
     c20 = _R1_c20
-    c3 = _R1_c3
-    c4 = _R1_c4
-    c5 = _R1_c5
-    c6 = _R1_c6
-    c7 = _R1_c7
-    c8 = _R1_c8
-    c9 = _R1_c9
     eta = _R1_eta
     xi = _R1_xi
     J00 = gx_1_0 + c0*gx_1_2 + c1*gx_2_0 + c2*gx_2_1 + eta*gx_1_1

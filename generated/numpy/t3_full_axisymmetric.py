@@ -7,15 +7,20 @@ integration  B^T D B: triangle-d1 (1 point)
 flops        stiffness 180, validity 12, recovery 100 per element (add, mul, div, sqrt)
 
 arguments (units-agnostic; any consistent set of units):
-  xy      nodal coordinates, shape (n, 3, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior); x is the radius r > 0
+  xy      nodal coordinates, shape (n, 3, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+          node i+1 (counter-clockwise corners first, then mid-side, then interior); x is the
+          radius r > 0
   E       Young's modulus (> 0), scalar
   nu      Poisson's ratio (-1 < nu < 0.5), scalar
   t       ignored: axisymmetric kernels integrate over the full ring, thick = 2 pi r
   u       nodal displacements for recovery, shape (n, 6), interleaved u1, v1, u2, v2, ...
   K       stiffness, shape (n, 6, 6), DOFs interleaved u1, v1, u2, v2, ...; symmetric
-  detJ_min validity: min det J over the points of triangle-d1, shape (n,); <= 0 means an inverted or degenerate element
-  strain  recovery: strain at the 1 points of triangle-d1, shape (n, 1, 4), Voigt [eps_rr, eps_zz, eps_tt, gamma_rz] (engineering shear)
-  stress  recovery: stress D strain at the same points, shape (n, 1, 4), [sigma_rr, sigma_zz, sigma_tt, tau_rz]
+  detJ_min validity: min det J over the points of triangle-d1, shape (n,); <= 0 means an
+           inverted or degenerate element
+  strain  recovery: strain at the 1 points of triangle-d1, shape (n, 1, 4), Voigt [eps_rr,
+          eps_zz, eps_tt, gamma_rz] (engineering shear)
+  stress  recovery: stress D strain at the same points, shape (n, 1, 4), [sigma_rr, sigma_zz,
+          sigma_tt, tau_rz]
 
 The kernels do not check their inputs; derive.kernel() checks shapes, finite
 coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
@@ -39,12 +44,19 @@ GENERATOR = "derive.codegen 1.0"
 _CHUNK = 2048
 
 # point constants (shape-function derivatives, monomials, weights) per rule, (points, 1)
+# c0 = -eta - xi + 1 at the points of triangle-d1
 _S0_c0 = np.array([0.3333333333333333]).reshape(1, 1)
+# c1 = 2*pi*w at the points of triangle-d1
 _S0_c1 = np.array([3.141592653589793]).reshape(1, 1)
+# eta = eta at the points of triangle-d1
 _S0_eta = np.array([0.3333333333333333]).reshape(1, 1)
+# xi = xi at the points of triangle-d1
 _S0_xi = np.array([0.3333333333333333]).reshape(1, 1)
+# c0 = -eta - xi + 1 at the points of triangle-d1
 _R1_c0 = np.array([0.3333333333333333]).reshape(1, 1)
+# eta = eta at the points of triangle-d1
 _R1_eta = np.array([0.3333333333333333]).reshape(1, 1)
+# xi = xi at the points of triangle-d1
 _R1_xi = np.array([0.3333333333333333]).reshape(1, 1)
 
 

@@ -2,21 +2,29 @@
 derive generated kernel: T6 bbar plane-stress
 
 element      T6, 6 nodes, 12 DOFs interleaved u1, v1, u2, v2, ...
-formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed) [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
-integration  B^T D_dev B: triangle-d2 (3 points); B^T m (g): triangle-d2 (3 points); -1/kappa (-V/kappa): triangle-d2 (3 points)
-internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T (unrolled factorisation of K_aa, no pivoting)
+formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed)
+             [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
+integration  B^T D_dev B: triangle-d2 (3 points); B^T m (g): triangle-d2 (3 points); -1/kappa
+             (-V/kappa): triangle-d2 (3 points)
+internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+             (unrolled factorisation of K_aa, no pivoting)
 flops        stiffness 1624, validity 114, recovery 820 per element (add, mul, div, sqrt)
 
 arguments (units-agnostic; any consistent set of units):
-  xy      nodal coordinates, shape (n, 6, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+  xy      nodal coordinates, shape (n, 6, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+          node i+1 (counter-clockwise corners first, then mid-side, then interior)
   E       Young's modulus (> 0), scalar
   nu      Poisson's ratio (-1 < nu < 0.5), scalar
   t       thickness t (the out-of-plane thickness)
   u       nodal displacements for recovery, shape (n, 12), interleaved u1, v1, u2, v2, ...
-  K       stiffness, shape (n, 12, 12), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1 internal unknowns are condensed
-  detJ_min validity: min det J over the points of triangle-d2, shape (n,); <= 0 means an inverted or degenerate element
-  strain  recovery: strain at the 3 points of triangle-d2, shape (n, 3, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
-  stress  recovery: stress D strain at the same points, shape (n, 3, 3), [sigma_xx, sigma_yy, tau_xy]
+  K       stiffness, shape (n, 12, 12), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1
+          internal unknowns are condensed
+  detJ_min validity: min det J over the points of triangle-d2, shape (n,); <= 0 means an
+           inverted or degenerate element
+  strain  recovery: strain at the 3 points of triangle-d2, shape (n, 3, 3), Voigt [eps_xx,
+          eps_yy, gamma_xy] (engineering shear)
+  stress  recovery: stress D strain at the same points, shape (n, 3, 3), [sigma_xx, sigma_yy,
+          tau_xy]
 
 The kernels do not check their inputs; derive.kernel() checks shapes, finite
 coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
@@ -40,50 +48,95 @@ GENERATOR = "derive.codegen 1.0"
 _CHUNK = 2048
 
 # point constants (shape-function derivatives, monomials, weights) per rule, (points, 1)
+# c0 = 2*xi at the points of triangle-d2
 _S0_c0 = np.array([0.3333333333333333, 1.3333333333333333, 0.3333333333333333]).reshape(3, 1)
+# c1 = 2*eta at the points of triangle-d2
 _S0_c1 = np.array([0.3333333333333333, 0.3333333333333333, 1.3333333333333333]).reshape(3, 1)
-_S0_c10 = np.array([2.0, 0.0, -2.0]).reshape(3, 1)
+# c2 = 4*eta + 4*xi - 3 at the points of triangle-d2
 _S0_c2 = np.array([-1.6666666666666667, 0.3333333333333333, 0.3333333333333333]).reshape(3, 1)
+# c3 = 4*xi - 1 at the points of triangle-d2
 _S0_c3 = np.array([-0.3333333333333333, 1.6666666666666667, -0.3333333333333333]).reshape(3, 1)
+# c4 = 4*eta - 1 at the points of triangle-d2
 _S0_c4 = np.array([-0.3333333333333333, -0.3333333333333333, 1.6666666666666667]).reshape(3, 1)
+# c5 = -4*eta - 8*xi + 4 at the points of triangle-d2
 _S0_c5 = np.array([2.0, -2.0, 0.0]).reshape(3, 1)
+# c6 = -4*xi at the points of triangle-d2
 _S0_c6 = np.array([-0.6666666666666666, -2.6666666666666665, -0.6666666666666666]).reshape(3, 1)
+# c7 = 4*eta at the points of triangle-d2
 _S0_c7 = np.array([0.6666666666666666, 0.6666666666666666, 2.6666666666666665]).reshape(3, 1)
+# c8 = 4*xi at the points of triangle-d2
 _S0_c8 = np.array([0.6666666666666666, 2.6666666666666665, 0.6666666666666666]).reshape(3, 1)
+# c9 = -4*eta at the points of triangle-d2
 _S0_c9 = np.array([-0.6666666666666666, -0.6666666666666666, -2.6666666666666665]).reshape(3, 1)
+# c10 = -8*eta - 4*xi + 4 at the points of triangle-d2
+_S0_c10 = np.array([2.0, 0.0, -2.0]).reshape(3, 1)
+# eta = eta at the points of triangle-d2
 _S0_eta = np.array([0.16666666666666666, 0.16666666666666666, 0.6666666666666666]).reshape(3, 1)
+# w = the point weight at the points of triangle-d2
 _S0_w = np.array([0.16666666666666666, 0.16666666666666666, 0.16666666666666666]).reshape(3, 1)
+# xi = xi at the points of triangle-d2
 _S0_xi = np.array([0.16666666666666666, 0.6666666666666666, 0.16666666666666666]).reshape(3, 1)
+# c0 = 2*xi at the points of triangle-d2
 _V0_c0 = np.array([0.3333333333333333, 1.3333333333333333, 0.3333333333333333]).reshape(3, 1)
+# c1 = 2*eta at the points of triangle-d2
 _V0_c1 = np.array([0.3333333333333333, 0.3333333333333333, 1.3333333333333333]).reshape(3, 1)
+# eta = eta at the points of triangle-d2
 _V0_eta = np.array([0.16666666666666666, 0.16666666666666666, 0.6666666666666666]).reshape(3, 1)
+# xi = xi at the points of triangle-d2
 _V0_xi = np.array([0.16666666666666666, 0.6666666666666666, 0.16666666666666666]).reshape(3, 1)
+# c0 = 2*xi at the points of triangle-d2
 _R0_c0 = np.array([0.3333333333333333, 1.3333333333333333, 0.3333333333333333]).reshape(3, 1)
+# c1 = 2*eta at the points of triangle-d2
 _R0_c1 = np.array([0.3333333333333333, 0.3333333333333333, 1.3333333333333333]).reshape(3, 1)
-_R0_c10 = np.array([2.0, 0.0, -2.0]).reshape(3, 1)
+# c2 = 4*eta + 4*xi - 3 at the points of triangle-d2
 _R0_c2 = np.array([-1.6666666666666667, 0.3333333333333333, 0.3333333333333333]).reshape(3, 1)
+# c3 = 4*xi - 1 at the points of triangle-d2
 _R0_c3 = np.array([-0.3333333333333333, 1.6666666666666667, -0.3333333333333333]).reshape(3, 1)
+# c4 = 4*eta - 1 at the points of triangle-d2
 _R0_c4 = np.array([-0.3333333333333333, -0.3333333333333333, 1.6666666666666667]).reshape(3, 1)
+# c5 = -4*eta - 8*xi + 4 at the points of triangle-d2
 _R0_c5 = np.array([2.0, -2.0, 0.0]).reshape(3, 1)
+# c6 = -4*xi at the points of triangle-d2
 _R0_c6 = np.array([-0.6666666666666666, -2.6666666666666665, -0.6666666666666666]).reshape(3, 1)
+# c7 = 4*eta at the points of triangle-d2
 _R0_c7 = np.array([0.6666666666666666, 0.6666666666666666, 2.6666666666666665]).reshape(3, 1)
+# c8 = 4*xi at the points of triangle-d2
 _R0_c8 = np.array([0.6666666666666666, 2.6666666666666665, 0.6666666666666666]).reshape(3, 1)
+# c9 = -4*eta at the points of triangle-d2
 _R0_c9 = np.array([-0.6666666666666666, -0.6666666666666666, -2.6666666666666665]).reshape(3, 1)
+# c10 = -8*eta - 4*xi + 4 at the points of triangle-d2
+_R0_c10 = np.array([2.0, 0.0, -2.0]).reshape(3, 1)
+# eta = eta at the points of triangle-d2
 _R0_eta = np.array([0.16666666666666666, 0.16666666666666666, 0.6666666666666666]).reshape(3, 1)
+# w = the point weight at the points of triangle-d2
 _R0_w = np.array([0.16666666666666666, 0.16666666666666666, 0.16666666666666666]).reshape(3, 1)
+# xi = xi at the points of triangle-d2
 _R0_xi = np.array([0.16666666666666666, 0.6666666666666666, 0.16666666666666666]).reshape(3, 1)
+# c0 = 2*xi at the points of triangle-d2
 _R2_c0 = np.array([0.3333333333333333, 1.3333333333333333, 0.3333333333333333]).reshape(3, 1)
+# c1 = 2*eta at the points of triangle-d2
 _R2_c1 = np.array([0.3333333333333333, 0.3333333333333333, 1.3333333333333333]).reshape(3, 1)
-_R2_c10 = np.array([2.0, 0.0, -2.0]).reshape(3, 1)
+# c2 = 4*eta + 4*xi - 3 at the points of triangle-d2
 _R2_c2 = np.array([-1.6666666666666667, 0.3333333333333333, 0.3333333333333333]).reshape(3, 1)
+# c3 = 4*xi - 1 at the points of triangle-d2
 _R2_c3 = np.array([-0.3333333333333333, 1.6666666666666667, -0.3333333333333333]).reshape(3, 1)
+# c4 = 4*eta - 1 at the points of triangle-d2
 _R2_c4 = np.array([-0.3333333333333333, -0.3333333333333333, 1.6666666666666667]).reshape(3, 1)
+# c5 = -4*eta - 8*xi + 4 at the points of triangle-d2
 _R2_c5 = np.array([2.0, -2.0, 0.0]).reshape(3, 1)
+# c6 = -4*xi at the points of triangle-d2
 _R2_c6 = np.array([-0.6666666666666666, -2.6666666666666665, -0.6666666666666666]).reshape(3, 1)
+# c7 = 4*eta at the points of triangle-d2
 _R2_c7 = np.array([0.6666666666666666, 0.6666666666666666, 2.6666666666666665]).reshape(3, 1)
+# c8 = 4*xi at the points of triangle-d2
 _R2_c8 = np.array([0.6666666666666666, 2.6666666666666665, 0.6666666666666666]).reshape(3, 1)
+# c9 = -4*eta at the points of triangle-d2
 _R2_c9 = np.array([-0.6666666666666666, -0.6666666666666666, -2.6666666666666665]).reshape(3, 1)
+# c10 = -8*eta - 4*xi + 4 at the points of triangle-d2
+_R2_c10 = np.array([2.0, 0.0, -2.0]).reshape(3, 1)
+# eta = eta at the points of triangle-d2
 _R2_eta = np.array([0.16666666666666666, 0.16666666666666666, 0.6666666666666666]).reshape(3, 1)
+# xi = xi at the points of triangle-d2
 _R2_xi = np.array([0.16666666666666666, 0.6666666666666666, 0.16666666666666666]).reshape(3, 1)
 
 
@@ -140,7 +193,6 @@ def _stiffness_chunk(X, mat, buf):
     # triangle-d2: all 3 points at once
     c0 = _S0_c0
     c1 = _S0_c1
-    c10 = _S0_c10
     c2 = _S0_c2
     c3 = _S0_c3
     c4 = _S0_c4
@@ -149,6 +201,7 @@ def _stiffness_chunk(X, mat, buf):
     c7 = _S0_c7
     c8 = _S0_c8
     c9 = _S0_c9
+    c10 = _S0_c10
     eta = _S0_eta
     w = _S0_w
     xi = _S0_xi
@@ -547,7 +600,6 @@ def _recovery_chunk(X, U, mat, strain, stress):
     # triangle-d2: all 3 points at once
     c0 = _R0_c0
     c1 = _R0_c1
-    c10 = _R0_c10
     c2 = _R0_c2
     c3 = _R0_c3
     c4 = _R0_c4
@@ -556,6 +608,7 @@ def _recovery_chunk(X, U, mat, strain, stress):
     c7 = _R0_c7
     c8 = _R0_c8
     c9 = _R0_c9
+    c10 = _R0_c10
     eta = _R0_eta
     w = _R0_w
     xi = _R0_xi
@@ -604,7 +657,6 @@ def _recovery_chunk(X, U, mat, strain, stress):
     # triangle-d2: all 3 points at once
     c0 = _R2_c0
     c1 = _R2_c1
-    c10 = _R2_c10
     c2 = _R2_c2
     c3 = _R2_c3
     c4 = _R2_c4
@@ -613,6 +665,7 @@ def _recovery_chunk(X, U, mat, strain, stress):
     c7 = _R2_c7
     c8 = _R2_c8
     c9 = _R2_c9
+    c10 = _R2_c10
     eta = _R2_eta
     xi = _R2_xi
     J00 = gx_1_0 + c0*gx_2_0 + eta*gx_1_1

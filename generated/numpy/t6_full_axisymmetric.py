@@ -7,15 +7,20 @@ integration  B^T D B: triangle-d2 (3 points)
 flops        stiffness 1840, validity 114, recovery 495 per element (add, mul, div, sqrt)
 
 arguments (units-agnostic; any consistent set of units):
-  xy      nodal coordinates, shape (n, 6, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior); x is the radius r > 0
+  xy      nodal coordinates, shape (n, 6, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+          node i+1 (counter-clockwise corners first, then mid-side, then interior); x is the
+          radius r > 0
   E       Young's modulus (> 0), scalar
   nu      Poisson's ratio (-1 < nu < 0.5), scalar
   t       ignored: axisymmetric kernels integrate over the full ring, thick = 2 pi r
   u       nodal displacements for recovery, shape (n, 12), interleaved u1, v1, u2, v2, ...
   K       stiffness, shape (n, 12, 12), DOFs interleaved u1, v1, u2, v2, ...; symmetric
-  detJ_min validity: min det J over the points of triangle-d2, shape (n,); <= 0 means an inverted or degenerate element
-  strain  recovery: strain at the 3 points of triangle-d2, shape (n, 3, 4), Voigt [eps_rr, eps_zz, eps_tt, gamma_rz] (engineering shear)
-  stress  recovery: stress D strain at the same points, shape (n, 3, 4), [sigma_rr, sigma_zz, sigma_tt, tau_rz]
+  detJ_min validity: min det J over the points of triangle-d2, shape (n,); <= 0 means an
+           inverted or degenerate element
+  strain  recovery: strain at the 3 points of triangle-d2, shape (n, 3, 4), Voigt [eps_rr,
+          eps_zz, eps_tt, gamma_rz] (engineering shear)
+  stress  recovery: stress D strain at the same points, shape (n, 3, 4), [sigma_rr, sigma_zz,
+          sigma_tt, tau_rz]
 
 The kernels do not check their inputs; derive.kernel() checks shapes, finite
 coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
@@ -39,54 +44,103 @@ GENERATOR = "derive.codegen 1.0"
 _CHUNK = 2048
 
 # point constants (shape-function derivatives, monomials, weights) per rule, (points, 1)
+# c0 = 2*xi at the points of triangle-d2
 _S0_c0 = np.array([0.3333333333333333, 1.3333333333333333, 0.3333333333333333]).reshape(3, 1)
+# c1 = 2*eta at the points of triangle-d2
 _S0_c1 = np.array([0.3333333333333333, 0.3333333333333333, 1.3333333333333333]).reshape(3, 1)
-_S0_c10 = np.array([2.0, 0.0, -2.0]).reshape(3, 1)
-_S0_c11 = np.array([0.027777777777777776, 0.027777777777777776, 0.4444444444444444]).reshape(3, 1)
-_S0_c12 = np.array([0.027777777777777776, 0.1111111111111111, 0.1111111111111111]).reshape(3, 1)
-_S0_c13 = np.array([0.027777777777777776, 0.4444444444444444, 0.027777777777777776]).reshape(3, 1)
-_S0_c14 = np.array([0.2222222222222222, -0.1111111111111111, -0.1111111111111111]).reshape(3, 1)
-_S0_c15 = np.array([-0.1111111111111111, 0.2222222222222222, -0.1111111111111111]).reshape(3, 1)
-_S0_c16 = np.array([-0.1111111111111111, -0.1111111111111111, 0.2222222222222222]).reshape(3, 1)
-_S0_c17 = np.array([0.4444444444444444, 0.4444444444444444, 0.1111111111111111]).reshape(3, 1)
-_S0_c18 = np.array([0.1111111111111111, 0.4444444444444444, 0.4444444444444444]).reshape(3, 1)
-_S0_c19 = np.array([0.4444444444444444, 0.1111111111111111, 0.4444444444444444]).reshape(3, 1)
+# c2 = 4*eta + 4*xi - 3 at the points of triangle-d2
 _S0_c2 = np.array([-1.6666666666666667, 0.3333333333333333, 0.3333333333333333]).reshape(3, 1)
-_S0_c20 = np.array([1.0471975511965979, 1.0471975511965979, 1.0471975511965979]).reshape(3, 1)
+# c3 = 4*xi - 1 at the points of triangle-d2
 _S0_c3 = np.array([-0.3333333333333333, 1.6666666666666667, -0.3333333333333333]).reshape(3, 1)
+# c4 = 4*eta - 1 at the points of triangle-d2
 _S0_c4 = np.array([-0.3333333333333333, -0.3333333333333333, 1.6666666666666667]).reshape(3, 1)
+# c5 = -4*eta - 8*xi + 4 at the points of triangle-d2
 _S0_c5 = np.array([2.0, -2.0, 0.0]).reshape(3, 1)
+# c6 = -4*xi at the points of triangle-d2
 _S0_c6 = np.array([-0.6666666666666666, -2.6666666666666665, -0.6666666666666666]).reshape(3, 1)
+# c7 = 4*eta at the points of triangle-d2
 _S0_c7 = np.array([0.6666666666666666, 0.6666666666666666, 2.6666666666666665]).reshape(3, 1)
+# c8 = 4*xi at the points of triangle-d2
 _S0_c8 = np.array([0.6666666666666666, 2.6666666666666665, 0.6666666666666666]).reshape(3, 1)
+# c9 = -4*eta at the points of triangle-d2
 _S0_c9 = np.array([-0.6666666666666666, -0.6666666666666666, -2.6666666666666665]).reshape(3, 1)
+# c10 = -8*eta - 4*xi + 4 at the points of triangle-d2
+_S0_c10 = np.array([2.0, 0.0, -2.0]).reshape(3, 1)
+# c11 = eta^2 at the points of triangle-d2
+_S0_c11 = np.array([0.027777777777777776, 0.027777777777777776, 0.4444444444444444]).reshape(3, 1)
+# c12 = eta*xi at the points of triangle-d2
+_S0_c12 = np.array([0.027777777777777776, 0.1111111111111111, 0.1111111111111111]).reshape(3, 1)
+# c13 = xi^2 at the points of triangle-d2
+_S0_c13 = np.array([0.027777777777777776, 0.4444444444444444, 0.027777777777777776]).reshape(3, 1)
+# c14 = (eta + xi - 1)*(2*eta + 2*xi - 1) at the points of triangle-d2
+_S0_c14 = np.array([0.2222222222222222, -0.1111111111111111, -0.1111111111111111]).reshape(3, 1)
+# c15 = xi*(2*xi - 1) at the points of triangle-d2
+_S0_c15 = np.array([-0.1111111111111111, 0.2222222222222222, -0.1111111111111111]).reshape(3, 1)
+# c16 = eta*(2*eta - 1) at the points of triangle-d2
+_S0_c16 = np.array([-0.1111111111111111, -0.1111111111111111, 0.2222222222222222]).reshape(3, 1)
+# c17 = -4*xi*(eta + xi - 1) at the points of triangle-d2
+_S0_c17 = np.array([0.4444444444444444, 0.4444444444444444, 0.1111111111111111]).reshape(3, 1)
+# c18 = 4*eta*xi at the points of triangle-d2
+_S0_c18 = np.array([0.1111111111111111, 0.4444444444444444, 0.4444444444444444]).reshape(3, 1)
+# c19 = -4*eta*(eta + xi - 1) at the points of triangle-d2
+_S0_c19 = np.array([0.4444444444444444, 0.1111111111111111, 0.4444444444444444]).reshape(3, 1)
+# c20 = 2*pi*w at the points of triangle-d2
+_S0_c20 = np.array([1.0471975511965979, 1.0471975511965979, 1.0471975511965979]).reshape(3, 1)
+# eta = eta at the points of triangle-d2
 _S0_eta = np.array([0.16666666666666666, 0.16666666666666666, 0.6666666666666666]).reshape(3, 1)
+# xi = xi at the points of triangle-d2
 _S0_xi = np.array([0.16666666666666666, 0.6666666666666666, 0.16666666666666666]).reshape(3, 1)
+# c0 = 2*xi at the points of triangle-d2
 _V0_c0 = np.array([0.3333333333333333, 1.3333333333333333, 0.3333333333333333]).reshape(3, 1)
+# c1 = 2*eta at the points of triangle-d2
 _V0_c1 = np.array([0.3333333333333333, 0.3333333333333333, 1.3333333333333333]).reshape(3, 1)
+# eta = eta at the points of triangle-d2
 _V0_eta = np.array([0.16666666666666666, 0.16666666666666666, 0.6666666666666666]).reshape(3, 1)
+# xi = xi at the points of triangle-d2
 _V0_xi = np.array([0.16666666666666666, 0.6666666666666666, 0.16666666666666666]).reshape(3, 1)
+# c0 = 2*xi at the points of triangle-d2
 _R1_c0 = np.array([0.3333333333333333, 1.3333333333333333, 0.3333333333333333]).reshape(3, 1)
+# c1 = 2*eta at the points of triangle-d2
 _R1_c1 = np.array([0.3333333333333333, 0.3333333333333333, 1.3333333333333333]).reshape(3, 1)
-_R1_c10 = np.array([2.0, 0.0, -2.0]).reshape(3, 1)
-_R1_c11 = np.array([0.027777777777777776, 0.027777777777777776, 0.4444444444444444]).reshape(3, 1)
-_R1_c12 = np.array([0.027777777777777776, 0.1111111111111111, 0.1111111111111111]).reshape(3, 1)
-_R1_c13 = np.array([0.027777777777777776, 0.4444444444444444, 0.027777777777777776]).reshape(3, 1)
-_R1_c14 = np.array([0.2222222222222222, -0.1111111111111111, -0.1111111111111111]).reshape(3, 1)
-_R1_c15 = np.array([-0.1111111111111111, 0.2222222222222222, -0.1111111111111111]).reshape(3, 1)
-_R1_c16 = np.array([-0.1111111111111111, -0.1111111111111111, 0.2222222222222222]).reshape(3, 1)
-_R1_c17 = np.array([0.4444444444444444, 0.4444444444444444, 0.1111111111111111]).reshape(3, 1)
-_R1_c18 = np.array([0.1111111111111111, 0.4444444444444444, 0.4444444444444444]).reshape(3, 1)
-_R1_c19 = np.array([0.4444444444444444, 0.1111111111111111, 0.4444444444444444]).reshape(3, 1)
+# c2 = 4*eta + 4*xi - 3 at the points of triangle-d2
 _R1_c2 = np.array([-1.6666666666666667, 0.3333333333333333, 0.3333333333333333]).reshape(3, 1)
+# c3 = 4*xi - 1 at the points of triangle-d2
 _R1_c3 = np.array([-0.3333333333333333, 1.6666666666666667, -0.3333333333333333]).reshape(3, 1)
+# c4 = 4*eta - 1 at the points of triangle-d2
 _R1_c4 = np.array([-0.3333333333333333, -0.3333333333333333, 1.6666666666666667]).reshape(3, 1)
+# c5 = -4*eta - 8*xi + 4 at the points of triangle-d2
 _R1_c5 = np.array([2.0, -2.0, 0.0]).reshape(3, 1)
+# c6 = -4*xi at the points of triangle-d2
 _R1_c6 = np.array([-0.6666666666666666, -2.6666666666666665, -0.6666666666666666]).reshape(3, 1)
+# c7 = 4*eta at the points of triangle-d2
 _R1_c7 = np.array([0.6666666666666666, 0.6666666666666666, 2.6666666666666665]).reshape(3, 1)
+# c8 = 4*xi at the points of triangle-d2
 _R1_c8 = np.array([0.6666666666666666, 2.6666666666666665, 0.6666666666666666]).reshape(3, 1)
+# c9 = -4*eta at the points of triangle-d2
 _R1_c9 = np.array([-0.6666666666666666, -0.6666666666666666, -2.6666666666666665]).reshape(3, 1)
+# c10 = -8*eta - 4*xi + 4 at the points of triangle-d2
+_R1_c10 = np.array([2.0, 0.0, -2.0]).reshape(3, 1)
+# c11 = eta^2 at the points of triangle-d2
+_R1_c11 = np.array([0.027777777777777776, 0.027777777777777776, 0.4444444444444444]).reshape(3, 1)
+# c12 = eta*xi at the points of triangle-d2
+_R1_c12 = np.array([0.027777777777777776, 0.1111111111111111, 0.1111111111111111]).reshape(3, 1)
+# c13 = xi^2 at the points of triangle-d2
+_R1_c13 = np.array([0.027777777777777776, 0.4444444444444444, 0.027777777777777776]).reshape(3, 1)
+# c14 = (eta + xi - 1)*(2*eta + 2*xi - 1) at the points of triangle-d2
+_R1_c14 = np.array([0.2222222222222222, -0.1111111111111111, -0.1111111111111111]).reshape(3, 1)
+# c15 = xi*(2*xi - 1) at the points of triangle-d2
+_R1_c15 = np.array([-0.1111111111111111, 0.2222222222222222, -0.1111111111111111]).reshape(3, 1)
+# c16 = eta*(2*eta - 1) at the points of triangle-d2
+_R1_c16 = np.array([-0.1111111111111111, -0.1111111111111111, 0.2222222222222222]).reshape(3, 1)
+# c17 = -4*xi*(eta + xi - 1) at the points of triangle-d2
+_R1_c17 = np.array([0.4444444444444444, 0.4444444444444444, 0.1111111111111111]).reshape(3, 1)
+# c18 = 4*eta*xi at the points of triangle-d2
+_R1_c18 = np.array([0.1111111111111111, 0.4444444444444444, 0.4444444444444444]).reshape(3, 1)
+# c19 = -4*eta*(eta + xi - 1) at the points of triangle-d2
+_R1_c19 = np.array([0.4444444444444444, 0.1111111111111111, 0.4444444444444444]).reshape(3, 1)
+# eta = eta at the points of triangle-d2
 _R1_eta = np.array([0.16666666666666666, 0.16666666666666666, 0.6666666666666666]).reshape(3, 1)
+# xi = xi at the points of triangle-d2
 _R1_xi = np.array([0.16666666666666666, 0.6666666666666666, 0.16666666666666666]).reshape(3, 1)
 
 
@@ -136,6 +190,14 @@ def _stiffness_chunk(X, mat, buf):
     # triangle-d2: all 3 points at once
     c0 = _S0_c0
     c1 = _S0_c1
+    c2 = _S0_c2
+    c3 = _S0_c3
+    c4 = _S0_c4
+    c5 = _S0_c5
+    c6 = _S0_c6
+    c7 = _S0_c7
+    c8 = _S0_c8
+    c9 = _S0_c9
     c10 = _S0_c10
     c11 = _S0_c11
     c12 = _S0_c12
@@ -146,15 +208,7 @@ def _stiffness_chunk(X, mat, buf):
     c17 = _S0_c17
     c18 = _S0_c18
     c19 = _S0_c19
-    c2 = _S0_c2
     c20 = _S0_c20
-    c3 = _S0_c3
-    c4 = _S0_c4
-    c5 = _S0_c5
-    c6 = _S0_c6
-    c7 = _S0_c7
-    c8 = _S0_c8
-    c9 = _S0_c9
     eta = _S0_eta
     xi = _S0_xi
     J00 = gx_1_0 + c0*gx_2_0 + eta*gx_1_1
@@ -528,6 +582,14 @@ def _recovery_chunk(X, U, mat, strain, stress):
     # triangle-d2: all 3 points at once
     c0 = _R1_c0
     c1 = _R1_c1
+    c2 = _R1_c2
+    c3 = _R1_c3
+    c4 = _R1_c4
+    c5 = _R1_c5
+    c6 = _R1_c6
+    c7 = _R1_c7
+    c8 = _R1_c8
+    c9 = _R1_c9
     c10 = _R1_c10
     c11 = _R1_c11
     c12 = _R1_c12
@@ -538,14 +600,6 @@ def _recovery_chunk(X, U, mat, strain, stress):
     c17 = _R1_c17
     c18 = _R1_c18
     c19 = _R1_c19
-    c2 = _R1_c2
-    c3 = _R1_c3
-    c4 = _R1_c4
-    c5 = _R1_c5
-    c6 = _R1_c6
-    c7 = _R1_c7
-    c8 = _R1_c8
-    c9 = _R1_c9
     eta = _R1_eta
     xi = _R1_xi
     J00 = gx_1_0 + c0*gx_2_0 + eta*gx_1_1

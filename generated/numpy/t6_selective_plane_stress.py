@@ -2,20 +2,26 @@
 derive generated kernel: T6 selective plane-stress
 
 element      T6, 6 nodes, 12 DOFs interleaved u1, v1, u2, v2, ...
-formulation  selective integration: volumetric part of D with the reduced rule [Doherty, Wilson & Taylor (1969); Hughes (1987) Sec. 4.4]
-integration  B^T D_dev B: triangle-d2 (3 points); B^T D_vol B (reduced rule): triangle-d1 (1 point)
+formulation  selective integration: volumetric part of D with the reduced rule [Doherty, Wilson
+             & Taylor (1969); Hughes (1987) Sec. 4.4]
+integration  B^T D_dev B: triangle-d2 (3 points); B^T D_vol B (reduced rule): triangle-d1 (1
+             point)
 flops        stiffness 1514, validity 114, recovery 384 per element (add, mul, div, sqrt)
 
 arguments (units-agnostic; any consistent set of units):
-  xy      nodal coordinates, shape (n, 6, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of node i+1 (counter-clockwise corners first, then mid-side, then interior)
+  xy      nodal coordinates, shape (n, 6, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
+          node i+1 (counter-clockwise corners first, then mid-side, then interior)
   E       Young's modulus (> 0), scalar
   nu      Poisson's ratio (-1 < nu < 0.5), scalar
   t       thickness t (the out-of-plane thickness)
   u       nodal displacements for recovery, shape (n, 12), interleaved u1, v1, u2, v2, ...
   K       stiffness, shape (n, 12, 12), DOFs interleaved u1, v1, u2, v2, ...; symmetric
-  detJ_min validity: min det J over the points of triangle-d2, shape (n,); <= 0 means an inverted or degenerate element
-  strain  recovery: strain at the 3 points of triangle-d2, shape (n, 3, 3), Voigt [eps_xx, eps_yy, gamma_xy] (engineering shear)
-  stress  recovery: stress D strain at the same points, shape (n, 3, 3), [sigma_xx, sigma_yy, tau_xy]
+  detJ_min validity: min det J over the points of triangle-d2, shape (n,); <= 0 means an
+           inverted or degenerate element
+  strain  recovery: strain at the 3 points of triangle-d2, shape (n, 3, 3), Voigt [eps_xx,
+          eps_yy, gamma_xy] (engineering shear)
+  stress  recovery: stress D strain at the same points, shape (n, 3, 3), [sigma_xx, sigma_yy,
+          tau_xy]
 
 The kernels do not check their inputs; derive.kernel() checks shapes, finite
 coordinates and E, nu before calling them.  Screen meshes with the validity kernel.
@@ -39,50 +45,95 @@ GENERATOR = "derive.codegen 1.0"
 _CHUNK = 2048
 
 # point constants (shape-function derivatives, monomials, weights) per rule, (points, 1)
+# c0 = 2*xi at the points of triangle-d2
 _S0_c0 = np.array([0.3333333333333333, 1.3333333333333333, 0.3333333333333333]).reshape(3, 1)
+# c1 = 2*eta at the points of triangle-d2
 _S0_c1 = np.array([0.3333333333333333, 0.3333333333333333, 1.3333333333333333]).reshape(3, 1)
-_S0_c10 = np.array([2.0, 0.0, -2.0]).reshape(3, 1)
+# c2 = 4*eta + 4*xi - 3 at the points of triangle-d2
 _S0_c2 = np.array([-1.6666666666666667, 0.3333333333333333, 0.3333333333333333]).reshape(3, 1)
+# c3 = 4*xi - 1 at the points of triangle-d2
 _S0_c3 = np.array([-0.3333333333333333, 1.6666666666666667, -0.3333333333333333]).reshape(3, 1)
+# c4 = 4*eta - 1 at the points of triangle-d2
 _S0_c4 = np.array([-0.3333333333333333, -0.3333333333333333, 1.6666666666666667]).reshape(3, 1)
+# c5 = -4*eta - 8*xi + 4 at the points of triangle-d2
 _S0_c5 = np.array([2.0, -2.0, 0.0]).reshape(3, 1)
+# c6 = -4*xi at the points of triangle-d2
 _S0_c6 = np.array([-0.6666666666666666, -2.6666666666666665, -0.6666666666666666]).reshape(3, 1)
+# c7 = 4*eta at the points of triangle-d2
 _S0_c7 = np.array([0.6666666666666666, 0.6666666666666666, 2.6666666666666665]).reshape(3, 1)
+# c8 = 4*xi at the points of triangle-d2
 _S0_c8 = np.array([0.6666666666666666, 2.6666666666666665, 0.6666666666666666]).reshape(3, 1)
+# c9 = -4*eta at the points of triangle-d2
 _S0_c9 = np.array([-0.6666666666666666, -0.6666666666666666, -2.6666666666666665]).reshape(3, 1)
+# c10 = -8*eta - 4*xi + 4 at the points of triangle-d2
+_S0_c10 = np.array([2.0, 0.0, -2.0]).reshape(3, 1)
+# eta = eta at the points of triangle-d2
 _S0_eta = np.array([0.16666666666666666, 0.16666666666666666, 0.6666666666666666]).reshape(3, 1)
+# w = the point weight at the points of triangle-d2
 _S0_w = np.array([0.16666666666666666, 0.16666666666666666, 0.16666666666666666]).reshape(3, 1)
+# xi = xi at the points of triangle-d2
 _S0_xi = np.array([0.16666666666666666, 0.6666666666666666, 0.16666666666666666]).reshape(3, 1)
+# c0 = 2*xi at the points of triangle-d1
 _S1_c0 = np.array([0.6666666666666666]).reshape(1, 1)
+# c1 = 2*eta at the points of triangle-d1
 _S1_c1 = np.array([0.6666666666666666]).reshape(1, 1)
-_S1_c10 = np.array([0.0]).reshape(1, 1)
+# c2 = 4*eta + 4*xi - 3 at the points of triangle-d1
 _S1_c2 = np.array([-0.3333333333333333]).reshape(1, 1)
+# c3 = 4*xi - 1 at the points of triangle-d1
 _S1_c3 = np.array([0.3333333333333333]).reshape(1, 1)
+# c4 = 4*eta - 1 at the points of triangle-d1
 _S1_c4 = np.array([0.3333333333333333]).reshape(1, 1)
+# c5 = -4*eta - 8*xi + 4 at the points of triangle-d1
 _S1_c5 = np.array([0.0]).reshape(1, 1)
+# c6 = -4*xi at the points of triangle-d1
 _S1_c6 = np.array([-1.3333333333333333]).reshape(1, 1)
+# c7 = 4*eta at the points of triangle-d1
 _S1_c7 = np.array([1.3333333333333333]).reshape(1, 1)
+# c8 = 4*xi at the points of triangle-d1
 _S1_c8 = np.array([1.3333333333333333]).reshape(1, 1)
+# c9 = -4*eta at the points of triangle-d1
 _S1_c9 = np.array([-1.3333333333333333]).reshape(1, 1)
+# c10 = -8*eta - 4*xi + 4 at the points of triangle-d1
+_S1_c10 = np.array([0.0]).reshape(1, 1)
+# eta = eta at the points of triangle-d1
 _S1_eta = np.array([0.3333333333333333]).reshape(1, 1)
+# w = the point weight at the points of triangle-d1
 _S1_w = np.array([0.5]).reshape(1, 1)
+# xi = xi at the points of triangle-d1
 _S1_xi = np.array([0.3333333333333333]).reshape(1, 1)
+# c0 = 2*xi at the points of triangle-d2
 _V0_c0 = np.array([0.3333333333333333, 1.3333333333333333, 0.3333333333333333]).reshape(3, 1)
+# c1 = 2*eta at the points of triangle-d2
 _V0_c1 = np.array([0.3333333333333333, 0.3333333333333333, 1.3333333333333333]).reshape(3, 1)
+# eta = eta at the points of triangle-d2
 _V0_eta = np.array([0.16666666666666666, 0.16666666666666666, 0.6666666666666666]).reshape(3, 1)
+# xi = xi at the points of triangle-d2
 _V0_xi = np.array([0.16666666666666666, 0.6666666666666666, 0.16666666666666666]).reshape(3, 1)
+# c0 = 2*xi at the points of triangle-d2
 _R1_c0 = np.array([0.3333333333333333, 1.3333333333333333, 0.3333333333333333]).reshape(3, 1)
+# c1 = 2*eta at the points of triangle-d2
 _R1_c1 = np.array([0.3333333333333333, 0.3333333333333333, 1.3333333333333333]).reshape(3, 1)
-_R1_c10 = np.array([2.0, 0.0, -2.0]).reshape(3, 1)
+# c2 = 4*eta + 4*xi - 3 at the points of triangle-d2
 _R1_c2 = np.array([-1.6666666666666667, 0.3333333333333333, 0.3333333333333333]).reshape(3, 1)
+# c3 = 4*xi - 1 at the points of triangle-d2
 _R1_c3 = np.array([-0.3333333333333333, 1.6666666666666667, -0.3333333333333333]).reshape(3, 1)
+# c4 = 4*eta - 1 at the points of triangle-d2
 _R1_c4 = np.array([-0.3333333333333333, -0.3333333333333333, 1.6666666666666667]).reshape(3, 1)
+# c5 = -4*eta - 8*xi + 4 at the points of triangle-d2
 _R1_c5 = np.array([2.0, -2.0, 0.0]).reshape(3, 1)
+# c6 = -4*xi at the points of triangle-d2
 _R1_c6 = np.array([-0.6666666666666666, -2.6666666666666665, -0.6666666666666666]).reshape(3, 1)
+# c7 = 4*eta at the points of triangle-d2
 _R1_c7 = np.array([0.6666666666666666, 0.6666666666666666, 2.6666666666666665]).reshape(3, 1)
+# c8 = 4*xi at the points of triangle-d2
 _R1_c8 = np.array([0.6666666666666666, 2.6666666666666665, 0.6666666666666666]).reshape(3, 1)
+# c9 = -4*eta at the points of triangle-d2
 _R1_c9 = np.array([-0.6666666666666666, -0.6666666666666666, -2.6666666666666665]).reshape(3, 1)
+# c10 = -8*eta - 4*xi + 4 at the points of triangle-d2
+_R1_c10 = np.array([2.0, 0.0, -2.0]).reshape(3, 1)
+# eta = eta at the points of triangle-d2
 _R1_eta = np.array([0.16666666666666666, 0.16666666666666666, 0.6666666666666666]).reshape(3, 1)
+# xi = xi at the points of triangle-d2
 _R1_xi = np.array([0.16666666666666666, 0.6666666666666666, 0.16666666666666666]).reshape(3, 1)
 
 
@@ -138,7 +189,6 @@ def _stiffness_chunk(X, mat, buf):
     # triangle-d2: all 3 points at once
     c0 = _S0_c0
     c1 = _S0_c1
-    c10 = _S0_c10
     c2 = _S0_c2
     c3 = _S0_c3
     c4 = _S0_c4
@@ -147,6 +197,7 @@ def _stiffness_chunk(X, mat, buf):
     c7 = _S0_c7
     c8 = _S0_c8
     c9 = _S0_c9
+    c10 = _S0_c10
     eta = _S0_eta
     w = _S0_w
     xi = _S0_xi
@@ -292,7 +343,6 @@ def _stiffness_chunk(X, mat, buf):
     # triangle-d1: all 1 points at once
     c0 = _S1_c0
     c1 = _S1_c1
-    c10 = _S1_c10
     c2 = _S1_c2
     c3 = _S1_c3
     c4 = _S1_c4
@@ -301,6 +351,7 @@ def _stiffness_chunk(X, mat, buf):
     c7 = _S1_c7
     c8 = _S1_c8
     c9 = _S1_c9
+    c10 = _S1_c10
     eta = _S1_eta
     w = _S1_w
     xi = _S1_xi
@@ -643,7 +694,6 @@ def _recovery_chunk(X, U, mat, strain, stress):
     # triangle-d2: all 3 points at once
     c0 = _R1_c0
     c1 = _R1_c1
-    c10 = _R1_c10
     c2 = _R1_c2
     c3 = _R1_c3
     c4 = _R1_c4
@@ -652,6 +702,7 @@ def _recovery_chunk(X, U, mat, strain, stress):
     c7 = _R1_c7
     c8 = _R1_c8
     c9 = _R1_c9
+    c10 = _R1_c10
     eta = _R1_eta
     xi = _R1_xi
     J00 = gx_1_0 + c0*gx_2_0 + eta*gx_1_1
