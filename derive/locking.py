@@ -517,7 +517,8 @@ def strain_report(res: Response, state: str) -> dict:
         summary.append("missing " + ", ".join(f"{c} ({', '.join(comps[c]['missing_terms'])})" for c in missing))
     return {"units": "strain / eps0 (eps0 = C_xx*sigma0, the continuum's peak bending strain); x, y in units of b",
             "components": comps, "spurious": spurious, "missing": missing,
-            "summary": "; ".join(summary) if summary else "none: the element carries exactly the continuum's strain terms"}
+            "summary": "; ".join(summary) if summary else
+            "none: the element carries exactly the continuum's strain terms"}
 
 
 def _support(expr) -> set:

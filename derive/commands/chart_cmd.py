@@ -22,8 +22,9 @@ KINDS = ("locking", "contour", "distortion")
 
 
 def add_arguments(p) -> None:
-    p.add_argument("kind", choices=KINDS, help="locking (ratio vs aspect), contour (one element over aspect and nu), "
-                                               "distortion (ratio vs skew/taper/trapezoid)")
+    p.add_argument("kind", choices=KINDS,
+                   help="locking (ratio vs aspect), contour (one element over aspect and nu), "
+                        "distortion (ratio vs skew/taper/trapezoid)")
     p.add_argument("--elements", default="Q4:full",
                    help="ELEMENT[:VARIANT] list, e.g. Q4:full,Q4:eas4,Q8 (contour: exactly one)")
     p.add_argument("--state", default="plane-stress", help="plane-stress (default) or plane-strain")

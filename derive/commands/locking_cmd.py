@@ -10,7 +10,7 @@ from ..errors import InputError
 from ..locking import display_form, report
 from ..symbols import nu, r
 from ..output import CAUTION, parse_number
-from .common import add_output_args, output_format, print_json
+from .common import add_output_args, print_json
 
 NAME = "locking"
 HELP = ("closed-form bending ratio theta_element/theta_continuum of a 2a x 2b rectangle in pure bending, "

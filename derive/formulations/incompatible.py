@@ -81,7 +81,8 @@ def _build(variant: str, G, description: str, source: str) -> Formulation:
 
 def incompatible(info, state: str) -> Formulation:
     _check_square(info, "incompatible")
-    return _build("incompatible", G_op, "incompatible bubble modes, own Jacobian (fails the patch test off parallelograms)",
+    return _build("incompatible", G_op,
+                  "incompatible bubble modes, own Jacobian (fails the patch test off parallelograms)",
                   "Wilson, Taylor, Doherty & Ghaboussi (1973)")
 
 
