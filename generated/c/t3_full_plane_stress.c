@@ -26,7 +26,7 @@
  * generator    derive.codegen 1.0; regenerate with
  *              derive kernel T3 --variant full --state plane-stress --lang c
  *
- * C99.  Compile e.g. with: cc -O3 -march=native -fopenmp-simd -c t3_full_plane_stress.c
+ * C99.  Compile e.g. with: cc -O3 -march=native -c t3_full_plane_stress.c
  * (with GCC add -fno-tree-slp-vectorize: same speed, much shorter compile times).
  * Data layout: every array is dense, row-major (C order), float64.  The batch kernel
  * copies 8 elements at a time into element-innermost scratch arrays so that the
@@ -217,6 +217,47 @@ static inline void t3_full_plane_stress_store(double *restrict dst, const double
     memcpy(dst, src, (size_t)count * sizeof(double));
 }
 
+/* rows[l][k] = out[k][l]: lane-major scratch back to element-major (8 x 8 blocks in
+ * registers with AVX-512, element by element otherwise) */
+static inline void t3_full_plane_stress_transpose(const double *restrict out, double *restrict rows, long m)
+{
+    int k0 = 0;
+#if defined(DERIVE_VEC) && DERIVE_VEC == 8 && LANES == 8
+    if (m == LANES) {
+        const __m512i lo = _mm512_set_epi64(13, 12, 5, 4, 9, 8, 1, 0);
+        const __m512i hi = _mm512_set_epi64(15, 14, 7, 6, 11, 10, 3, 2);
+        const __m512i l2 = _mm512_set_epi64(11, 10, 9, 8, 3, 2, 1, 0);
+        const __m512i h2 = _mm512_set_epi64(15, 14, 13, 12, 7, 6, 5, 4);
+        for (; k0 + 8 <= NK; k0 += 8) {
+            const double *o = out + k0 * LANES;
+            const __m512d t0 = _mm512_unpacklo_pd(_mm512_loadu_pd(o), _mm512_loadu_pd(o + 8));
+            const __m512d t1 = _mm512_unpackhi_pd(_mm512_loadu_pd(o), _mm512_loadu_pd(o + 8));
+            const __m512d t2 = _mm512_unpacklo_pd(_mm512_loadu_pd(o + 16), _mm512_loadu_pd(o + 24));
+            const __m512d t3 = _mm512_unpackhi_pd(_mm512_loadu_pd(o + 16), _mm512_loadu_pd(o + 24));
+            const __m512d t4 = _mm512_unpacklo_pd(_mm512_loadu_pd(o + 32), _mm512_loadu_pd(o + 40));
+            const __m512d t5 = _mm512_unpackhi_pd(_mm512_loadu_pd(o + 32), _mm512_loadu_pd(o + 40));
+            const __m512d t6 = _mm512_unpacklo_pd(_mm512_loadu_pd(o + 48), _mm512_loadu_pd(o + 56));
+            const __m512d t7 = _mm512_unpackhi_pd(_mm512_loadu_pd(o + 48), _mm512_loadu_pd(o + 56));
+            const __m512d u0 = _mm512_permutex2var_pd(t0, lo, t2), u1 = _mm512_permutex2var_pd(t1, lo, t3);
+            const __m512d u2 = _mm512_permutex2var_pd(t0, hi, t2), u3 = _mm512_permutex2var_pd(t1, hi, t3);
+            const __m512d u4 = _mm512_permutex2var_pd(t4, lo, t6), u5 = _mm512_permutex2var_pd(t5, lo, t7);
+            const __m512d u6 = _mm512_permutex2var_pd(t4, hi, t6), u7 = _mm512_permutex2var_pd(t5, hi, t7);
+            _mm512_storeu_pd(rows + 0 * NK + k0, _mm512_permutex2var_pd(u0, l2, u4));
+            _mm512_storeu_pd(rows + 1 * NK + k0, _mm512_permutex2var_pd(u1, l2, u5));
+            _mm512_storeu_pd(rows + 2 * NK + k0, _mm512_permutex2var_pd(u2, l2, u6));
+            _mm512_storeu_pd(rows + 3 * NK + k0, _mm512_permutex2var_pd(u3, l2, u7));
+            _mm512_storeu_pd(rows + 4 * NK + k0, _mm512_permutex2var_pd(u0, h2, u4));
+            _mm512_storeu_pd(rows + 5 * NK + k0, _mm512_permutex2var_pd(u1, h2, u5));
+            _mm512_storeu_pd(rows + 6 * NK + k0, _mm512_permutex2var_pd(u2, h2, u6));
+            _mm512_storeu_pd(rows + 7 * NK + k0, _mm512_permutex2var_pd(u3, h2, u7));
+        }
+    }
+#endif
+    for (long l = 0; l < m; ++l)
+        for (int k = k0; k < NK; ++k)
+            rows[l * NK + k] = out[k * LANES + l];
+}
+
 void derive_t3_full_plane_stress_stiffness_batch(long n, const double *restrict xy, double E, double nu, double t,
                                   double *restrict K)
 {
@@ -234,12 +275,14 @@ void derive_t3_full_plane_stress_stiffness_batch(long n, const double *restrict 
             for (int k = 0; k < NIN; ++k)
                 in[k * LANES + l] = src[k];
         }
-#pragma omp simd
+#if defined(__clang__)
+#pragma clang loop vectorize(enable)
+#elif defined(__GNUC__)
+#pragma GCC ivdep
+#endif
         for (int l = 0; l < LANES; ++l)
             t3_full_plane_stress_stiffness_body(in + l, LANES, mat, out + l, LANES);
-        for (long l = 0; l < m; ++l)
-            for (int k = 0; k < NK; ++k)
-                rows[l * NK + k] = out[k * LANES + l];
+        t3_full_plane_stress_transpose(out, rows, m);
         t3_full_plane_stress_store(K + (size_t)b * NK, rows, m * NK, stream);
     }
 #ifdef DERIVE_VEC
