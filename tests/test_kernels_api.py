@@ -300,3 +300,16 @@ def test_cli_spec_element(capsys):
     assert main(["kernel", "q8-serendipity.toml", "--lang", "numpy", "--json"]) == 0
     out = json.loads(capsys.readouterr().out)
     assert out["kernels"][0]["ndof"] == 16
+
+
+def test_cli_all_and_check_exit_status(tmp_path, monkeypatch, capsys):
+    fake = {"manifest.json": "{}\n", "c/x.c": "int x;\n"}
+    monkeypatch.setattr(committed, "render_all", lambda jobs=None, progress=None: dict(fake))
+    dest = tmp_path / "gen"
+    assert main(["kernel", "--all", "-o", str(dest)]) == 0
+    assert main(["kernel", "--check", "-o", str(dest)]) == 0
+    (dest / "c" / "x.c").write_text("int y;\n")
+    capsys.readouterr()
+    assert main(["kernel", "--check", "-o", str(dest), "--json"]) == 1      # a check ran and failed
+    out = json.loads(capsys.readouterr().out)
+    assert out["up_to_date"] is False and out["differences"] == ["differs: c/x.c"]

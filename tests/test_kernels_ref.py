@@ -14,8 +14,10 @@ published method:
   Jacobian, condensed;
 * incompatible-centred: Taylor, Beresford & Wilson (1976) (from memory): the bubble
   derivatives through the centre Jacobian, scaled by det J0 / det J;
-* bbar: mean dilatation, Nagtegaal, Parks & Rice (1974); Hughes (1980) (from memory):
-  K = int B^T D_dev B dV + kappa g g^T / V, g = int B^T m dV;
+* bbar: Hughes (1980) (from memory): the dilatation projected onto a pressure space pi,
+  K = int B^T D_dev B dV + kappa g^T M_p^-1 g, g = int pi^T m^T B dV, M_p = int pi^T pi dV;
+  constant pi for Q4 (mean dilatation, Nagtegaal, Parks & Rice 1974), {1, xi, eta} for the
+  quadratic elements;
 * eas4: Simo & Rifai (1990) (from memory): eps_enh = (det J0 / det J) T0^-T E(xi, eta)
   alpha with T0 the covariant-to-physical strain map at the centre (built here by
   transforming unit strain tensors, eps~ = J0 eps J0^T);
@@ -182,6 +184,13 @@ def centre_jacobian(name, X):
 # ---------------------------------------------------------------------------------------------
 # blocks per variant: returns (Kuu, Kua, Kaa) with Kua/Kaa None for plain elements
 
+def pressure(name, s, r) -> np.ndarray:
+    """Pressure space of B-bar: constant for Q4 (mean dilatation, Nagtegaal, Parks & Rice 1974),
+    linear {1, xi, eta} for the quadratic elements (the three-parameter pressure of the mixed
+    quadratic elements; the choice documented for derive's B-bar)."""
+    return np.array([1.0]) if name == "Q4" else np.array([1.0, s, r])
+
+
 def _bubbles(s, r):
     return np.array([1 - s * s, 1 - r * r]), np.array([-2 * s, 0.0]), np.array([0.0, -2 * r])
 
@@ -206,11 +215,15 @@ def blocks(name, variant, state, X, E, nu, t):
         return K, None, None
     pts = points(name, state, X, "full", t)
     if variant == "bbar":
+        # B-bar: the dilatation m^T B u projected onto the pressure space pi (L2 projection),
+        # K = K_dev + kappa g^T M_p^-1 g, g = int pi^T m^T B dV, M_p = int pi^T pi dV, written as
+        # a condensation with K_ua = g^T, K_aa = -M_p / kappa
         Kuu = sum(np.einsum("eki,kl,elj->eij", p.B, Ddev, p.B) * (w * p.dV)[:, None, None] for p, w in pts)
-        g = sum(np.einsum("eki,k->ei", p.B, m) * (w * p.dV)[:, None] for p, w in pts)
-        V = sum(w * p.dV for p, w in pts)
-        # mean dilatation: K = K_dev + kappa g g^T / V (written as a condensation with K_aa = -V / kappa)
-        return Kuu, g[:, :, None], (-V / kappa)[:, None, None]
+        g = sum(np.einsum("a,eki,k->eai", pressure(name, p.s, p.rr), p.B, m) * (w * p.dV)[:, None, None]
+                for p, w in pts)
+        Mp = sum(np.outer(pressure(name, p.s, p.rr), pressure(name, p.s, p.rr))[None] * (w * p.dV)[:, None, None]
+                 for p, w in pts)
+        return Kuu, np.transpose(g, (0, 2, 1)), -Mp / kappa
     J0 = centre_jacobian(name, X)
     det0 = J0[:, 0, 0] * J0[:, 1, 1] - J0[:, 0, 1] * J0[:, 1, 0]
     if variant in ("incompatible", "incompatible-centred"):
@@ -300,9 +313,9 @@ def recovery(name, variant, state, X, U, E, nu):
         if variant == "bbar":
             m = m_vector(state)
             nm = m @ m
-            V = sum(w2 * p2.dV for p2, w2 in pts)
-            g = sum(np.einsum("eki,k->ei", p2.B, m) * (w2 * p2.dV)[:, None] for p2, w2 in pts)
-            theta = np.einsum("ei,ei->e", g, U) / V     # element mean of the volumetric strain
+            # the projected dilatation theta_bar = pi M_p^-1 g u replaces m^T B u; with the
+            # condensed pressure parameters alpha = kappa M_p^-1 g u it is pi alpha / kappa
+            theta = np.einsum("a,ea->e", pressure(name, p.s, p.rr), alpha) / bulk(state, E, nu)
             eps = eps - np.outer(eps @ m, m) / nm + np.outer(theta, m) / nm
         elif variant in ("incompatible", "incompatible-centred"):
             J0 = centre_jacobian(name, X)

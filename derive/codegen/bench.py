@@ -12,14 +12,12 @@ by the timed code.
 """
 from __future__ import annotations
 
-import os
 import platform
 import time
 
 import numpy as np
 
 from .. import catalog, quadrature
-from ..material import D as D_sym
 
 ELEMENTS = ("Q4", "Q8", "T6")
 COMMAND = "derive perf --kernels"

@@ -26,7 +26,7 @@ from .. import catalog
 from ..errors import InputError
 from ..material import STATES
 from . import GENERATOR_VERSION
-from .emit import LANGS, generate
+from .emit import generate
 
 NATIVE_STATES = ("plane-stress",)
 MANIFEST = "manifest.json"

@@ -12,11 +12,8 @@ from dataclasses import dataclass
 from functools import lru_cache
 
 import jinja2
-import sympy as sp
 
 from .. import catalog, quadrature
-from ..catalog import ElementInfo
-from ..material import STATES
 from . import GENERATOR_VERSION
 from .ir import KernelIR, build
 from .lower import Lowered, lower
@@ -289,9 +286,9 @@ def _mirror_expr(items, idx, shape):
     raise KeyError(idx)
 
 
-def _mat_lines(low: Lowered, indent="    ") -> list[str]:
+def _mat_lines(mats: list, indent="    ") -> list[str]:
     lines = [f"{indent}mat[0] = E;", f"{indent}mat[1] = nu;", f"{indent}mat[2] = t;"]
-    for k, (s, e) in enumerate(low.mat):
+    for k, (s, e) in enumerate(mats):
         lines += wrap_c(f"{indent}mat[{3 + k}] = {c_expr(e)};   /* {s} */", indent)
     return lines
 
@@ -319,18 +316,13 @@ def render_c(ir: KernelIR, lows: dict, meta: dict, name: str) -> list[Source]:
     ctx = {
         "header": header_lines(ir, meta, "c"), "prefix": prefix, "name": name, "guard": prefix.upper() + "_H",
         "nin": nin, "nk": nk, "ndof": ir.ndof, "nodes": ir.n_nodes, "nmat": 3 + len(mats), "lanes": C_LANES,
-        "mat_lines": _mat_lines(_MatView(mats)), "stiff_body": stiff_body, "valid_body": valid_body,
+        "mat_lines": _mat_lines(mats), "stiff_body": stiff_body, "valid_body": valid_body,
         "rec_body": rec_body, "nrec": meta["recovery_points"] * nstr, "nstrain": nstr,
         "npoints": meta["recovery_points"], "version": GENERATOR_VERSION, "tables": c1 + c2 + c3,
     }
     env = _env()
     return [Source(f"c/{name}.c", env.get_template("kernel.c.j2").render(**ctx)),
             Source(f"c/{name}.h", env.get_template("kernel.h.j2").render(**ctx))]
-
-
-class _MatView:
-    def __init__(self, mats):
-        self.mat = mats
 
 
 def _merge_mats(lows: dict) -> list:
@@ -345,9 +337,8 @@ def _merge_mats(lows: dict) -> list:
 
 
 def _remap_mats(low: Lowered, mats: list):
+    """Give every kernel of a file the same material table (indices into mat[])."""
     low.mat = list(mats)
-    for s, _ in mats:
-        pass
 
 
 # ---------------------------------------------------------------------------------------------
@@ -577,14 +568,9 @@ def render_numpy(ir: KernelIR, lows: dict, meta: dict, name: str) -> list[Source
            "consts": sc + vc + rc, "stiff_lines": sl, "valid_lines": vl, "rec_lines": rl,
            "mat_lines": mat_lines, "mat_names": ["E", "nu", "t"] + [str(s) for s, _ in mats],
            "element": ir.element, "variant": ir.variant, "state": ir.state, "version": GENERATOR_VERSION,
-           "meta_repr": _py_literal(meta)}
+           }
     text = _env().get_template("kernel.py.j2").render(**ctx)
     return [Source(f"numpy/{name}.py", text)]
-
-
-def _py_literal(obj, indent=0) -> str:
-    import json
-    return json.dumps(obj, indent=4, sort_keys=True)
 
 
 # ---------------------------------------------------------------------------------------------

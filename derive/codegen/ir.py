@@ -32,7 +32,7 @@ from functools import cached_property
 
 import sympy as sp
 
-from .. import catalog, kinematics, material, quadrature
+from .. import catalog, kinematics, quadrature
 from ..errors import InputError
 from ..formulations.base import Point
 from ..geometry import IsoMap, make_geometry

@@ -17,7 +17,6 @@ import os
 import platform
 import shutil
 import subprocess
-import sys
 import tempfile
 import threading
 import types
@@ -30,7 +29,6 @@ import numpy as np
 from .. import catalog
 from ..errors import GeometryError, InputError
 from ..material import STATES, check_material
-from . import GENERATOR_VERSION
 from .emit import LANGS, generate
 
 #: GNU compilers: -fno-tree-slp-vectorize avoids a pathological compile time in the RTL

@@ -18,7 +18,7 @@ import sympy as sp
 from sympy.simplify.cse_main import tree_cse
 
 from ..symbols import eta, xi
-from .ir import PC, W, Function, KernelIR
+from .ir import W, Function, KernelIR
 from .printers import count_ops
 
 _DIGITS = 30
@@ -175,13 +175,6 @@ def _lower_group(g, pv: PointValues, mode: str, cse: bool) -> list:
                     npoints=g.npoints, rolled=True)
         if cse and mode == "mixed":
             _cse_block(blk)
-        pcs = set()
-        for _, e in blk.stmts:
-            pcs |= _free(e)
-        for _, e, *_ in blk.accs:
-            pcs |= _free(e)
-        for _, _, e in blk.outs:
-            pcs |= _free(e)
         blk._points = (g.points, g.weights)
         blk._pv = pv
         return [blk]

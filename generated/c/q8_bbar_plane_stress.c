@@ -2,13 +2,13 @@
  * derive generated kernel: Q8 bbar plane-stress
  *
  * element      Q8, 8 nodes, 16 DOFs interleaved u1, v1, u2, v2, ...
- * formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed)
- *              [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
- * integration  B^T D_dev B: gauss-3x3 (9 points); B^T m (g): gauss-3x3 (9 points); -1/kappa
- *              (-V/kappa): gauss-3x3 (9 points)
- * internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+ * formulation  B-bar, dilatation projected on a linear pressure {1, xi, eta}: K_dev + kappa g^T
+ *              M_p^-1 g [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
+ * integration  B^T D_dev B: gauss-3x3 (9 points); B^T m pi (g): gauss-3x3 (9 points); -pi^T pi /
+ *              kappa (-M_p / kappa): gauss-3x3 (9 points)
+ * internal     3 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
  *              (unrolled factorisation of K_aa, no pivoting)
- * flops        stiffness 7052, validity 330, recovery 2842 per element (add, mul, div, sqrt)
+ * flops        stiffness 8749, validity 330, recovery 3971 per element (add, mul, div, sqrt)
  *
  * arguments (units-agnostic; any consistent set of units):
  *   xy      nodal coordinates, shape (n, 8, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
@@ -17,7 +17,7 @@
  *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
  *   t       thickness t (the out-of-plane thickness)
  *   u       nodal displacements for recovery, shape (n, 16), interleaved u1, v1, u2, v2, ...
- *   K       stiffness, shape (n, 16, 16), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1
+ *   K       stiffness, shape (n, 16, 16), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 3
  *           internal unknowns are condensed
  *   detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted
  *            or degenerate element
@@ -62,7 +62,7 @@
 
 #define NIN 16
 #define NK 256
-#define NMAT 11
+#define NMAT 12
 #define LANES 8
 #if defined(__GNUC__)
 /* inlined into the lane loop so that the loop over elements vectorises */
@@ -186,6 +186,120 @@ static const double KS0_xi[9] = {
     -0.7745966692414834, 0.0, 0.7745966692414834, -0.7745966692414834, 0.0, 0.7745966692414834,
     -0.7745966692414834, 0.0, 0.7745966692414834
 };
+/* c0 = eta^2 at the points of gauss-3x3 */
+static const double KR0_c0[9] = {
+    0.6, 0.6, 0.6, 0.0, 0.0, 0.0, 0.6, 0.6, 0.6
+};
+/* c1 = 2*xi at the points of gauss-3x3 */
+static const double KR0_c1[9] = {
+    -1.5491933384829668, 0.0, 1.5491933384829668, -1.5491933384829668, 0.0, 1.5491933384829668,
+    -1.5491933384829668, 0.0, 1.5491933384829668
+};
+/* c2 = 2*eta*xi at the points of gauss-3x3 */
+static const double KR0_c2[9] = {
+    1.2, 0.0, -1.2, 0.0, 0.0, 0.0, -1.2, 0.0, 1.2
+};
+/* c3 = 2*eta at the points of gauss-3x3 */
+static const double KR0_c3[9] = {
+    -1.5491933384829668, -1.5491933384829668, -1.5491933384829668, 0.0, 0.0, 0.0,
+    1.5491933384829668, 1.5491933384829668, 1.5491933384829668
+};
+/* c4 = xi^2 at the points of gauss-3x3 */
+static const double KR0_c4[9] = {
+    0.6, 0.0, 0.6, 0.6, 0.0, 0.6, 0.6, 0.0, 0.6
+};
+/* c5 = -eta^2/4 - eta*xi/2 + eta/4 + xi/2 at the points of gauss-3x3 */
+static const double KR0_c5[9] = {
+    -1.0309475019311125, -0.3436491673103708, 0.3436491673103708, -0.3872983346207417, 0.0,
+    0.3872983346207417, -0.04364916731037084, 0.04364916731037084, 0.13094750193111254
+};
+/* c6 = -eta*xi/2 + eta/2 - xi^2/4 + xi/4 at the points of gauss-3x3 */
+static const double KR0_c6[9] = {
+    -1.0309475019311125, -0.3872983346207417, -0.04364916731037084, -0.3436491673103708, 0.0,
+    0.04364916731037084, 0.3436491673103708, 0.3872983346207417, 0.13094750193111254
+};
+/* c7 = eta^2/4 - eta*xi/2 - eta/4 + xi/2 at the points of gauss-3x3 */
+static const double KR0_c7[9] = {
+    -0.3436491673103708, 0.3436491673103708, 1.0309475019311125, -0.3872983346207417, 0.0,
+    0.3872983346207417, -0.13094750193111254, -0.04364916731037084, 0.04364916731037084
+};
+/* c8 = eta*xi/2 + eta/2 - xi^2/4 - xi/4 at the points of gauss-3x3 */
+static const double KR0_c8[9] = {
+    -0.04364916731037084, -0.3872983346207417, -1.0309475019311125, 0.04364916731037084, 0.0,
+    -0.3436491673103708, 0.13094750193111254, 0.3872983346207417, 0.3436491673103708
+};
+/* c9 = eta^2/4 + eta*xi/2 + eta/4 + xi/2 at the points of gauss-3x3 */
+static const double KR0_c9[9] = {
+    -0.13094750193111254, -0.04364916731037084, 0.04364916731037084, -0.3872983346207417, 0.0,
+    0.3872983346207417, -0.3436491673103708, 0.3436491673103708, 1.0309475019311125
+};
+/* c10 = eta*xi/2 + eta/2 + xi^2/4 + xi/4 at the points of gauss-3x3 */
+static const double KR0_c10[9] = {
+    -0.13094750193111254, -0.3872983346207417, -0.3436491673103708, -0.04364916731037084, 0.0,
+    0.3436491673103708, 0.04364916731037084, 0.3872983346207417, 1.0309475019311125
+};
+/* c11 = -eta^2/4 + eta*xi/2 - eta/4 + xi/2 at the points of gauss-3x3 */
+static const double KR0_c11[9] = {
+    -0.04364916731037084, 0.04364916731037084, 0.13094750193111254, -0.3872983346207417, 0.0,
+    0.3872983346207417, -1.0309475019311125, -0.3436491673103708, 0.3436491673103708
+};
+/* c12 = -eta*xi/2 + eta/2 + xi^2/4 - xi/4 at the points of gauss-3x3 */
+static const double KR0_c12[9] = {
+    -0.3436491673103708, -0.3872983346207417, -0.13094750193111254, 0.3436491673103708, 0.0,
+    -0.04364916731037084, 1.0309475019311125, 0.3872983346207417, 0.04364916731037084
+};
+/* c13 = eta*xi - xi at the points of gauss-3x3 */
+static const double KR0_c13[9] = {
+    1.3745966692414833, 0.0, -1.3745966692414833, 0.7745966692414834, 0.0, -0.7745966692414834,
+    0.17459666924148337, 0.0, -0.17459666924148337
+};
+/* c14 = xi^2/2 - 1/2 at the points of gauss-3x3 */
+static const double KR0_c14[9] = {
+    -0.2, -0.5, -0.2, -0.2, -0.5, -0.2, -0.2, -0.5, -0.2
+};
+/* c15 = 1/2 - eta^2/2 at the points of gauss-3x3 */
+static const double KR0_c15[9] = {
+    0.2, 0.2, 0.2, 0.5, 0.5, 0.5, 0.2, 0.2, 0.2
+};
+/* c16 = -eta*xi - eta at the points of gauss-3x3 */
+static const double KR0_c16[9] = {
+    0.17459666924148337, 0.7745966692414834, 1.3745966692414833, 0.0, 0.0, 0.0,
+    -0.17459666924148337, -0.7745966692414834, -1.3745966692414833
+};
+/* c17 = -eta*xi - xi at the points of gauss-3x3 */
+static const double KR0_c17[9] = {
+    0.17459666924148337, 0.0, -0.17459666924148337, 0.7745966692414834, 0.0, -0.7745966692414834,
+    1.3745966692414833, 0.0, -1.3745966692414833
+};
+/* c18 = 1/2 - xi^2/2 at the points of gauss-3x3 */
+static const double KR0_c18[9] = {
+    0.2, 0.5, 0.2, 0.2, 0.5, 0.2, 0.2, 0.5, 0.2
+};
+/* c19 = eta^2/2 - 1/2 at the points of gauss-3x3 */
+static const double KR0_c19[9] = {
+    -0.2, -0.2, -0.2, -0.5, -0.5, -0.5, -0.2, -0.2, -0.2
+};
+/* c20 = eta*xi - eta at the points of gauss-3x3 */
+static const double KR0_c20[9] = {
+    1.3745966692414833, 0.7745966692414834, 0.17459666924148337, 0.0, 0.0, 0.0, -1.3745966692414833,
+    -0.7745966692414834, -0.17459666924148337
+};
+/* eta = eta at the points of gauss-3x3 */
+static const double KR0_eta[9] = {
+    -0.7745966692414834, -0.7745966692414834, -0.7745966692414834, 0.0, 0.0, 0.0,
+    0.7745966692414834, 0.7745966692414834, 0.7745966692414834
+};
+/* w = the point weight at the points of gauss-3x3 */
+static const double KR0_w[9] = {
+    0.30864197530864196, 0.49382716049382713, 0.30864197530864196, 0.49382716049382713,
+    0.7901234567901234, 0.49382716049382713, 0.30864197530864196, 0.49382716049382713,
+    0.30864197530864196
+};
+/* xi = xi at the points of gauss-3x3 */
+static const double KR0_xi[9] = {
+    -0.7745966692414834, 0.0, 0.7745966692414834, -0.7745966692414834, 0.0, 0.7745966692414834,
+    -0.7745966692414834, 0.0, 0.7745966692414834
+};
 
 /* material table: E, nu, t, then the material constants the kernels use */
 static inline void q8_bbar_plane_stress_material(double E, double nu, double t, double *restrict mat)
@@ -198,9 +312,10 @@ static inline void q8_bbar_plane_stress_material(double E, double nu, double t, 
     mat[5] = E/(2.0 + 2.0*nu);   /* m2 */
     mat[6] = -(-3.0 + 3.0*nu*nu)/(-E - 2.0*E*nu);   /* m3 */
     mat[7] = 0.5*(-3.0 + 3.0*nu*nu)/(-E - 2.0*E*nu);   /* m4 */
-    mat[8] = E/(1.0 - nu*nu);   /* m5 */
-    mat[9] = E*nu/(1.0 - nu*nu);   /* m6 */
-    mat[10] = E*(0.5 - 0.5*nu)/(1.0 - nu*nu);   /* m7 */
+    mat[8] = (-3.0 + 3.0*nu*nu)/(-E - 2.0*E*nu);   /* m5 */
+    mat[9] = E/(1.0 - nu*nu);   /* m6 */
+    mat[10] = E*nu/(1.0 - nu*nu);   /* m7 */
+    mat[11] = E*(0.5 - 0.5*nu)/(1.0 - nu*nu);   /* m8 */
 }
 
 /* stiffness of one element; xy[k * sx] is input k, K[k * sk] output k (row-major) */
@@ -266,10 +381,15 @@ DERIVE_INLINE void q8_bbar_plane_stress_stiffness_body(const double *restrict xy
     double K_10_11 = 0.0, K_10_12 = 0.0, K_10_13 = 0.0, K_10_14 = 0.0, K_10_15 = 0.0, K_11_11 = 0.0;
     double K_11_12 = 0.0, K_11_13 = 0.0, K_11_14 = 0.0, K_11_15 = 0.0, K_12_12 = 0.0, K_12_13 = 0.0;
     double K_12_14 = 0.0, K_12_15 = 0.0, K_13_13 = 0.0, K_13_14 = 0.0, K_13_15 = 0.0, K_14_14 = 0.0;
-    double K_14_15 = 0.0, K_15_15 = 0.0, A_0_0 = 0.0, A_1_0 = 0.0, A_2_0 = 0.0, A_3_0 = 0.0;
-    double A_4_0 = 0.0, A_5_0 = 0.0, A_6_0 = 0.0, A_7_0 = 0.0, A_8_0 = 0.0, A_9_0 = 0.0;
-    double A_10_0 = 0.0, A_11_0 = 0.0, A_12_0 = 0.0, A_13_0 = 0.0, A_14_0 = 0.0, A_15_0 = 0.0;
-    double H_0_0 = 0.0;
+    double K_14_15 = 0.0, K_15_15 = 0.0, A_0_0 = 0.0, A_0_1 = 0.0, A_0_2 = 0.0, A_1_0 = 0.0;
+    double A_1_1 = 0.0, A_1_2 = 0.0, A_2_0 = 0.0, A_2_1 = 0.0, A_2_2 = 0.0, A_3_0 = 0.0, A_3_1 = 0.0;
+    double A_3_2 = 0.0, A_4_0 = 0.0, A_4_1 = 0.0, A_4_2 = 0.0, A_5_0 = 0.0, A_5_1 = 0.0, A_5_2 = 0.0;
+    double A_6_0 = 0.0, A_6_1 = 0.0, A_6_2 = 0.0, A_7_0 = 0.0, A_7_1 = 0.0, A_7_2 = 0.0, A_8_0 = 0.0;
+    double A_8_1 = 0.0, A_8_2 = 0.0, A_9_0 = 0.0, A_9_1 = 0.0, A_9_2 = 0.0, A_10_0 = 0.0;
+    double A_10_1 = 0.0, A_10_2 = 0.0, A_11_0 = 0.0, A_11_1 = 0.0, A_11_2 = 0.0, A_12_0 = 0.0;
+    double A_12_1 = 0.0, A_12_2 = 0.0, A_13_0 = 0.0, A_13_1 = 0.0, A_13_2 = 0.0, A_14_0 = 0.0;
+    double A_14_1 = 0.0, A_14_2 = 0.0, A_15_0 = 0.0, A_15_1 = 0.0, A_15_2 = 0.0, H_0_0 = 0.0;
+    double H_0_1 = 0.0, H_0_2 = 0.0, H_1_1 = 0.0, H_1_2 = 0.0, H_2_2 = 0.0;
     for (int p = 0; p < 9; ++p) {   /* gauss-3x3: loop over the 9 points */
         const double c0 = KS0_c0[p];
         const double c1 = KS0_c1[p];
@@ -372,7 +492,11 @@ DERIVE_INLINE void q8_bbar_plane_stress_stiffness_body(const double *restrict xy
         const double T49 = dNdy8*s2;
         const double T50 = dNdy8*s1;
         const double T51 = dNdx8*s3;
-        const double s52 = m3*sc0;
+        const double T52 = sc0*xi;
+        const double T53 = eta*sc0;
+        const double s54 = m3*sc0;
+        const double T55 = s54*xi;
+        const double T56 = eta*s54;
         K_0_0 += T4*dNdx1 + T6*dNdy1;
         K_0_1 += T7*dNdx1 + T9*dNdy1;
         K_0_2 += T10*dNdx1 + T12*dNdy1;
@@ -510,297 +634,405 @@ DERIVE_INLINE void q8_bbar_plane_stress_stiffness_body(const double *restrict xy
         K_14_15 += T49*dNdx8 + T51*dNdy8;
         K_15_15 += T50*dNdy8 + T51*dNdx8;
         A_0_0 += dNdx1*sc0;
+        A_0_1 += T52*dNdx1;
+        A_0_2 += T53*dNdx1;
         A_1_0 += dNdy1*sc0;
+        A_1_1 += T52*dNdy1;
+        A_1_2 += T53*dNdy1;
         A_2_0 += dNdx2*sc0;
+        A_2_1 += T52*dNdx2;
+        A_2_2 += T53*dNdx2;
         A_3_0 += dNdy2*sc0;
+        A_3_1 += T52*dNdy2;
+        A_3_2 += T53*dNdy2;
         A_4_0 += dNdx3*sc0;
+        A_4_1 += T52*dNdx3;
+        A_4_2 += T53*dNdx3;
         A_5_0 += dNdy3*sc0;
+        A_5_1 += T52*dNdy3;
+        A_5_2 += T53*dNdy3;
         A_6_0 += dNdx4*sc0;
+        A_6_1 += T52*dNdx4;
+        A_6_2 += T53*dNdx4;
         A_7_0 += dNdy4*sc0;
+        A_7_1 += T52*dNdy4;
+        A_7_2 += T53*dNdy4;
         A_8_0 += dNdx5*sc0;
+        A_8_1 += T52*dNdx5;
+        A_8_2 += T53*dNdx5;
         A_9_0 += dNdy5*sc0;
+        A_9_1 += T52*dNdy5;
+        A_9_2 += T53*dNdy5;
         A_10_0 += dNdx6*sc0;
+        A_10_1 += T52*dNdx6;
+        A_10_2 += T53*dNdx6;
         A_11_0 += dNdy6*sc0;
+        A_11_1 += T52*dNdy6;
+        A_11_2 += T53*dNdy6;
         A_12_0 += dNdx7*sc0;
+        A_12_1 += T52*dNdx7;
+        A_12_2 += T53*dNdx7;
         A_13_0 += dNdy7*sc0;
+        A_13_1 += T52*dNdy7;
+        A_13_2 += T53*dNdy7;
         A_14_0 += dNdx8*sc0;
+        A_14_1 += T52*dNdx8;
+        A_14_2 += T53*dNdx8;
         A_15_0 += dNdy8*sc0;
-        H_0_0 += s52;
+        A_15_1 += T52*dNdy8;
+        A_15_2 += T53*dNdy8;
+        H_0_0 += s54;
+        H_0_1 += T55;
+        H_0_2 += T56;
+        H_1_1 += T55*xi;
+        H_1_2 += T56*xi;
+        H_2_2 += T56*eta;
     }
     /* static condensation of the internal unknowns */
     const double cid0 = 1.0/H_0_0;
+    const double cL1_0 = H_0_1*cid0;
+    const double cL2_0 = H_0_2*cid0;
+    const double cd1 = H_1_1 - H_0_0*cL1_0*cL1_0;
+    const double cid1 = 1.0/cd1;
+    const double cL2_1 = cid1*(H_1_2 - H_0_0*cL1_0*cL2_0);
+    const double cd2 = H_2_2 - H_0_0*cL2_0*cL2_0 - cd1*cL2_1*cL2_1;
+    const double cid2 = 1.0/cd2;
+    const double cy1_0 = A_0_1 - A_0_0*cL1_0;
+    const double cy2_0 = A_0_2 - A_0_0*cL2_0 - cL2_1*cy1_0;
+    const double cy1_1 = A_1_1 - A_1_0*cL1_0;
+    const double cy2_1 = A_1_2 - A_1_0*cL2_0 - cL2_1*cy1_1;
+    const double cy1_2 = A_2_1 - A_2_0*cL1_0;
+    const double cy2_2 = A_2_2 - A_2_0*cL2_0 - cL2_1*cy1_2;
+    const double cy1_3 = A_3_1 - A_3_0*cL1_0;
+    const double cy2_3 = A_3_2 - A_3_0*cL2_0 - cL2_1*cy1_3;
+    const double cy1_4 = A_4_1 - A_4_0*cL1_0;
+    const double cy2_4 = A_4_2 - A_4_0*cL2_0 - cL2_1*cy1_4;
+    const double cy1_5 = A_5_1 - A_5_0*cL1_0;
+    const double cy2_5 = A_5_2 - A_5_0*cL2_0 - cL2_1*cy1_5;
+    const double cy1_6 = A_6_1 - A_6_0*cL1_0;
+    const double cy2_6 = A_6_2 - A_6_0*cL2_0 - cL2_1*cy1_6;
+    const double cy1_7 = A_7_1 - A_7_0*cL1_0;
+    const double cy2_7 = A_7_2 - A_7_0*cL2_0 - cL2_1*cy1_7;
+    const double cy1_8 = A_8_1 - A_8_0*cL1_0;
+    const double cy2_8 = A_8_2 - A_8_0*cL2_0 - cL2_1*cy1_8;
+    const double cy1_9 = A_9_1 - A_9_0*cL1_0;
+    const double cy2_9 = A_9_2 - A_9_0*cL2_0 - cL2_1*cy1_9;
+    const double cy1_10 = A_10_1 - A_10_0*cL1_0;
+    const double cy2_10 = A_10_2 - A_10_0*cL2_0 - cL2_1*cy1_10;
+    const double cy1_11 = A_11_1 - A_11_0*cL1_0;
+    const double cy2_11 = A_11_2 - A_11_0*cL2_0 - cL2_1*cy1_11;
+    const double cy1_12 = A_12_1 - A_12_0*cL1_0;
+    const double cy2_12 = A_12_2 - A_12_0*cL2_0 - cL2_1*cy1_12;
+    const double cy1_13 = A_13_1 - A_13_0*cL1_0;
+    const double cy2_13 = A_13_2 - A_13_0*cL2_0 - cL2_1*cy1_13;
+    const double cy1_14 = A_14_1 - A_14_0*cL1_0;
+    const double cy2_14 = A_14_2 - A_14_0*cL2_0 - cL2_1*cy1_14;
+    const double cy1_15 = A_15_1 - A_15_0*cL1_0;
+    const double cy2_15 = A_15_2 - A_15_0*cL2_0 - cL2_1*cy1_15;
     const double cz0_0 = A_0_0*cid0;
+    const double cz1_0 = cid1*cy1_0;
+    const double cz2_0 = cid2*cy2_0;
     const double cz0_1 = A_1_0*cid0;
+    const double cz1_1 = cid1*cy1_1;
+    const double cz2_1 = cid2*cy2_1;
     const double cz0_2 = A_2_0*cid0;
+    const double cz1_2 = cid1*cy1_2;
+    const double cz2_2 = cid2*cy2_2;
     const double cz0_3 = A_3_0*cid0;
+    const double cz1_3 = cid1*cy1_3;
+    const double cz2_3 = cid2*cy2_3;
     const double cz0_4 = A_4_0*cid0;
+    const double cz1_4 = cid1*cy1_4;
+    const double cz2_4 = cid2*cy2_4;
     const double cz0_5 = A_5_0*cid0;
+    const double cz1_5 = cid1*cy1_5;
+    const double cz2_5 = cid2*cy2_5;
     const double cz0_6 = A_6_0*cid0;
+    const double cz1_6 = cid1*cy1_6;
+    const double cz2_6 = cid2*cy2_6;
     const double cz0_7 = A_7_0*cid0;
+    const double cz1_7 = cid1*cy1_7;
+    const double cz2_7 = cid2*cy2_7;
     const double cz0_8 = A_8_0*cid0;
+    const double cz1_8 = cid1*cy1_8;
+    const double cz2_8 = cid2*cy2_8;
     const double cz0_9 = A_9_0*cid0;
+    const double cz1_9 = cid1*cy1_9;
+    const double cz2_9 = cid2*cy2_9;
     const double cz0_10 = A_10_0*cid0;
+    const double cz1_10 = cid1*cy1_10;
+    const double cz2_10 = cid2*cy2_10;
     const double cz0_11 = A_11_0*cid0;
+    const double cz1_11 = cid1*cy1_11;
+    const double cz2_11 = cid2*cy2_11;
     const double cz0_12 = A_12_0*cid0;
+    const double cz1_12 = cid1*cy1_12;
+    const double cz2_12 = cid2*cy2_12;
     const double cz0_13 = A_13_0*cid0;
+    const double cz1_13 = cid1*cy1_13;
+    const double cz2_13 = cid2*cy2_13;
     const double cz0_14 = A_14_0*cid0;
+    const double cz1_14 = cid1*cy1_14;
+    const double cz2_14 = cid2*cy2_14;
     const double cz0_15 = A_15_0*cid0;
-    K[0 * sk] = K_0_0 - A_0_0*cz0_0;
-    K[1 * sk] = K_0_1 - A_1_0*cz0_0;
-    K[2 * sk] = K_0_2 - A_2_0*cz0_0;
-    K[3 * sk] = K_0_3 - A_3_0*cz0_0;
-    K[4 * sk] = K_0_4 - A_4_0*cz0_0;
-    K[5 * sk] = K_0_5 - A_5_0*cz0_0;
-    K[6 * sk] = K_0_6 - A_6_0*cz0_0;
-    K[7 * sk] = K_0_7 - A_7_0*cz0_0;
-    K[8 * sk] = K_0_8 - A_8_0*cz0_0;
-    K[9 * sk] = K_0_9 - A_9_0*cz0_0;
-    K[10 * sk] = K_0_10 - A_10_0*cz0_0;
-    K[11 * sk] = K_0_11 - A_11_0*cz0_0;
-    K[12 * sk] = K_0_12 - A_12_0*cz0_0;
-    K[13 * sk] = K_0_13 - A_13_0*cz0_0;
-    K[14 * sk] = K_0_14 - A_14_0*cz0_0;
-    K[15 * sk] = K_0_15 - A_15_0*cz0_0;
-    K[16 * sk] = K_0_1 - A_1_0*cz0_0;
-    K[17 * sk] = K_1_1 - A_1_0*cz0_1;
-    K[18 * sk] = K_1_2 - A_2_0*cz0_1;
-    K[19 * sk] = K_1_3 - A_3_0*cz0_1;
-    K[20 * sk] = K_1_4 - A_4_0*cz0_1;
-    K[21 * sk] = K_1_5 - A_5_0*cz0_1;
-    K[22 * sk] = K_1_6 - A_6_0*cz0_1;
-    K[23 * sk] = K_1_7 - A_7_0*cz0_1;
-    K[24 * sk] = K_1_8 - A_8_0*cz0_1;
-    K[25 * sk] = K_1_9 - A_9_0*cz0_1;
-    K[26 * sk] = K_1_10 - A_10_0*cz0_1;
-    K[27 * sk] = K_1_11 - A_11_0*cz0_1;
-    K[28 * sk] = K_1_12 - A_12_0*cz0_1;
-    K[29 * sk] = K_1_13 - A_13_0*cz0_1;
-    K[30 * sk] = K_1_14 - A_14_0*cz0_1;
-    K[31 * sk] = K_1_15 - A_15_0*cz0_1;
-    K[32 * sk] = K_0_2 - A_2_0*cz0_0;
-    K[33 * sk] = K_1_2 - A_2_0*cz0_1;
-    K[34 * sk] = K_2_2 - A_2_0*cz0_2;
-    K[35 * sk] = K_2_3 - A_3_0*cz0_2;
-    K[36 * sk] = K_2_4 - A_4_0*cz0_2;
-    K[37 * sk] = K_2_5 - A_5_0*cz0_2;
-    K[38 * sk] = K_2_6 - A_6_0*cz0_2;
-    K[39 * sk] = K_2_7 - A_7_0*cz0_2;
-    K[40 * sk] = K_2_8 - A_8_0*cz0_2;
-    K[41 * sk] = K_2_9 - A_9_0*cz0_2;
-    K[42 * sk] = K_2_10 - A_10_0*cz0_2;
-    K[43 * sk] = K_2_11 - A_11_0*cz0_2;
-    K[44 * sk] = K_2_12 - A_12_0*cz0_2;
-    K[45 * sk] = K_2_13 - A_13_0*cz0_2;
-    K[46 * sk] = K_2_14 - A_14_0*cz0_2;
-    K[47 * sk] = K_2_15 - A_15_0*cz0_2;
-    K[48 * sk] = K_0_3 - A_3_0*cz0_0;
-    K[49 * sk] = K_1_3 - A_3_0*cz0_1;
-    K[50 * sk] = K_2_3 - A_3_0*cz0_2;
-    K[51 * sk] = K_3_3 - A_3_0*cz0_3;
-    K[52 * sk] = K_3_4 - A_4_0*cz0_3;
-    K[53 * sk] = K_3_5 - A_5_0*cz0_3;
-    K[54 * sk] = K_3_6 - A_6_0*cz0_3;
-    K[55 * sk] = K_3_7 - A_7_0*cz0_3;
-    K[56 * sk] = K_3_8 - A_8_0*cz0_3;
-    K[57 * sk] = K_3_9 - A_9_0*cz0_3;
-    K[58 * sk] = K_3_10 - A_10_0*cz0_3;
-    K[59 * sk] = K_3_11 - A_11_0*cz0_3;
-    K[60 * sk] = K_3_12 - A_12_0*cz0_3;
-    K[61 * sk] = K_3_13 - A_13_0*cz0_3;
-    K[62 * sk] = K_3_14 - A_14_0*cz0_3;
-    K[63 * sk] = K_3_15 - A_15_0*cz0_3;
-    K[64 * sk] = K_0_4 - A_4_0*cz0_0;
-    K[65 * sk] = K_1_4 - A_4_0*cz0_1;
-    K[66 * sk] = K_2_4 - A_4_0*cz0_2;
-    K[67 * sk] = K_3_4 - A_4_0*cz0_3;
-    K[68 * sk] = K_4_4 - A_4_0*cz0_4;
-    K[69 * sk] = K_4_5 - A_5_0*cz0_4;
-    K[70 * sk] = K_4_6 - A_6_0*cz0_4;
-    K[71 * sk] = K_4_7 - A_7_0*cz0_4;
-    K[72 * sk] = K_4_8 - A_8_0*cz0_4;
-    K[73 * sk] = K_4_9 - A_9_0*cz0_4;
-    K[74 * sk] = K_4_10 - A_10_0*cz0_4;
-    K[75 * sk] = K_4_11 - A_11_0*cz0_4;
-    K[76 * sk] = K_4_12 - A_12_0*cz0_4;
-    K[77 * sk] = K_4_13 - A_13_0*cz0_4;
-    K[78 * sk] = K_4_14 - A_14_0*cz0_4;
-    K[79 * sk] = K_4_15 - A_15_0*cz0_4;
-    K[80 * sk] = K_0_5 - A_5_0*cz0_0;
-    K[81 * sk] = K_1_5 - A_5_0*cz0_1;
-    K[82 * sk] = K_2_5 - A_5_0*cz0_2;
-    K[83 * sk] = K_3_5 - A_5_0*cz0_3;
-    K[84 * sk] = K_4_5 - A_5_0*cz0_4;
-    K[85 * sk] = K_5_5 - A_5_0*cz0_5;
-    K[86 * sk] = K_5_6 - A_6_0*cz0_5;
-    K[87 * sk] = K_5_7 - A_7_0*cz0_5;
-    K[88 * sk] = K_5_8 - A_8_0*cz0_5;
-    K[89 * sk] = K_5_9 - A_9_0*cz0_5;
-    K[90 * sk] = K_5_10 - A_10_0*cz0_5;
-    K[91 * sk] = K_5_11 - A_11_0*cz0_5;
-    K[92 * sk] = K_5_12 - A_12_0*cz0_5;
-    K[93 * sk] = K_5_13 - A_13_0*cz0_5;
-    K[94 * sk] = K_5_14 - A_14_0*cz0_5;
-    K[95 * sk] = K_5_15 - A_15_0*cz0_5;
-    K[96 * sk] = K_0_6 - A_6_0*cz0_0;
-    K[97 * sk] = K_1_6 - A_6_0*cz0_1;
-    K[98 * sk] = K_2_6 - A_6_0*cz0_2;
-    K[99 * sk] = K_3_6 - A_6_0*cz0_3;
-    K[100 * sk] = K_4_6 - A_6_0*cz0_4;
-    K[101 * sk] = K_5_6 - A_6_0*cz0_5;
-    K[102 * sk] = K_6_6 - A_6_0*cz0_6;
-    K[103 * sk] = K_6_7 - A_7_0*cz0_6;
-    K[104 * sk] = K_6_8 - A_8_0*cz0_6;
-    K[105 * sk] = K_6_9 - A_9_0*cz0_6;
-    K[106 * sk] = K_6_10 - A_10_0*cz0_6;
-    K[107 * sk] = K_6_11 - A_11_0*cz0_6;
-    K[108 * sk] = K_6_12 - A_12_0*cz0_6;
-    K[109 * sk] = K_6_13 - A_13_0*cz0_6;
-    K[110 * sk] = K_6_14 - A_14_0*cz0_6;
-    K[111 * sk] = K_6_15 - A_15_0*cz0_6;
-    K[112 * sk] = K_0_7 - A_7_0*cz0_0;
-    K[113 * sk] = K_1_7 - A_7_0*cz0_1;
-    K[114 * sk] = K_2_7 - A_7_0*cz0_2;
-    K[115 * sk] = K_3_7 - A_7_0*cz0_3;
-    K[116 * sk] = K_4_7 - A_7_0*cz0_4;
-    K[117 * sk] = K_5_7 - A_7_0*cz0_5;
-    K[118 * sk] = K_6_7 - A_7_0*cz0_6;
-    K[119 * sk] = K_7_7 - A_7_0*cz0_7;
-    K[120 * sk] = K_7_8 - A_8_0*cz0_7;
-    K[121 * sk] = K_7_9 - A_9_0*cz0_7;
-    K[122 * sk] = K_7_10 - A_10_0*cz0_7;
-    K[123 * sk] = K_7_11 - A_11_0*cz0_7;
-    K[124 * sk] = K_7_12 - A_12_0*cz0_7;
-    K[125 * sk] = K_7_13 - A_13_0*cz0_7;
-    K[126 * sk] = K_7_14 - A_14_0*cz0_7;
-    K[127 * sk] = K_7_15 - A_15_0*cz0_7;
-    K[128 * sk] = K_0_8 - A_8_0*cz0_0;
-    K[129 * sk] = K_1_8 - A_8_0*cz0_1;
-    K[130 * sk] = K_2_8 - A_8_0*cz0_2;
-    K[131 * sk] = K_3_8 - A_8_0*cz0_3;
-    K[132 * sk] = K_4_8 - A_8_0*cz0_4;
-    K[133 * sk] = K_5_8 - A_8_0*cz0_5;
-    K[134 * sk] = K_6_8 - A_8_0*cz0_6;
-    K[135 * sk] = K_7_8 - A_8_0*cz0_7;
-    K[136 * sk] = K_8_8 - A_8_0*cz0_8;
-    K[137 * sk] = K_8_9 - A_9_0*cz0_8;
-    K[138 * sk] = K_8_10 - A_10_0*cz0_8;
-    K[139 * sk] = K_8_11 - A_11_0*cz0_8;
-    K[140 * sk] = K_8_12 - A_12_0*cz0_8;
-    K[141 * sk] = K_8_13 - A_13_0*cz0_8;
-    K[142 * sk] = K_8_14 - A_14_0*cz0_8;
-    K[143 * sk] = K_8_15 - A_15_0*cz0_8;
-    K[144 * sk] = K_0_9 - A_9_0*cz0_0;
-    K[145 * sk] = K_1_9 - A_9_0*cz0_1;
-    K[146 * sk] = K_2_9 - A_9_0*cz0_2;
-    K[147 * sk] = K_3_9 - A_9_0*cz0_3;
-    K[148 * sk] = K_4_9 - A_9_0*cz0_4;
-    K[149 * sk] = K_5_9 - A_9_0*cz0_5;
-    K[150 * sk] = K_6_9 - A_9_0*cz0_6;
-    K[151 * sk] = K_7_9 - A_9_0*cz0_7;
-    K[152 * sk] = K_8_9 - A_9_0*cz0_8;
-    K[153 * sk] = K_9_9 - A_9_0*cz0_9;
-    K[154 * sk] = K_9_10 - A_10_0*cz0_9;
-    K[155 * sk] = K_9_11 - A_11_0*cz0_9;
-    K[156 * sk] = K_9_12 - A_12_0*cz0_9;
-    K[157 * sk] = K_9_13 - A_13_0*cz0_9;
-    K[158 * sk] = K_9_14 - A_14_0*cz0_9;
-    K[159 * sk] = K_9_15 - A_15_0*cz0_9;
-    K[160 * sk] = K_0_10 - A_10_0*cz0_0;
-    K[161 * sk] = K_1_10 - A_10_0*cz0_1;
-    K[162 * sk] = K_2_10 - A_10_0*cz0_2;
-    K[163 * sk] = K_3_10 - A_10_0*cz0_3;
-    K[164 * sk] = K_4_10 - A_10_0*cz0_4;
-    K[165 * sk] = K_5_10 - A_10_0*cz0_5;
-    K[166 * sk] = K_6_10 - A_10_0*cz0_6;
-    K[167 * sk] = K_7_10 - A_10_0*cz0_7;
-    K[168 * sk] = K_8_10 - A_10_0*cz0_8;
-    K[169 * sk] = K_9_10 - A_10_0*cz0_9;
-    K[170 * sk] = K_10_10 - A_10_0*cz0_10;
-    K[171 * sk] = K_10_11 - A_11_0*cz0_10;
-    K[172 * sk] = K_10_12 - A_12_0*cz0_10;
-    K[173 * sk] = K_10_13 - A_13_0*cz0_10;
-    K[174 * sk] = K_10_14 - A_14_0*cz0_10;
-    K[175 * sk] = K_10_15 - A_15_0*cz0_10;
-    K[176 * sk] = K_0_11 - A_11_0*cz0_0;
-    K[177 * sk] = K_1_11 - A_11_0*cz0_1;
-    K[178 * sk] = K_2_11 - A_11_0*cz0_2;
-    K[179 * sk] = K_3_11 - A_11_0*cz0_3;
-    K[180 * sk] = K_4_11 - A_11_0*cz0_4;
-    K[181 * sk] = K_5_11 - A_11_0*cz0_5;
-    K[182 * sk] = K_6_11 - A_11_0*cz0_6;
-    K[183 * sk] = K_7_11 - A_11_0*cz0_7;
-    K[184 * sk] = K_8_11 - A_11_0*cz0_8;
-    K[185 * sk] = K_9_11 - A_11_0*cz0_9;
-    K[186 * sk] = K_10_11 - A_11_0*cz0_10;
-    K[187 * sk] = K_11_11 - A_11_0*cz0_11;
-    K[188 * sk] = K_11_12 - A_12_0*cz0_11;
-    K[189 * sk] = K_11_13 - A_13_0*cz0_11;
-    K[190 * sk] = K_11_14 - A_14_0*cz0_11;
-    K[191 * sk] = K_11_15 - A_15_0*cz0_11;
-    K[192 * sk] = K_0_12 - A_12_0*cz0_0;
-    K[193 * sk] = K_1_12 - A_12_0*cz0_1;
-    K[194 * sk] = K_2_12 - A_12_0*cz0_2;
-    K[195 * sk] = K_3_12 - A_12_0*cz0_3;
-    K[196 * sk] = K_4_12 - A_12_0*cz0_4;
-    K[197 * sk] = K_5_12 - A_12_0*cz0_5;
-    K[198 * sk] = K_6_12 - A_12_0*cz0_6;
-    K[199 * sk] = K_7_12 - A_12_0*cz0_7;
-    K[200 * sk] = K_8_12 - A_12_0*cz0_8;
-    K[201 * sk] = K_9_12 - A_12_0*cz0_9;
-    K[202 * sk] = K_10_12 - A_12_0*cz0_10;
-    K[203 * sk] = K_11_12 - A_12_0*cz0_11;
-    K[204 * sk] = K_12_12 - A_12_0*cz0_12;
-    K[205 * sk] = K_12_13 - A_13_0*cz0_12;
-    K[206 * sk] = K_12_14 - A_14_0*cz0_12;
-    K[207 * sk] = K_12_15 - A_15_0*cz0_12;
-    K[208 * sk] = K_0_13 - A_13_0*cz0_0;
-    K[209 * sk] = K_1_13 - A_13_0*cz0_1;
-    K[210 * sk] = K_2_13 - A_13_0*cz0_2;
-    K[211 * sk] = K_3_13 - A_13_0*cz0_3;
-    K[212 * sk] = K_4_13 - A_13_0*cz0_4;
-    K[213 * sk] = K_5_13 - A_13_0*cz0_5;
-    K[214 * sk] = K_6_13 - A_13_0*cz0_6;
-    K[215 * sk] = K_7_13 - A_13_0*cz0_7;
-    K[216 * sk] = K_8_13 - A_13_0*cz0_8;
-    K[217 * sk] = K_9_13 - A_13_0*cz0_9;
-    K[218 * sk] = K_10_13 - A_13_0*cz0_10;
-    K[219 * sk] = K_11_13 - A_13_0*cz0_11;
-    K[220 * sk] = K_12_13 - A_13_0*cz0_12;
-    K[221 * sk] = K_13_13 - A_13_0*cz0_13;
-    K[222 * sk] = K_13_14 - A_14_0*cz0_13;
-    K[223 * sk] = K_13_15 - A_15_0*cz0_13;
-    K[224 * sk] = K_0_14 - A_14_0*cz0_0;
-    K[225 * sk] = K_1_14 - A_14_0*cz0_1;
-    K[226 * sk] = K_2_14 - A_14_0*cz0_2;
-    K[227 * sk] = K_3_14 - A_14_0*cz0_3;
-    K[228 * sk] = K_4_14 - A_14_0*cz0_4;
-    K[229 * sk] = K_5_14 - A_14_0*cz0_5;
-    K[230 * sk] = K_6_14 - A_14_0*cz0_6;
-    K[231 * sk] = K_7_14 - A_14_0*cz0_7;
-    K[232 * sk] = K_8_14 - A_14_0*cz0_8;
-    K[233 * sk] = K_9_14 - A_14_0*cz0_9;
-    K[234 * sk] = K_10_14 - A_14_0*cz0_10;
-    K[235 * sk] = K_11_14 - A_14_0*cz0_11;
-    K[236 * sk] = K_12_14 - A_14_0*cz0_12;
-    K[237 * sk] = K_13_14 - A_14_0*cz0_13;
-    K[238 * sk] = K_14_14 - A_14_0*cz0_14;
-    K[239 * sk] = K_14_15 - A_15_0*cz0_14;
-    K[240 * sk] = K_0_15 - A_15_0*cz0_0;
-    K[241 * sk] = K_1_15 - A_15_0*cz0_1;
-    K[242 * sk] = K_2_15 - A_15_0*cz0_2;
-    K[243 * sk] = K_3_15 - A_15_0*cz0_3;
-    K[244 * sk] = K_4_15 - A_15_0*cz0_4;
-    K[245 * sk] = K_5_15 - A_15_0*cz0_5;
-    K[246 * sk] = K_6_15 - A_15_0*cz0_6;
-    K[247 * sk] = K_7_15 - A_15_0*cz0_7;
-    K[248 * sk] = K_8_15 - A_15_0*cz0_8;
-    K[249 * sk] = K_9_15 - A_15_0*cz0_9;
-    K[250 * sk] = K_10_15 - A_15_0*cz0_10;
-    K[251 * sk] = K_11_15 - A_15_0*cz0_11;
-    K[252 * sk] = K_12_15 - A_15_0*cz0_12;
-    K[253 * sk] = K_13_15 - A_15_0*cz0_13;
-    K[254 * sk] = K_14_15 - A_15_0*cz0_14;
-    K[255 * sk] = K_15_15 - A_15_0*cz0_15;
+    const double cz1_15 = cid1*cy1_15;
+    const double cz2_15 = cid2*cy2_15;
+    K[0 * sk] = K_0_0 - A_0_0*cz0_0 - cy1_0*cz1_0 - cy2_0*cz2_0;
+    K[1 * sk] = K_0_1 - A_1_0*cz0_0 - cy1_1*cz1_0 - cy2_1*cz2_0;
+    K[2 * sk] = K_0_2 - A_2_0*cz0_0 - cy1_2*cz1_0 - cy2_2*cz2_0;
+    K[3 * sk] = K_0_3 - A_3_0*cz0_0 - cy1_3*cz1_0 - cy2_3*cz2_0;
+    K[4 * sk] = K_0_4 - A_4_0*cz0_0 - cy1_4*cz1_0 - cy2_4*cz2_0;
+    K[5 * sk] = K_0_5 - A_5_0*cz0_0 - cy1_5*cz1_0 - cy2_5*cz2_0;
+    K[6 * sk] = K_0_6 - A_6_0*cz0_0 - cy1_6*cz1_0 - cy2_6*cz2_0;
+    K[7 * sk] = K_0_7 - A_7_0*cz0_0 - cy1_7*cz1_0 - cy2_7*cz2_0;
+    K[8 * sk] = K_0_8 - A_8_0*cz0_0 - cy1_8*cz1_0 - cy2_8*cz2_0;
+    K[9 * sk] = K_0_9 - A_9_0*cz0_0 - cy1_9*cz1_0 - cy2_9*cz2_0;
+    K[10 * sk] = K_0_10 - A_10_0*cz0_0 - cy1_10*cz1_0 - cy2_10*cz2_0;
+    K[11 * sk] = K_0_11 - A_11_0*cz0_0 - cy1_11*cz1_0 - cy2_11*cz2_0;
+    K[12 * sk] = K_0_12 - A_12_0*cz0_0 - cy1_12*cz1_0 - cy2_12*cz2_0;
+    K[13 * sk] = K_0_13 - A_13_0*cz0_0 - cy1_13*cz1_0 - cy2_13*cz2_0;
+    K[14 * sk] = K_0_14 - A_14_0*cz0_0 - cy1_14*cz1_0 - cy2_14*cz2_0;
+    K[15 * sk] = K_0_15 - A_15_0*cz0_0 - cy1_15*cz1_0 - cy2_15*cz2_0;
+    K[16 * sk] = K_0_1 - A_1_0*cz0_0 - cy1_1*cz1_0 - cy2_1*cz2_0;
+    K[17 * sk] = K_1_1 - A_1_0*cz0_1 - cy1_1*cz1_1 - cy2_1*cz2_1;
+    K[18 * sk] = K_1_2 - A_2_0*cz0_1 - cy1_2*cz1_1 - cy2_2*cz2_1;
+    K[19 * sk] = K_1_3 - A_3_0*cz0_1 - cy1_3*cz1_1 - cy2_3*cz2_1;
+    K[20 * sk] = K_1_4 - A_4_0*cz0_1 - cy1_4*cz1_1 - cy2_4*cz2_1;
+    K[21 * sk] = K_1_5 - A_5_0*cz0_1 - cy1_5*cz1_1 - cy2_5*cz2_1;
+    K[22 * sk] = K_1_6 - A_6_0*cz0_1 - cy1_6*cz1_1 - cy2_6*cz2_1;
+    K[23 * sk] = K_1_7 - A_7_0*cz0_1 - cy1_7*cz1_1 - cy2_7*cz2_1;
+    K[24 * sk] = K_1_8 - A_8_0*cz0_1 - cy1_8*cz1_1 - cy2_8*cz2_1;
+    K[25 * sk] = K_1_9 - A_9_0*cz0_1 - cy1_9*cz1_1 - cy2_9*cz2_1;
+    K[26 * sk] = K_1_10 - A_10_0*cz0_1 - cy1_10*cz1_1 - cy2_10*cz2_1;
+    K[27 * sk] = K_1_11 - A_11_0*cz0_1 - cy1_11*cz1_1 - cy2_11*cz2_1;
+    K[28 * sk] = K_1_12 - A_12_0*cz0_1 - cy1_12*cz1_1 - cy2_12*cz2_1;
+    K[29 * sk] = K_1_13 - A_13_0*cz0_1 - cy1_13*cz1_1 - cy2_13*cz2_1;
+    K[30 * sk] = K_1_14 - A_14_0*cz0_1 - cy1_14*cz1_1 - cy2_14*cz2_1;
+    K[31 * sk] = K_1_15 - A_15_0*cz0_1 - cy1_15*cz1_1 - cy2_15*cz2_1;
+    K[32 * sk] = K_0_2 - A_2_0*cz0_0 - cy1_2*cz1_0 - cy2_2*cz2_0;
+    K[33 * sk] = K_1_2 - A_2_0*cz0_1 - cy1_2*cz1_1 - cy2_2*cz2_1;
+    K[34 * sk] = K_2_2 - A_2_0*cz0_2 - cy1_2*cz1_2 - cy2_2*cz2_2;
+    K[35 * sk] = K_2_3 - A_3_0*cz0_2 - cy1_3*cz1_2 - cy2_3*cz2_2;
+    K[36 * sk] = K_2_4 - A_4_0*cz0_2 - cy1_4*cz1_2 - cy2_4*cz2_2;
+    K[37 * sk] = K_2_5 - A_5_0*cz0_2 - cy1_5*cz1_2 - cy2_5*cz2_2;
+    K[38 * sk] = K_2_6 - A_6_0*cz0_2 - cy1_6*cz1_2 - cy2_6*cz2_2;
+    K[39 * sk] = K_2_7 - A_7_0*cz0_2 - cy1_7*cz1_2 - cy2_7*cz2_2;
+    K[40 * sk] = K_2_8 - A_8_0*cz0_2 - cy1_8*cz1_2 - cy2_8*cz2_2;
+    K[41 * sk] = K_2_9 - A_9_0*cz0_2 - cy1_9*cz1_2 - cy2_9*cz2_2;
+    K[42 * sk] = K_2_10 - A_10_0*cz0_2 - cy1_10*cz1_2 - cy2_10*cz2_2;
+    K[43 * sk] = K_2_11 - A_11_0*cz0_2 - cy1_11*cz1_2 - cy2_11*cz2_2;
+    K[44 * sk] = K_2_12 - A_12_0*cz0_2 - cy1_12*cz1_2 - cy2_12*cz2_2;
+    K[45 * sk] = K_2_13 - A_13_0*cz0_2 - cy1_13*cz1_2 - cy2_13*cz2_2;
+    K[46 * sk] = K_2_14 - A_14_0*cz0_2 - cy1_14*cz1_2 - cy2_14*cz2_2;
+    K[47 * sk] = K_2_15 - A_15_0*cz0_2 - cy1_15*cz1_2 - cy2_15*cz2_2;
+    K[48 * sk] = K_0_3 - A_3_0*cz0_0 - cy1_3*cz1_0 - cy2_3*cz2_0;
+    K[49 * sk] = K_1_3 - A_3_0*cz0_1 - cy1_3*cz1_1 - cy2_3*cz2_1;
+    K[50 * sk] = K_2_3 - A_3_0*cz0_2 - cy1_3*cz1_2 - cy2_3*cz2_2;
+    K[51 * sk] = K_3_3 - A_3_0*cz0_3 - cy1_3*cz1_3 - cy2_3*cz2_3;
+    K[52 * sk] = K_3_4 - A_4_0*cz0_3 - cy1_4*cz1_3 - cy2_4*cz2_3;
+    K[53 * sk] = K_3_5 - A_5_0*cz0_3 - cy1_5*cz1_3 - cy2_5*cz2_3;
+    K[54 * sk] = K_3_6 - A_6_0*cz0_3 - cy1_6*cz1_3 - cy2_6*cz2_3;
+    K[55 * sk] = K_3_7 - A_7_0*cz0_3 - cy1_7*cz1_3 - cy2_7*cz2_3;
+    K[56 * sk] = K_3_8 - A_8_0*cz0_3 - cy1_8*cz1_3 - cy2_8*cz2_3;
+    K[57 * sk] = K_3_9 - A_9_0*cz0_3 - cy1_9*cz1_3 - cy2_9*cz2_3;
+    K[58 * sk] = K_3_10 - A_10_0*cz0_3 - cy1_10*cz1_3 - cy2_10*cz2_3;
+    K[59 * sk] = K_3_11 - A_11_0*cz0_3 - cy1_11*cz1_3 - cy2_11*cz2_3;
+    K[60 * sk] = K_3_12 - A_12_0*cz0_3 - cy1_12*cz1_3 - cy2_12*cz2_3;
+    K[61 * sk] = K_3_13 - A_13_0*cz0_3 - cy1_13*cz1_3 - cy2_13*cz2_3;
+    K[62 * sk] = K_3_14 - A_14_0*cz0_3 - cy1_14*cz1_3 - cy2_14*cz2_3;
+    K[63 * sk] = K_3_15 - A_15_0*cz0_3 - cy1_15*cz1_3 - cy2_15*cz2_3;
+    K[64 * sk] = K_0_4 - A_4_0*cz0_0 - cy1_4*cz1_0 - cy2_4*cz2_0;
+    K[65 * sk] = K_1_4 - A_4_0*cz0_1 - cy1_4*cz1_1 - cy2_4*cz2_1;
+    K[66 * sk] = K_2_4 - A_4_0*cz0_2 - cy1_4*cz1_2 - cy2_4*cz2_2;
+    K[67 * sk] = K_3_4 - A_4_0*cz0_3 - cy1_4*cz1_3 - cy2_4*cz2_3;
+    K[68 * sk] = K_4_4 - A_4_0*cz0_4 - cy1_4*cz1_4 - cy2_4*cz2_4;
+    K[69 * sk] = K_4_5 - A_5_0*cz0_4 - cy1_5*cz1_4 - cy2_5*cz2_4;
+    K[70 * sk] = K_4_6 - A_6_0*cz0_4 - cy1_6*cz1_4 - cy2_6*cz2_4;
+    K[71 * sk] = K_4_7 - A_7_0*cz0_4 - cy1_7*cz1_4 - cy2_7*cz2_4;
+    K[72 * sk] = K_4_8 - A_8_0*cz0_4 - cy1_8*cz1_4 - cy2_8*cz2_4;
+    K[73 * sk] = K_4_9 - A_9_0*cz0_4 - cy1_9*cz1_4 - cy2_9*cz2_4;
+    K[74 * sk] = K_4_10 - A_10_0*cz0_4 - cy1_10*cz1_4 - cy2_10*cz2_4;
+    K[75 * sk] = K_4_11 - A_11_0*cz0_4 - cy1_11*cz1_4 - cy2_11*cz2_4;
+    K[76 * sk] = K_4_12 - A_12_0*cz0_4 - cy1_12*cz1_4 - cy2_12*cz2_4;
+    K[77 * sk] = K_4_13 - A_13_0*cz0_4 - cy1_13*cz1_4 - cy2_13*cz2_4;
+    K[78 * sk] = K_4_14 - A_14_0*cz0_4 - cy1_14*cz1_4 - cy2_14*cz2_4;
+    K[79 * sk] = K_4_15 - A_15_0*cz0_4 - cy1_15*cz1_4 - cy2_15*cz2_4;
+    K[80 * sk] = K_0_5 - A_5_0*cz0_0 - cy1_5*cz1_0 - cy2_5*cz2_0;
+    K[81 * sk] = K_1_5 - A_5_0*cz0_1 - cy1_5*cz1_1 - cy2_5*cz2_1;
+    K[82 * sk] = K_2_5 - A_5_0*cz0_2 - cy1_5*cz1_2 - cy2_5*cz2_2;
+    K[83 * sk] = K_3_5 - A_5_0*cz0_3 - cy1_5*cz1_3 - cy2_5*cz2_3;
+    K[84 * sk] = K_4_5 - A_5_0*cz0_4 - cy1_5*cz1_4 - cy2_5*cz2_4;
+    K[85 * sk] = K_5_5 - A_5_0*cz0_5 - cy1_5*cz1_5 - cy2_5*cz2_5;
+    K[86 * sk] = K_5_6 - A_6_0*cz0_5 - cy1_6*cz1_5 - cy2_6*cz2_5;
+    K[87 * sk] = K_5_7 - A_7_0*cz0_5 - cy1_7*cz1_5 - cy2_7*cz2_5;
+    K[88 * sk] = K_5_8 - A_8_0*cz0_5 - cy1_8*cz1_5 - cy2_8*cz2_5;
+    K[89 * sk] = K_5_9 - A_9_0*cz0_5 - cy1_9*cz1_5 - cy2_9*cz2_5;
+    K[90 * sk] = K_5_10 - A_10_0*cz0_5 - cy1_10*cz1_5 - cy2_10*cz2_5;
+    K[91 * sk] = K_5_11 - A_11_0*cz0_5 - cy1_11*cz1_5 - cy2_11*cz2_5;
+    K[92 * sk] = K_5_12 - A_12_0*cz0_5 - cy1_12*cz1_5 - cy2_12*cz2_5;
+    K[93 * sk] = K_5_13 - A_13_0*cz0_5 - cy1_13*cz1_5 - cy2_13*cz2_5;
+    K[94 * sk] = K_5_14 - A_14_0*cz0_5 - cy1_14*cz1_5 - cy2_14*cz2_5;
+    K[95 * sk] = K_5_15 - A_15_0*cz0_5 - cy1_15*cz1_5 - cy2_15*cz2_5;
+    K[96 * sk] = K_0_6 - A_6_0*cz0_0 - cy1_6*cz1_0 - cy2_6*cz2_0;
+    K[97 * sk] = K_1_6 - A_6_0*cz0_1 - cy1_6*cz1_1 - cy2_6*cz2_1;
+    K[98 * sk] = K_2_6 - A_6_0*cz0_2 - cy1_6*cz1_2 - cy2_6*cz2_2;
+    K[99 * sk] = K_3_6 - A_6_0*cz0_3 - cy1_6*cz1_3 - cy2_6*cz2_3;
+    K[100 * sk] = K_4_6 - A_6_0*cz0_4 - cy1_6*cz1_4 - cy2_6*cz2_4;
+    K[101 * sk] = K_5_6 - A_6_0*cz0_5 - cy1_6*cz1_5 - cy2_6*cz2_5;
+    K[102 * sk] = K_6_6 - A_6_0*cz0_6 - cy1_6*cz1_6 - cy2_6*cz2_6;
+    K[103 * sk] = K_6_7 - A_7_0*cz0_6 - cy1_7*cz1_6 - cy2_7*cz2_6;
+    K[104 * sk] = K_6_8 - A_8_0*cz0_6 - cy1_8*cz1_6 - cy2_8*cz2_6;
+    K[105 * sk] = K_6_9 - A_9_0*cz0_6 - cy1_9*cz1_6 - cy2_9*cz2_6;
+    K[106 * sk] = K_6_10 - A_10_0*cz0_6 - cy1_10*cz1_6 - cy2_10*cz2_6;
+    K[107 * sk] = K_6_11 - A_11_0*cz0_6 - cy1_11*cz1_6 - cy2_11*cz2_6;
+    K[108 * sk] = K_6_12 - A_12_0*cz0_6 - cy1_12*cz1_6 - cy2_12*cz2_6;
+    K[109 * sk] = K_6_13 - A_13_0*cz0_6 - cy1_13*cz1_6 - cy2_13*cz2_6;
+    K[110 * sk] = K_6_14 - A_14_0*cz0_6 - cy1_14*cz1_6 - cy2_14*cz2_6;
+    K[111 * sk] = K_6_15 - A_15_0*cz0_6 - cy1_15*cz1_6 - cy2_15*cz2_6;
+    K[112 * sk] = K_0_7 - A_7_0*cz0_0 - cy1_7*cz1_0 - cy2_7*cz2_0;
+    K[113 * sk] = K_1_7 - A_7_0*cz0_1 - cy1_7*cz1_1 - cy2_7*cz2_1;
+    K[114 * sk] = K_2_7 - A_7_0*cz0_2 - cy1_7*cz1_2 - cy2_7*cz2_2;
+    K[115 * sk] = K_3_7 - A_7_0*cz0_3 - cy1_7*cz1_3 - cy2_7*cz2_3;
+    K[116 * sk] = K_4_7 - A_7_0*cz0_4 - cy1_7*cz1_4 - cy2_7*cz2_4;
+    K[117 * sk] = K_5_7 - A_7_0*cz0_5 - cy1_7*cz1_5 - cy2_7*cz2_5;
+    K[118 * sk] = K_6_7 - A_7_0*cz0_6 - cy1_7*cz1_6 - cy2_7*cz2_6;
+    K[119 * sk] = K_7_7 - A_7_0*cz0_7 - cy1_7*cz1_7 - cy2_7*cz2_7;
+    K[120 * sk] = K_7_8 - A_8_0*cz0_7 - cy1_8*cz1_7 - cy2_8*cz2_7;
+    K[121 * sk] = K_7_9 - A_9_0*cz0_7 - cy1_9*cz1_7 - cy2_9*cz2_7;
+    K[122 * sk] = K_7_10 - A_10_0*cz0_7 - cy1_10*cz1_7 - cy2_10*cz2_7;
+    K[123 * sk] = K_7_11 - A_11_0*cz0_7 - cy1_11*cz1_7 - cy2_11*cz2_7;
+    K[124 * sk] = K_7_12 - A_12_0*cz0_7 - cy1_12*cz1_7 - cy2_12*cz2_7;
+    K[125 * sk] = K_7_13 - A_13_0*cz0_7 - cy1_13*cz1_7 - cy2_13*cz2_7;
+    K[126 * sk] = K_7_14 - A_14_0*cz0_7 - cy1_14*cz1_7 - cy2_14*cz2_7;
+    K[127 * sk] = K_7_15 - A_15_0*cz0_7 - cy1_15*cz1_7 - cy2_15*cz2_7;
+    K[128 * sk] = K_0_8 - A_8_0*cz0_0 - cy1_8*cz1_0 - cy2_8*cz2_0;
+    K[129 * sk] = K_1_8 - A_8_0*cz0_1 - cy1_8*cz1_1 - cy2_8*cz2_1;
+    K[130 * sk] = K_2_8 - A_8_0*cz0_2 - cy1_8*cz1_2 - cy2_8*cz2_2;
+    K[131 * sk] = K_3_8 - A_8_0*cz0_3 - cy1_8*cz1_3 - cy2_8*cz2_3;
+    K[132 * sk] = K_4_8 - A_8_0*cz0_4 - cy1_8*cz1_4 - cy2_8*cz2_4;
+    K[133 * sk] = K_5_8 - A_8_0*cz0_5 - cy1_8*cz1_5 - cy2_8*cz2_5;
+    K[134 * sk] = K_6_8 - A_8_0*cz0_6 - cy1_8*cz1_6 - cy2_8*cz2_6;
+    K[135 * sk] = K_7_8 - A_8_0*cz0_7 - cy1_8*cz1_7 - cy2_8*cz2_7;
+    K[136 * sk] = K_8_8 - A_8_0*cz0_8 - cy1_8*cz1_8 - cy2_8*cz2_8;
+    K[137 * sk] = K_8_9 - A_9_0*cz0_8 - cy1_9*cz1_8 - cy2_9*cz2_8;
+    K[138 * sk] = K_8_10 - A_10_0*cz0_8 - cy1_10*cz1_8 - cy2_10*cz2_8;
+    K[139 * sk] = K_8_11 - A_11_0*cz0_8 - cy1_11*cz1_8 - cy2_11*cz2_8;
+    K[140 * sk] = K_8_12 - A_12_0*cz0_8 - cy1_12*cz1_8 - cy2_12*cz2_8;
+    K[141 * sk] = K_8_13 - A_13_0*cz0_8 - cy1_13*cz1_8 - cy2_13*cz2_8;
+    K[142 * sk] = K_8_14 - A_14_0*cz0_8 - cy1_14*cz1_8 - cy2_14*cz2_8;
+    K[143 * sk] = K_8_15 - A_15_0*cz0_8 - cy1_15*cz1_8 - cy2_15*cz2_8;
+    K[144 * sk] = K_0_9 - A_9_0*cz0_0 - cy1_9*cz1_0 - cy2_9*cz2_0;
+    K[145 * sk] = K_1_9 - A_9_0*cz0_1 - cy1_9*cz1_1 - cy2_9*cz2_1;
+    K[146 * sk] = K_2_9 - A_9_0*cz0_2 - cy1_9*cz1_2 - cy2_9*cz2_2;
+    K[147 * sk] = K_3_9 - A_9_0*cz0_3 - cy1_9*cz1_3 - cy2_9*cz2_3;
+    K[148 * sk] = K_4_9 - A_9_0*cz0_4 - cy1_9*cz1_4 - cy2_9*cz2_4;
+    K[149 * sk] = K_5_9 - A_9_0*cz0_5 - cy1_9*cz1_5 - cy2_9*cz2_5;
+    K[150 * sk] = K_6_9 - A_9_0*cz0_6 - cy1_9*cz1_6 - cy2_9*cz2_6;
+    K[151 * sk] = K_7_9 - A_9_0*cz0_7 - cy1_9*cz1_7 - cy2_9*cz2_7;
+    K[152 * sk] = K_8_9 - A_9_0*cz0_8 - cy1_9*cz1_8 - cy2_9*cz2_8;
+    K[153 * sk] = K_9_9 - A_9_0*cz0_9 - cy1_9*cz1_9 - cy2_9*cz2_9;
+    K[154 * sk] = K_9_10 - A_10_0*cz0_9 - cy1_10*cz1_9 - cy2_10*cz2_9;
+    K[155 * sk] = K_9_11 - A_11_0*cz0_9 - cy1_11*cz1_9 - cy2_11*cz2_9;
+    K[156 * sk] = K_9_12 - A_12_0*cz0_9 - cy1_12*cz1_9 - cy2_12*cz2_9;
+    K[157 * sk] = K_9_13 - A_13_0*cz0_9 - cy1_13*cz1_9 - cy2_13*cz2_9;
+    K[158 * sk] = K_9_14 - A_14_0*cz0_9 - cy1_14*cz1_9 - cy2_14*cz2_9;
+    K[159 * sk] = K_9_15 - A_15_0*cz0_9 - cy1_15*cz1_9 - cy2_15*cz2_9;
+    K[160 * sk] = K_0_10 - A_10_0*cz0_0 - cy1_10*cz1_0 - cy2_10*cz2_0;
+    K[161 * sk] = K_1_10 - A_10_0*cz0_1 - cy1_10*cz1_1 - cy2_10*cz2_1;
+    K[162 * sk] = K_2_10 - A_10_0*cz0_2 - cy1_10*cz1_2 - cy2_10*cz2_2;
+    K[163 * sk] = K_3_10 - A_10_0*cz0_3 - cy1_10*cz1_3 - cy2_10*cz2_3;
+    K[164 * sk] = K_4_10 - A_10_0*cz0_4 - cy1_10*cz1_4 - cy2_10*cz2_4;
+    K[165 * sk] = K_5_10 - A_10_0*cz0_5 - cy1_10*cz1_5 - cy2_10*cz2_5;
+    K[166 * sk] = K_6_10 - A_10_0*cz0_6 - cy1_10*cz1_6 - cy2_10*cz2_6;
+    K[167 * sk] = K_7_10 - A_10_0*cz0_7 - cy1_10*cz1_7 - cy2_10*cz2_7;
+    K[168 * sk] = K_8_10 - A_10_0*cz0_8 - cy1_10*cz1_8 - cy2_10*cz2_8;
+    K[169 * sk] = K_9_10 - A_10_0*cz0_9 - cy1_10*cz1_9 - cy2_10*cz2_9;
+    K[170 * sk] = K_10_10 - A_10_0*cz0_10 - cy1_10*cz1_10 - cy2_10*cz2_10;
+    K[171 * sk] = K_10_11 - A_11_0*cz0_10 - cy1_11*cz1_10 - cy2_11*cz2_10;
+    K[172 * sk] = K_10_12 - A_12_0*cz0_10 - cy1_12*cz1_10 - cy2_12*cz2_10;
+    K[173 * sk] = K_10_13 - A_13_0*cz0_10 - cy1_13*cz1_10 - cy2_13*cz2_10;
+    K[174 * sk] = K_10_14 - A_14_0*cz0_10 - cy1_14*cz1_10 - cy2_14*cz2_10;
+    K[175 * sk] = K_10_15 - A_15_0*cz0_10 - cy1_15*cz1_10 - cy2_15*cz2_10;
+    K[176 * sk] = K_0_11 - A_11_0*cz0_0 - cy1_11*cz1_0 - cy2_11*cz2_0;
+    K[177 * sk] = K_1_11 - A_11_0*cz0_1 - cy1_11*cz1_1 - cy2_11*cz2_1;
+    K[178 * sk] = K_2_11 - A_11_0*cz0_2 - cy1_11*cz1_2 - cy2_11*cz2_2;
+    K[179 * sk] = K_3_11 - A_11_0*cz0_3 - cy1_11*cz1_3 - cy2_11*cz2_3;
+    K[180 * sk] = K_4_11 - A_11_0*cz0_4 - cy1_11*cz1_4 - cy2_11*cz2_4;
+    K[181 * sk] = K_5_11 - A_11_0*cz0_5 - cy1_11*cz1_5 - cy2_11*cz2_5;
+    K[182 * sk] = K_6_11 - A_11_0*cz0_6 - cy1_11*cz1_6 - cy2_11*cz2_6;
+    K[183 * sk] = K_7_11 - A_11_0*cz0_7 - cy1_11*cz1_7 - cy2_11*cz2_7;
+    K[184 * sk] = K_8_11 - A_11_0*cz0_8 - cy1_11*cz1_8 - cy2_11*cz2_8;
+    K[185 * sk] = K_9_11 - A_11_0*cz0_9 - cy1_11*cz1_9 - cy2_11*cz2_9;
+    K[186 * sk] = K_10_11 - A_11_0*cz0_10 - cy1_11*cz1_10 - cy2_11*cz2_10;
+    K[187 * sk] = K_11_11 - A_11_0*cz0_11 - cy1_11*cz1_11 - cy2_11*cz2_11;
+    K[188 * sk] = K_11_12 - A_12_0*cz0_11 - cy1_12*cz1_11 - cy2_12*cz2_11;
+    K[189 * sk] = K_11_13 - A_13_0*cz0_11 - cy1_13*cz1_11 - cy2_13*cz2_11;
+    K[190 * sk] = K_11_14 - A_14_0*cz0_11 - cy1_14*cz1_11 - cy2_14*cz2_11;
+    K[191 * sk] = K_11_15 - A_15_0*cz0_11 - cy1_15*cz1_11 - cy2_15*cz2_11;
+    K[192 * sk] = K_0_12 - A_12_0*cz0_0 - cy1_12*cz1_0 - cy2_12*cz2_0;
+    K[193 * sk] = K_1_12 - A_12_0*cz0_1 - cy1_12*cz1_1 - cy2_12*cz2_1;
+    K[194 * sk] = K_2_12 - A_12_0*cz0_2 - cy1_12*cz1_2 - cy2_12*cz2_2;
+    K[195 * sk] = K_3_12 - A_12_0*cz0_3 - cy1_12*cz1_3 - cy2_12*cz2_3;
+    K[196 * sk] = K_4_12 - A_12_0*cz0_4 - cy1_12*cz1_4 - cy2_12*cz2_4;
+    K[197 * sk] = K_5_12 - A_12_0*cz0_5 - cy1_12*cz1_5 - cy2_12*cz2_5;
+    K[198 * sk] = K_6_12 - A_12_0*cz0_6 - cy1_12*cz1_6 - cy2_12*cz2_6;
+    K[199 * sk] = K_7_12 - A_12_0*cz0_7 - cy1_12*cz1_7 - cy2_12*cz2_7;
+    K[200 * sk] = K_8_12 - A_12_0*cz0_8 - cy1_12*cz1_8 - cy2_12*cz2_8;
+    K[201 * sk] = K_9_12 - A_12_0*cz0_9 - cy1_12*cz1_9 - cy2_12*cz2_9;
+    K[202 * sk] = K_10_12 - A_12_0*cz0_10 - cy1_12*cz1_10 - cy2_12*cz2_10;
+    K[203 * sk] = K_11_12 - A_12_0*cz0_11 - cy1_12*cz1_11 - cy2_12*cz2_11;
+    K[204 * sk] = K_12_12 - A_12_0*cz0_12 - cy1_12*cz1_12 - cy2_12*cz2_12;
+    K[205 * sk] = K_12_13 - A_13_0*cz0_12 - cy1_13*cz1_12 - cy2_13*cz2_12;
+    K[206 * sk] = K_12_14 - A_14_0*cz0_12 - cy1_14*cz1_12 - cy2_14*cz2_12;
+    K[207 * sk] = K_12_15 - A_15_0*cz0_12 - cy1_15*cz1_12 - cy2_15*cz2_12;
+    K[208 * sk] = K_0_13 - A_13_0*cz0_0 - cy1_13*cz1_0 - cy2_13*cz2_0;
+    K[209 * sk] = K_1_13 - A_13_0*cz0_1 - cy1_13*cz1_1 - cy2_13*cz2_1;
+    K[210 * sk] = K_2_13 - A_13_0*cz0_2 - cy1_13*cz1_2 - cy2_13*cz2_2;
+    K[211 * sk] = K_3_13 - A_13_0*cz0_3 - cy1_13*cz1_3 - cy2_13*cz2_3;
+    K[212 * sk] = K_4_13 - A_13_0*cz0_4 - cy1_13*cz1_4 - cy2_13*cz2_4;
+    K[213 * sk] = K_5_13 - A_13_0*cz0_5 - cy1_13*cz1_5 - cy2_13*cz2_5;
+    K[214 * sk] = K_6_13 - A_13_0*cz0_6 - cy1_13*cz1_6 - cy2_13*cz2_6;
+    K[215 * sk] = K_7_13 - A_13_0*cz0_7 - cy1_13*cz1_7 - cy2_13*cz2_7;
+    K[216 * sk] = K_8_13 - A_13_0*cz0_8 - cy1_13*cz1_8 - cy2_13*cz2_8;
+    K[217 * sk] = K_9_13 - A_13_0*cz0_9 - cy1_13*cz1_9 - cy2_13*cz2_9;
+    K[218 * sk] = K_10_13 - A_13_0*cz0_10 - cy1_13*cz1_10 - cy2_13*cz2_10;
+    K[219 * sk] = K_11_13 - A_13_0*cz0_11 - cy1_13*cz1_11 - cy2_13*cz2_11;
+    K[220 * sk] = K_12_13 - A_13_0*cz0_12 - cy1_13*cz1_12 - cy2_13*cz2_12;
+    K[221 * sk] = K_13_13 - A_13_0*cz0_13 - cy1_13*cz1_13 - cy2_13*cz2_13;
+    K[222 * sk] = K_13_14 - A_14_0*cz0_13 - cy1_14*cz1_13 - cy2_14*cz2_13;
+    K[223 * sk] = K_13_15 - A_15_0*cz0_13 - cy1_15*cz1_13 - cy2_15*cz2_13;
+    K[224 * sk] = K_0_14 - A_14_0*cz0_0 - cy1_14*cz1_0 - cy2_14*cz2_0;
+    K[225 * sk] = K_1_14 - A_14_0*cz0_1 - cy1_14*cz1_1 - cy2_14*cz2_1;
+    K[226 * sk] = K_2_14 - A_14_0*cz0_2 - cy1_14*cz1_2 - cy2_14*cz2_2;
+    K[227 * sk] = K_3_14 - A_14_0*cz0_3 - cy1_14*cz1_3 - cy2_14*cz2_3;
+    K[228 * sk] = K_4_14 - A_14_0*cz0_4 - cy1_14*cz1_4 - cy2_14*cz2_4;
+    K[229 * sk] = K_5_14 - A_14_0*cz0_5 - cy1_14*cz1_5 - cy2_14*cz2_5;
+    K[230 * sk] = K_6_14 - A_14_0*cz0_6 - cy1_14*cz1_6 - cy2_14*cz2_6;
+    K[231 * sk] = K_7_14 - A_14_0*cz0_7 - cy1_14*cz1_7 - cy2_14*cz2_7;
+    K[232 * sk] = K_8_14 - A_14_0*cz0_8 - cy1_14*cz1_8 - cy2_14*cz2_8;
+    K[233 * sk] = K_9_14 - A_14_0*cz0_9 - cy1_14*cz1_9 - cy2_14*cz2_9;
+    K[234 * sk] = K_10_14 - A_14_0*cz0_10 - cy1_14*cz1_10 - cy2_14*cz2_10;
+    K[235 * sk] = K_11_14 - A_14_0*cz0_11 - cy1_14*cz1_11 - cy2_14*cz2_11;
+    K[236 * sk] = K_12_14 - A_14_0*cz0_12 - cy1_14*cz1_12 - cy2_14*cz2_12;
+    K[237 * sk] = K_13_14 - A_14_0*cz0_13 - cy1_14*cz1_13 - cy2_14*cz2_13;
+    K[238 * sk] = K_14_14 - A_14_0*cz0_14 - cy1_14*cz1_14 - cy2_14*cz2_14;
+    K[239 * sk] = K_14_15 - A_15_0*cz0_14 - cy1_15*cz1_14 - cy2_15*cz2_14;
+    K[240 * sk] = K_0_15 - A_15_0*cz0_0 - cy1_15*cz1_0 - cy2_15*cz2_0;
+    K[241 * sk] = K_1_15 - A_15_0*cz0_1 - cy1_15*cz1_1 - cy2_15*cz2_1;
+    K[242 * sk] = K_2_15 - A_15_0*cz0_2 - cy1_15*cz1_2 - cy2_15*cz2_2;
+    K[243 * sk] = K_3_15 - A_15_0*cz0_3 - cy1_15*cz1_3 - cy2_15*cz2_3;
+    K[244 * sk] = K_4_15 - A_15_0*cz0_4 - cy1_15*cz1_4 - cy2_15*cz2_4;
+    K[245 * sk] = K_5_15 - A_15_0*cz0_5 - cy1_15*cz1_5 - cy2_15*cz2_5;
+    K[246 * sk] = K_6_15 - A_15_0*cz0_6 - cy1_15*cz1_6 - cy2_15*cz2_6;
+    K[247 * sk] = K_7_15 - A_15_0*cz0_7 - cy1_15*cz1_7 - cy2_15*cz2_7;
+    K[248 * sk] = K_8_15 - A_15_0*cz0_8 - cy1_15*cz1_8 - cy2_15*cz2_8;
+    K[249 * sk] = K_9_15 - A_15_0*cz0_9 - cy1_15*cz1_9 - cy2_15*cz2_9;
+    K[250 * sk] = K_10_15 - A_15_0*cz0_10 - cy1_15*cz1_10 - cy2_15*cz2_10;
+    K[251 * sk] = K_11_15 - A_15_0*cz0_11 - cy1_15*cz1_11 - cy2_15*cz2_11;
+    K[252 * sk] = K_12_15 - A_15_0*cz0_12 - cy1_15*cz1_12 - cy2_15*cz2_12;
+    K[253 * sk] = K_13_15 - A_15_0*cz0_13 - cy1_15*cz1_13 - cy2_15*cz2_13;
+    K[254 * sk] = K_14_15 - A_15_0*cz0_14 - cy1_15*cz1_14 - cy2_15*cz2_14;
+    K[255 * sk] = K_15_15 - A_15_0*cz0_15 - cy1_15*cz1_15 - cy2_15*cz2_15;
 }
 
 void derive_q8_bbar_plane_stress_stiffness(const double *restrict xy, double E, double nu, double t, double *restrict K)
@@ -1072,6 +1304,7 @@ static inline void q8_bbar_plane_stress_recovery_body(const double *restrict xy,
     const double m5 = mat[8];
     const double m6 = mat[9];
     const double m7 = mat[10];
+    const double m8 = mat[11];
     /* element quantities: map coefficients, centre Jacobian */
     const double gx_0_1 = 0.5*x7 - 0.5*x5;
     const double gx_0_2 = -0.5*x6 - 0.5*x8 + 0.25*x1 + 0.25*x2 + 0.25*x3 + 0.25*x4;
@@ -1087,444 +1320,147 @@ static inline void q8_bbar_plane_stress_recovery_body(const double *restrict xy,
     const double gy_1_2 = 0.5*y8 - 0.5*y6 - 0.25*y1 - 0.25*y4 + 0.25*y2 + 0.25*y3;
     const double gy_2_0 = -0.5*y5 - 0.5*y7 + 0.25*y1 + 0.25*y2 + 0.25*y3 + 0.25*y4;
     const double gy_2_1 = 0.5*y5 - 0.5*y7 - 0.25*y1 - 0.25*y2 + 0.25*y3 + 0.25*y4;
-    double A_0_0, A_1_0, A_2_0, A_3_0, A_4_0, A_5_0, A_6_0, A_7_0, A_8_0, A_9_0, A_10_0, A_11_0;
-    double A_12_0, A_13_0, A_14_0, A_15_0, H_0_0;
-    {   /* gauss-3x3 point 1 of 9: xi = -0.7745966692414834, eta = -0.7745966692414834, weight = 25/81 */
-        const double q0 = -0.7745966692414834*gx_1_1;
-        const double J00 = gx_1_0 + q0 + 0.6*gx_1_2 + 1.2*gx_2_1 - 1.5491933384829668*gx_2_0;
-        const double q1 = -0.7745966692414834*gy_1_1;
-        const double J01 = gy_1_0 + q1 + 0.6*gy_1_2 + 1.2*gy_2_1 - 1.5491933384829668*gy_2_0;
-        const double J10 = gx_0_1 + q0 + 0.6*gx_2_1 + 1.2*gx_1_2 - 1.5491933384829668*gx_0_2;
-        const double J11 = gy_0_1 + q1 + 0.6*gy_2_1 + 1.2*gy_1_2 - 1.5491933384829668*gy_0_2;
+    double A_0_0 = 0.0, A_0_1 = 0.0, A_0_2 = 0.0, A_1_0 = 0.0, A_1_1 = 0.0, A_1_2 = 0.0, A_2_0 = 0.0;
+    double A_2_1 = 0.0, A_2_2 = 0.0, A_3_0 = 0.0, A_3_1 = 0.0, A_3_2 = 0.0, A_4_0 = 0.0, A_4_1 = 0.0;
+    double A_4_2 = 0.0, A_5_0 = 0.0, A_5_1 = 0.0, A_5_2 = 0.0, A_6_0 = 0.0, A_6_1 = 0.0, A_6_2 = 0.0;
+    double A_7_0 = 0.0, A_7_1 = 0.0, A_7_2 = 0.0, A_8_0 = 0.0, A_8_1 = 0.0, A_8_2 = 0.0, A_9_0 = 0.0;
+    double A_9_1 = 0.0, A_9_2 = 0.0, A_10_0 = 0.0, A_10_1 = 0.0, A_10_2 = 0.0, A_11_0 = 0.0;
+    double A_11_1 = 0.0, A_11_2 = 0.0, A_12_0 = 0.0, A_12_1 = 0.0, A_12_2 = 0.0, A_13_0 = 0.0;
+    double A_13_1 = 0.0, A_13_2 = 0.0, A_14_0 = 0.0, A_14_1 = 0.0, A_14_2 = 0.0, A_15_0 = 0.0;
+    double A_15_1 = 0.0, A_15_2 = 0.0, H_0_0 = 0.0, H_0_1 = 0.0, H_0_2 = 0.0, H_1_1 = 0.0;
+    double H_1_2 = 0.0, H_2_2 = 0.0;
+    for (int p = 0; p < 9; ++p) {   /* gauss-3x3: loop over the 9 points */
+        const double c0 = KR0_c0[p];
+        const double c1 = KR0_c1[p];
+        const double c2 = KR0_c2[p];
+        const double c3 = KR0_c3[p];
+        const double c4 = KR0_c4[p];
+        const double c5 = KR0_c5[p];
+        const double c6 = KR0_c6[p];
+        const double c7 = KR0_c7[p];
+        const double c8 = KR0_c8[p];
+        const double c9 = KR0_c9[p];
+        const double c10 = KR0_c10[p];
+        const double c11 = KR0_c11[p];
+        const double c12 = KR0_c12[p];
+        const double c13 = KR0_c13[p];
+        const double c14 = KR0_c14[p];
+        const double c15 = KR0_c15[p];
+        const double c16 = KR0_c16[p];
+        const double c17 = KR0_c17[p];
+        const double c18 = KR0_c18[p];
+        const double c19 = KR0_c19[p];
+        const double c20 = KR0_c20[p];
+        const double eta = KR0_eta[p];
+        const double w = KR0_w[p];
+        const double xi = KR0_xi[p];
+        const double J00 = gx_1_0 + c0*gx_1_2 + c1*gx_2_0 + c2*gx_2_1 + eta*gx_1_1;
+        const double J01 = gy_1_0 + c0*gy_1_2 + c1*gy_2_0 + c2*gy_2_1 + eta*gy_1_1;
+        const double J10 = gx_0_1 + c2*gx_1_2 + c3*gx_0_2 + c4*gx_2_1 + gx_1_1*xi;
+        const double J11 = gy_0_1 + c2*gy_1_2 + c3*gy_0_2 + c4*gy_2_1 + gy_1_1*xi;
         const double detJ = J00*J11 - J01*J10;
         const double idet = 1.0/detJ;
         const double Ji00 = J11*idet;
         const double Ji01 = -J01*idet;
         const double Ji10 = -J10*idet;
         const double Ji11 = J00*idet;
-        const double dNdx1 = -1.0309475019311125*Ji00 - 1.0309475019311125*Ji01;
-        const double dNdy1 = -1.0309475019311125*Ji10 - 1.0309475019311125*Ji11;
-        const double dNdx2 = -0.04364916731037084*Ji01 - 0.3436491673103708*Ji00;
-        const double dNdy2 = -0.04364916731037084*Ji11 - 0.3436491673103708*Ji10;
-        const double dNdx3 = -0.13094750193111254*Ji00 - 0.13094750193111254*Ji01;
-        const double dNdy3 = -0.13094750193111254*Ji10 - 0.13094750193111254*Ji11;
-        const double dNdx4 = -0.04364916731037084*Ji00 - 0.3436491673103708*Ji01;
-        const double dNdy4 = -0.04364916731037084*Ji10 - 0.3436491673103708*Ji11;
-        const double dNdx5 = -0.2*Ji01 + 1.3745966692414833*Ji00;
-        const double dNdy5 = -0.2*Ji11 + 1.3745966692414833*Ji10;
-        const double dNdx6 = 0.2*Ji00 + 0.17459666924148337*Ji01;
-        const double dNdy6 = 0.2*Ji10 + 0.17459666924148337*Ji11;
-        const double dNdx7 = 0.2*Ji01 + 0.17459666924148337*Ji00;
-        const double dNdy7 = 0.2*Ji11 + 0.17459666924148337*Ji10;
-        const double dNdx8 = -0.2*Ji00 + 1.3745966692414833*Ji01;
-        const double dNdy8 = -0.2*Ji10 + 1.3745966692414833*Ji11;
-        const double sc0 = 0.30864197530864196*detJ*t;
-        const double s52 = m3*sc0;
-        A_0_0 = dNdx1*sc0;
-        A_1_0 = dNdy1*sc0;
-        A_2_0 = dNdx2*sc0;
-        A_3_0 = dNdy2*sc0;
-        A_4_0 = dNdx3*sc0;
-        A_5_0 = dNdy3*sc0;
-        A_6_0 = dNdx4*sc0;
-        A_7_0 = dNdy4*sc0;
-        A_8_0 = dNdx5*sc0;
-        A_9_0 = dNdy5*sc0;
-        A_10_0 = dNdx6*sc0;
-        A_11_0 = dNdy6*sc0;
-        A_12_0 = dNdx7*sc0;
-        A_13_0 = dNdy7*sc0;
-        A_14_0 = dNdx8*sc0;
-        A_15_0 = dNdy8*sc0;
-        H_0_0 = s52;
-    }
-    {   /* gauss-3x3 point 2 of 9: xi = 0, eta = -0.7745966692414834, weight = 40/81 */
-        const double J00 = gx_1_0 + 0.6*gx_1_2 - 0.7745966692414834*gx_1_1;
-        const double J01 = gy_1_0 + 0.6*gy_1_2 - 0.7745966692414834*gy_1_1;
-        const double J10 = gx_0_1 - 1.5491933384829668*gx_0_2;
-        const double J11 = gy_0_1 - 1.5491933384829668*gy_0_2;
-        const double detJ = J00*J11 - J01*J10;
-        const double idet = 1.0/detJ;
-        const double Ji00 = J11*idet;
-        const double Ji01 = -J01*idet;
-        const double Ji10 = -J10*idet;
-        const double Ji11 = J00*idet;
-        const double q0 = -0.3872983346207417*Ji01;
-        const double dNdx1 = q0 - 0.3436491673103708*Ji00;
-        const double q1 = -0.3872983346207417*Ji11;
-        const double dNdy1 = q1 - 0.3436491673103708*Ji10;
-        const double dNdx2 = q0 + 0.3436491673103708*Ji00;
-        const double dNdy2 = q1 + 0.3436491673103708*Ji10;
-        const double dNdx3 = q0 - 0.04364916731037084*Ji00;
-        const double dNdy3 = q1 - 0.04364916731037084*Ji10;
-        const double dNdx4 = q0 + 0.04364916731037084*Ji00;
-        const double dNdy4 = q1 + 0.04364916731037084*Ji10;
-        const double dNdx5 = -0.5*Ji01;
-        const double dNdy5 = -0.5*Ji11;
-        const double q2 = 0.7745966692414834*Ji01;
-        const double dNdx6 = q2 + 0.2*Ji00;
-        const double q3 = 0.7745966692414834*Ji11;
-        const double dNdy6 = q3 + 0.2*Ji10;
-        const double dNdx7 = 0.5*Ji01;
-        const double dNdy7 = 0.5*Ji11;
-        const double dNdx8 = q2 - 0.2*Ji00;
-        const double dNdy8 = q3 - 0.2*Ji10;
-        const double sc0 = 0.49382716049382713*detJ*t;
-        const double s52 = m3*sc0;
+        const double dNdx1 = Ji00*c5 + Ji01*c6;
+        const double dNdy1 = Ji10*c5 + Ji11*c6;
+        const double dNdx2 = Ji00*c7 + Ji01*c8;
+        const double dNdy2 = Ji10*c7 + Ji11*c8;
+        const double dNdx3 = Ji00*c9 + Ji01*c10;
+        const double dNdy3 = Ji10*c9 + Ji11*c10;
+        const double dNdx4 = Ji00*c11 + Ji01*c12;
+        const double dNdy4 = Ji10*c11 + Ji11*c12;
+        const double dNdx5 = Ji00*c13 + Ji01*c14;
+        const double dNdy5 = Ji10*c13 + Ji11*c14;
+        const double dNdx6 = Ji00*c15 + Ji01*c16;
+        const double dNdy6 = Ji10*c15 + Ji11*c16;
+        const double dNdx7 = Ji00*c17 + Ji01*c18;
+        const double dNdy7 = Ji10*c17 + Ji11*c18;
+        const double dNdx8 = Ji00*c19 + Ji01*c20;
+        const double dNdy8 = Ji10*c19 + Ji11*c20;
+        const double sc0 = detJ*t*w;
+        const double T52 = sc0*xi;
+        const double T53 = eta*sc0;
+        const double s54 = m3*sc0;
+        const double T55 = s54*xi;
+        const double T56 = eta*s54;
         A_0_0 += dNdx1*sc0;
+        A_0_1 += T52*dNdx1;
+        A_0_2 += T53*dNdx1;
         A_1_0 += dNdy1*sc0;
+        A_1_1 += T52*dNdy1;
+        A_1_2 += T53*dNdy1;
         A_2_0 += dNdx2*sc0;
+        A_2_1 += T52*dNdx2;
+        A_2_2 += T53*dNdx2;
         A_3_0 += dNdy2*sc0;
+        A_3_1 += T52*dNdy2;
+        A_3_2 += T53*dNdy2;
         A_4_0 += dNdx3*sc0;
+        A_4_1 += T52*dNdx3;
+        A_4_2 += T53*dNdx3;
         A_5_0 += dNdy3*sc0;
+        A_5_1 += T52*dNdy3;
+        A_5_2 += T53*dNdy3;
         A_6_0 += dNdx4*sc0;
+        A_6_1 += T52*dNdx4;
+        A_6_2 += T53*dNdx4;
         A_7_0 += dNdy4*sc0;
+        A_7_1 += T52*dNdy4;
+        A_7_2 += T53*dNdy4;
         A_8_0 += dNdx5*sc0;
+        A_8_1 += T52*dNdx5;
+        A_8_2 += T53*dNdx5;
         A_9_0 += dNdy5*sc0;
+        A_9_1 += T52*dNdy5;
+        A_9_2 += T53*dNdy5;
         A_10_0 += dNdx6*sc0;
+        A_10_1 += T52*dNdx6;
+        A_10_2 += T53*dNdx6;
         A_11_0 += dNdy6*sc0;
+        A_11_1 += T52*dNdy6;
+        A_11_2 += T53*dNdy6;
         A_12_0 += dNdx7*sc0;
+        A_12_1 += T52*dNdx7;
+        A_12_2 += T53*dNdx7;
         A_13_0 += dNdy7*sc0;
+        A_13_1 += T52*dNdy7;
+        A_13_2 += T53*dNdy7;
         A_14_0 += dNdx8*sc0;
+        A_14_1 += T52*dNdx8;
+        A_14_2 += T53*dNdx8;
         A_15_0 += dNdy8*sc0;
-        H_0_0 += s52;
-    }
-    {   /* gauss-3x3 point 3 of 9: xi = 0.7745966692414834, eta = -0.7745966692414834, weight = 25/81 */
-        const double J00 = gx_1_0 - 1.2*gx_2_1 + 0.6*gx_1_2 + 1.5491933384829668*gx_2_0
-            - 0.7745966692414834*gx_1_1;
-        const double J01 = gy_1_0 - 1.2*gy_2_1 + 0.6*gy_1_2 + 1.5491933384829668*gy_2_0
-            - 0.7745966692414834*gy_1_1;
-        const double J10 = gx_0_1 - 1.2*gx_1_2 + 0.6*gx_2_1 + 0.7745966692414834*gx_1_1
-            - 1.5491933384829668*gx_0_2;
-        const double J11 = gy_0_1 - 1.2*gy_1_2 + 0.6*gy_2_1 + 0.7745966692414834*gy_1_1
-            - 1.5491933384829668*gy_0_2;
-        const double detJ = J00*J11 - J01*J10;
-        const double idet = 1.0/detJ;
-        const double Ji00 = J11*idet;
-        const double Ji01 = -J01*idet;
-        const double Ji10 = -J10*idet;
-        const double Ji11 = J00*idet;
-        const double dNdx1 = 0.3436491673103708*Ji00 - 0.04364916731037084*Ji01;
-        const double dNdy1 = 0.3436491673103708*Ji10 - 0.04364916731037084*Ji11;
-        const double dNdx2 = 1.0309475019311125*Ji00 - 1.0309475019311125*Ji01;
-        const double dNdy2 = 1.0309475019311125*Ji10 - 1.0309475019311125*Ji11;
-        const double dNdx3 = 0.04364916731037084*Ji00 - 0.3436491673103708*Ji01;
-        const double dNdy3 = 0.04364916731037084*Ji10 - 0.3436491673103708*Ji11;
-        const double dNdx4 = 0.13094750193111254*Ji00 - 0.13094750193111254*Ji01;
-        const double dNdy4 = 0.13094750193111254*Ji10 - 0.13094750193111254*Ji11;
-        const double dNdx5 = -0.2*Ji01 - 1.3745966692414833*Ji00;
-        const double dNdy5 = -0.2*Ji11 - 1.3745966692414833*Ji10;
-        const double dNdx6 = 0.2*Ji00 + 1.3745966692414833*Ji01;
-        const double dNdy6 = 0.2*Ji10 + 1.3745966692414833*Ji11;
-        const double dNdx7 = 0.2*Ji01 - 0.17459666924148337*Ji00;
-        const double dNdy7 = 0.2*Ji11 - 0.17459666924148337*Ji10;
-        const double dNdx8 = -0.2*Ji00 + 0.17459666924148337*Ji01;
-        const double dNdy8 = -0.2*Ji10 + 0.17459666924148337*Ji11;
-        const double sc0 = 0.30864197530864196*detJ*t;
-        const double s52 = m3*sc0;
-        A_0_0 += dNdx1*sc0;
-        A_1_0 += dNdy1*sc0;
-        A_2_0 += dNdx2*sc0;
-        A_3_0 += dNdy2*sc0;
-        A_4_0 += dNdx3*sc0;
-        A_5_0 += dNdy3*sc0;
-        A_6_0 += dNdx4*sc0;
-        A_7_0 += dNdy4*sc0;
-        A_8_0 += dNdx5*sc0;
-        A_9_0 += dNdy5*sc0;
-        A_10_0 += dNdx6*sc0;
-        A_11_0 += dNdy6*sc0;
-        A_12_0 += dNdx7*sc0;
-        A_13_0 += dNdy7*sc0;
-        A_14_0 += dNdx8*sc0;
-        A_15_0 += dNdy8*sc0;
-        H_0_0 += s52;
-    }
-    {   /* gauss-3x3 point 4 of 9: xi = -0.7745966692414834, eta = 0, weight = 40/81 */
-        const double J00 = gx_1_0 - 1.5491933384829668*gx_2_0;
-        const double J01 = gy_1_0 - 1.5491933384829668*gy_2_0;
-        const double J10 = gx_0_1 + 0.6*gx_2_1 - 0.7745966692414834*gx_1_1;
-        const double J11 = gy_0_1 + 0.6*gy_2_1 - 0.7745966692414834*gy_1_1;
-        const double detJ = J00*J11 - J01*J10;
-        const double idet = 1.0/detJ;
-        const double Ji00 = J11*idet;
-        const double Ji01 = -J01*idet;
-        const double Ji10 = -J10*idet;
-        const double Ji11 = J00*idet;
-        const double q0 = -0.3872983346207417*Ji00;
-        const double dNdx1 = q0 - 0.3436491673103708*Ji01;
-        const double q1 = -0.3872983346207417*Ji10;
-        const double dNdy1 = q1 - 0.3436491673103708*Ji11;
-        const double dNdx2 = q0 + 0.04364916731037084*Ji01;
-        const double dNdy2 = q1 + 0.04364916731037084*Ji11;
-        const double dNdx3 = q0 - 0.04364916731037084*Ji01;
-        const double dNdy3 = q1 - 0.04364916731037084*Ji11;
-        const double dNdx4 = q0 + 0.3436491673103708*Ji01;
-        const double dNdy4 = q1 + 0.3436491673103708*Ji11;
-        const double q2 = 0.7745966692414834*Ji00;
-        const double dNdx5 = q2 - 0.2*Ji01;
-        const double q3 = 0.7745966692414834*Ji10;
-        const double dNdy5 = q3 - 0.2*Ji11;
-        const double dNdx6 = 0.5*Ji00;
-        const double dNdy6 = 0.5*Ji10;
-        const double dNdx7 = q2 + 0.2*Ji01;
-        const double dNdy7 = q3 + 0.2*Ji11;
-        const double dNdx8 = -0.5*Ji00;
-        const double dNdy8 = -0.5*Ji10;
-        const double sc0 = 0.49382716049382713*detJ*t;
-        const double s52 = m3*sc0;
-        A_0_0 += dNdx1*sc0;
-        A_1_0 += dNdy1*sc0;
-        A_2_0 += dNdx2*sc0;
-        A_3_0 += dNdy2*sc0;
-        A_4_0 += dNdx3*sc0;
-        A_5_0 += dNdy3*sc0;
-        A_6_0 += dNdx4*sc0;
-        A_7_0 += dNdy4*sc0;
-        A_8_0 += dNdx5*sc0;
-        A_9_0 += dNdy5*sc0;
-        A_10_0 += dNdx6*sc0;
-        A_11_0 += dNdy6*sc0;
-        A_12_0 += dNdx7*sc0;
-        A_13_0 += dNdy7*sc0;
-        A_14_0 += dNdx8*sc0;
-        A_15_0 += dNdy8*sc0;
-        H_0_0 += s52;
-    }
-    {   /* gauss-3x3 point 5 of 9: xi = 0, eta = 0, weight = 64/81 */
-        const double detJ = gx_1_0*gy_0_1 - gx_0_1*gy_1_0;
-        const double idet = 1.0/detJ;
-        const double Ji00 = gy_0_1*idet;
-        const double Ji01 = -gy_1_0*idet;
-        const double Ji10 = -gx_0_1*idet;
-        const double Ji11 = gx_1_0*idet;
-        const double dNdx5 = -0.5*Ji01;
-        const double dNdy5 = -0.5*Ji11;
-        const double dNdx6 = 0.5*Ji00;
-        const double dNdy6 = 0.5*Ji10;
-        const double dNdx7 = 0.5*Ji01;
-        const double dNdy7 = 0.5*Ji11;
-        const double dNdx8 = -0.5*Ji00;
-        const double dNdy8 = -0.5*Ji10;
-        const double sc0 = 0.7901234567901234*detJ*t;
-        const double s52 = m3*sc0;
-        A_8_0 += dNdx5*sc0;
-        A_9_0 += dNdy5*sc0;
-        A_10_0 += dNdx6*sc0;
-        A_11_0 += dNdy6*sc0;
-        A_12_0 += dNdx7*sc0;
-        A_13_0 += dNdy7*sc0;
-        A_14_0 += dNdx8*sc0;
-        A_15_0 += dNdy8*sc0;
-        H_0_0 += s52;
-    }
-    {   /* gauss-3x3 point 6 of 9: xi = 0.7745966692414834, eta = 0, weight = 40/81 */
-        const double J00 = gx_1_0 + 1.5491933384829668*gx_2_0;
-        const double J01 = gy_1_0 + 1.5491933384829668*gy_2_0;
-        const double J10 = gx_0_1 + 0.6*gx_2_1 + 0.7745966692414834*gx_1_1;
-        const double J11 = gy_0_1 + 0.6*gy_2_1 + 0.7745966692414834*gy_1_1;
-        const double detJ = J00*J11 - J01*J10;
-        const double idet = 1.0/detJ;
-        const double Ji00 = J11*idet;
-        const double Ji01 = -J01*idet;
-        const double Ji10 = -J10*idet;
-        const double Ji11 = J00*idet;
-        const double q0 = 0.3872983346207417*Ji00;
-        const double dNdx1 = q0 + 0.04364916731037084*Ji01;
-        const double q1 = 0.3872983346207417*Ji10;
-        const double dNdy1 = q1 + 0.04364916731037084*Ji11;
-        const double dNdx2 = q0 - 0.3436491673103708*Ji01;
-        const double dNdy2 = q1 - 0.3436491673103708*Ji11;
-        const double dNdx3 = q0 + 0.3436491673103708*Ji01;
-        const double dNdy3 = q1 + 0.3436491673103708*Ji11;
-        const double dNdx4 = q0 - 0.04364916731037084*Ji01;
-        const double dNdy4 = q1 - 0.04364916731037084*Ji11;
-        const double q2 = -0.7745966692414834*Ji00;
-        const double dNdx5 = q2 - 0.2*Ji01;
-        const double q3 = -0.7745966692414834*Ji10;
-        const double dNdy5 = q3 - 0.2*Ji11;
-        const double dNdx6 = 0.5*Ji00;
-        const double dNdy6 = 0.5*Ji10;
-        const double dNdx7 = q2 + 0.2*Ji01;
-        const double dNdy7 = q3 + 0.2*Ji11;
-        const double dNdx8 = -0.5*Ji00;
-        const double dNdy8 = -0.5*Ji10;
-        const double sc0 = 0.49382716049382713*detJ*t;
-        const double s52 = m3*sc0;
-        A_0_0 += dNdx1*sc0;
-        A_1_0 += dNdy1*sc0;
-        A_2_0 += dNdx2*sc0;
-        A_3_0 += dNdy2*sc0;
-        A_4_0 += dNdx3*sc0;
-        A_5_0 += dNdy3*sc0;
-        A_6_0 += dNdx4*sc0;
-        A_7_0 += dNdy4*sc0;
-        A_8_0 += dNdx5*sc0;
-        A_9_0 += dNdy5*sc0;
-        A_10_0 += dNdx6*sc0;
-        A_11_0 += dNdy6*sc0;
-        A_12_0 += dNdx7*sc0;
-        A_13_0 += dNdy7*sc0;
-        A_14_0 += dNdx8*sc0;
-        A_15_0 += dNdy8*sc0;
-        H_0_0 += s52;
-    }
-    {   /* gauss-3x3 point 7 of 9: xi = -0.7745966692414834, eta = 0.7745966692414834, weight = 25/81 */
-        const double J00 = gx_1_0 - 1.2*gx_2_1 + 0.6*gx_1_2 + 0.7745966692414834*gx_1_1
-            - 1.5491933384829668*gx_2_0;
-        const double J01 = gy_1_0 - 1.2*gy_2_1 + 0.6*gy_1_2 + 0.7745966692414834*gy_1_1
-            - 1.5491933384829668*gy_2_0;
-        const double J10 = gx_0_1 - 1.2*gx_1_2 + 0.6*gx_2_1 + 1.5491933384829668*gx_0_2
-            - 0.7745966692414834*gx_1_1;
-        const double J11 = gy_0_1 - 1.2*gy_1_2 + 0.6*gy_2_1 + 1.5491933384829668*gy_0_2
-            - 0.7745966692414834*gy_1_1;
-        const double detJ = J00*J11 - J01*J10;
-        const double idet = 1.0/detJ;
-        const double Ji00 = J11*idet;
-        const double Ji01 = -J01*idet;
-        const double Ji10 = -J10*idet;
-        const double Ji11 = J00*idet;
-        const double dNdx1 = 0.3436491673103708*Ji01 - 0.04364916731037084*Ji00;
-        const double dNdy1 = 0.3436491673103708*Ji11 - 0.04364916731037084*Ji10;
-        const double dNdx2 = 0.13094750193111254*Ji01 - 0.13094750193111254*Ji00;
-        const double dNdy2 = 0.13094750193111254*Ji11 - 0.13094750193111254*Ji10;
-        const double dNdx3 = 0.04364916731037084*Ji01 - 0.3436491673103708*Ji00;
-        const double dNdy3 = 0.04364916731037084*Ji11 - 0.3436491673103708*Ji10;
-        const double dNdx4 = 1.0309475019311125*Ji01 - 1.0309475019311125*Ji00;
-        const double dNdy4 = 1.0309475019311125*Ji11 - 1.0309475019311125*Ji10;
-        const double dNdx5 = -0.2*Ji01 + 0.17459666924148337*Ji00;
-        const double dNdy5 = -0.2*Ji11 + 0.17459666924148337*Ji10;
-        const double dNdx6 = 0.2*Ji00 - 0.17459666924148337*Ji01;
-        const double dNdy6 = 0.2*Ji10 - 0.17459666924148337*Ji11;
-        const double dNdx7 = 0.2*Ji01 + 1.3745966692414833*Ji00;
-        const double dNdy7 = 0.2*Ji11 + 1.3745966692414833*Ji10;
-        const double dNdx8 = -0.2*Ji00 - 1.3745966692414833*Ji01;
-        const double dNdy8 = -0.2*Ji10 - 1.3745966692414833*Ji11;
-        const double sc0 = 0.30864197530864196*detJ*t;
-        const double s52 = m3*sc0;
-        A_0_0 += dNdx1*sc0;
-        A_1_0 += dNdy1*sc0;
-        A_2_0 += dNdx2*sc0;
-        A_3_0 += dNdy2*sc0;
-        A_4_0 += dNdx3*sc0;
-        A_5_0 += dNdy3*sc0;
-        A_6_0 += dNdx4*sc0;
-        A_7_0 += dNdy4*sc0;
-        A_8_0 += dNdx5*sc0;
-        A_9_0 += dNdy5*sc0;
-        A_10_0 += dNdx6*sc0;
-        A_11_0 += dNdy6*sc0;
-        A_12_0 += dNdx7*sc0;
-        A_13_0 += dNdy7*sc0;
-        A_14_0 += dNdx8*sc0;
-        A_15_0 += dNdy8*sc0;
-        H_0_0 += s52;
-    }
-    {   /* gauss-3x3 point 8 of 9: xi = 0, eta = 0.7745966692414834, weight = 40/81 */
-        const double J00 = gx_1_0 + 0.6*gx_1_2 + 0.7745966692414834*gx_1_1;
-        const double J01 = gy_1_0 + 0.6*gy_1_2 + 0.7745966692414834*gy_1_1;
-        const double J10 = gx_0_1 + 1.5491933384829668*gx_0_2;
-        const double J11 = gy_0_1 + 1.5491933384829668*gy_0_2;
-        const double detJ = J00*J11 - J01*J10;
-        const double idet = 1.0/detJ;
-        const double Ji00 = J11*idet;
-        const double Ji01 = -J01*idet;
-        const double Ji10 = -J10*idet;
-        const double Ji11 = J00*idet;
-        const double q0 = 0.3872983346207417*Ji01;
-        const double dNdx1 = q0 + 0.04364916731037084*Ji00;
-        const double q1 = 0.3872983346207417*Ji11;
-        const double dNdy1 = q1 + 0.04364916731037084*Ji10;
-        const double dNdx2 = q0 - 0.04364916731037084*Ji00;
-        const double dNdy2 = q1 - 0.04364916731037084*Ji10;
-        const double dNdx3 = q0 + 0.3436491673103708*Ji00;
-        const double dNdy3 = q1 + 0.3436491673103708*Ji10;
-        const double dNdx4 = q0 - 0.3436491673103708*Ji00;
-        const double dNdy4 = q1 - 0.3436491673103708*Ji10;
-        const double dNdx5 = -0.5*Ji01;
-        const double dNdy5 = -0.5*Ji11;
-        const double q2 = -0.7745966692414834*Ji01;
-        const double dNdx6 = q2 + 0.2*Ji00;
-        const double q3 = -0.7745966692414834*Ji11;
-        const double dNdy6 = q3 + 0.2*Ji10;
-        const double dNdx7 = 0.5*Ji01;
-        const double dNdy7 = 0.5*Ji11;
-        const double dNdx8 = q2 - 0.2*Ji00;
-        const double dNdy8 = q3 - 0.2*Ji10;
-        const double sc0 = 0.49382716049382713*detJ*t;
-        const double s52 = m3*sc0;
-        A_0_0 += dNdx1*sc0;
-        A_1_0 += dNdy1*sc0;
-        A_2_0 += dNdx2*sc0;
-        A_3_0 += dNdy2*sc0;
-        A_4_0 += dNdx3*sc0;
-        A_5_0 += dNdy3*sc0;
-        A_6_0 += dNdx4*sc0;
-        A_7_0 += dNdy4*sc0;
-        A_8_0 += dNdx5*sc0;
-        A_9_0 += dNdy5*sc0;
-        A_10_0 += dNdx6*sc0;
-        A_11_0 += dNdy6*sc0;
-        A_12_0 += dNdx7*sc0;
-        A_13_0 += dNdy7*sc0;
-        A_14_0 += dNdx8*sc0;
-        A_15_0 += dNdy8*sc0;
-        H_0_0 += s52;
-    }
-    {   /* gauss-3x3 point 9 of 9: xi = 0.7745966692414834, eta = 0.7745966692414834, weight = 25/81 */
-        const double q0 = 0.7745966692414834*gx_1_1;
-        const double J00 = gx_1_0 + q0 + 0.6*gx_1_2 + 1.2*gx_2_1 + 1.5491933384829668*gx_2_0;
-        const double q1 = 0.7745966692414834*gy_1_1;
-        const double J01 = gy_1_0 + q1 + 0.6*gy_1_2 + 1.2*gy_2_1 + 1.5491933384829668*gy_2_0;
-        const double J10 = gx_0_1 + q0 + 0.6*gx_2_1 + 1.2*gx_1_2 + 1.5491933384829668*gx_0_2;
-        const double J11 = gy_0_1 + q1 + 0.6*gy_2_1 + 1.2*gy_1_2 + 1.5491933384829668*gy_0_2;
-        const double detJ = J00*J11 - J01*J10;
-        const double idet = 1.0/detJ;
-        const double Ji00 = J11*idet;
-        const double Ji01 = -J01*idet;
-        const double Ji10 = -J10*idet;
-        const double Ji11 = J00*idet;
-        const double dNdx1 = 0.13094750193111254*Ji00 + 0.13094750193111254*Ji01;
-        const double dNdy1 = 0.13094750193111254*Ji10 + 0.13094750193111254*Ji11;
-        const double dNdx2 = 0.04364916731037084*Ji00 + 0.3436491673103708*Ji01;
-        const double dNdy2 = 0.04364916731037084*Ji10 + 0.3436491673103708*Ji11;
-        const double dNdx3 = 1.0309475019311125*Ji00 + 1.0309475019311125*Ji01;
-        const double dNdy3 = 1.0309475019311125*Ji10 + 1.0309475019311125*Ji11;
-        const double dNdx4 = 0.04364916731037084*Ji01 + 0.3436491673103708*Ji00;
-        const double dNdy4 = 0.04364916731037084*Ji11 + 0.3436491673103708*Ji10;
-        const double dNdx5 = -0.2*Ji01 - 0.17459666924148337*Ji00;
-        const double dNdy5 = -0.2*Ji11 - 0.17459666924148337*Ji10;
-        const double dNdx6 = 0.2*Ji00 - 1.3745966692414833*Ji01;
-        const double dNdy6 = 0.2*Ji10 - 1.3745966692414833*Ji11;
-        const double dNdx7 = 0.2*Ji01 - 1.3745966692414833*Ji00;
-        const double dNdy7 = 0.2*Ji11 - 1.3745966692414833*Ji10;
-        const double dNdx8 = -0.2*Ji00 - 0.17459666924148337*Ji01;
-        const double dNdy8 = -0.2*Ji10 - 0.17459666924148337*Ji11;
-        const double sc0 = 0.30864197530864196*detJ*t;
-        const double s52 = m3*sc0;
-        A_0_0 += dNdx1*sc0;
-        A_1_0 += dNdy1*sc0;
-        A_2_0 += dNdx2*sc0;
-        A_3_0 += dNdy2*sc0;
-        A_4_0 += dNdx3*sc0;
-        A_5_0 += dNdy3*sc0;
-        A_6_0 += dNdx4*sc0;
-        A_7_0 += dNdy4*sc0;
-        A_8_0 += dNdx5*sc0;
-        A_9_0 += dNdy5*sc0;
-        A_10_0 += dNdx6*sc0;
-        A_11_0 += dNdy6*sc0;
-        A_12_0 += dNdx7*sc0;
-        A_13_0 += dNdy7*sc0;
-        A_14_0 += dNdx8*sc0;
-        A_15_0 += dNdy8*sc0;
-        H_0_0 += s52;
+        A_15_1 += T52*dNdy8;
+        A_15_2 += T53*dNdy8;
+        H_0_0 += s54;
+        H_0_1 += T55;
+        H_0_2 += T56;
+        H_1_1 += T55*xi;
+        H_1_2 += T56*xi;
+        H_2_2 += T56*eta;
     }
     /* static condensation of the internal unknowns */
     const double cid0 = 1.0/H_0_0;
+    const double cL1_0 = H_0_1*cid0;
+    const double cL2_0 = H_0_2*cid0;
+    const double cd1 = H_1_1 - H_0_0*cL1_0*cL1_0;
+    const double cid1 = 1.0/cd1;
+    const double cL2_1 = cid1*(H_1_2 - H_0_0*cL1_0*cL2_0);
+    const double cd2 = H_2_2 - H_0_0*cL2_0*cL2_0 - cd1*cL2_1*cL2_1;
+    const double cid2 = 1.0/cd2;
     const double cb0 = -A_0_0*u1 - A_10_0*u11 - A_11_0*u12 - A_12_0*u13 - A_13_0*u14 - A_14_0*u15 - A_15_0*u16
         - A_1_0*u2 - A_2_0*u3 - A_3_0*u4 - A_4_0*u5 - A_5_0*u6 - A_6_0*u7 - A_7_0*u8 - A_8_0*u9 - A_9_0*u10;
-    const double alpha1 = cb0*cid0;
+    const double cb1 = -A_0_1*u1 - A_10_1*u11 - A_11_1*u12 - A_12_1*u13 - A_13_1*u14 - A_14_1*u15 - A_15_1*u16
+        - A_1_1*u2 - A_2_1*u3 - A_3_1*u4 - A_4_1*u5 - A_5_1*u6 - A_6_1*u7 - A_7_1*u8 - A_8_1*u9 - A_9_1*u10;
+    const double cb2 = -A_0_2*u1 - A_10_2*u11 - A_11_2*u12 - A_12_2*u13 - A_13_2*u14 - A_14_2*u15 - A_15_2*u16
+        - A_1_2*u2 - A_2_2*u3 - A_3_2*u4 - A_4_2*u5 - A_5_2*u6 - A_6_2*u7 - A_7_2*u8 - A_8_2*u9 - A_9_2*u10;
+    const double cy1_0 = cb1 - cL1_0*cb0;
+    const double cy2_0 = cb2 - cL2_0*cb0 - cL2_1*cy1_0;
+    const double alpha3 = cid2*cy2_0;
+    const double alpha2 = cid1*cy1_0 - alpha3*cL2_1;
+    const double alpha1 = cb0*cid0 - alpha2*cL1_0 - alpha3*cL2_0;
     {   /* gauss-3x3 point 1 of 9: xi = -0.7745966692414834, eta = -0.7745966692414834, weight = 25/81 */
         const double q0 = -0.7745966692414834*gx_1_1;
         const double J00 = gx_1_0 + q0 + 0.6*gx_1_2 + 1.2*gx_2_1 - 1.5491933384829668*gx_2_0;
@@ -1555,21 +1491,23 @@ static inline void q8_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx8 = -0.2*Ji00 + 1.3745966692414833*Ji01;
         const double dNdy8 = -0.2*Ji10 + 1.3745966692414833*Ji11;
         const double q2 = alpha1*m4;
-        const double eps53 = q2 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4 - 0.5*dNdy3*u6
-            - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
-        const double eps54 = q2 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3 - 0.5*dNdx3*u5
-            - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
-        const double eps55 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+        const double q3 = -0.3872983346207417*alpha2*m5;
+        const double q4 = -0.3872983346207417*alpha3*m5;
+        const double eps57 = q2 + q3 + q4 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
+            - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
+        const double eps58 = q2 + q3 + q4 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
+            - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
+        const double eps59 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
             + dNdx8*u16 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
             + dNdy8*u15;
-        strain[0] = eps53;
-        strain[1] = eps54;
-        strain[2] = eps55;
-        stress[0] = eps53*m5 + eps54*m6;
-        stress[1] = eps53*m6 + eps54*m5;
-        stress[2] = eps55*m7;
+        strain[0] = eps57;
+        strain[1] = eps58;
+        strain[2] = eps59;
+        stress[0] = eps57*m6 + eps58*m7;
+        stress[1] = eps57*m7 + eps58*m6;
+        stress[2] = eps59*m8;
     }
     {   /* gauss-3x3 point 2 of 9: xi = 0, eta = -0.7745966692414834, weight = 40/81 */
         const double J00 = gx_1_0 + 0.6*gx_1_2 - 0.7745966692414834*gx_1_1;
@@ -1603,21 +1541,22 @@ static inline void q8_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx8 = q2 - 0.2*Ji00;
         const double dNdy8 = q3 - 0.2*Ji10;
         const double q4 = alpha1*m4;
-        const double eps53 = q4 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4 - 0.5*dNdy3*u6
-            - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
-        const double eps54 = q4 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3 - 0.5*dNdx3*u5
-            - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
-        const double eps55 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+        const double q5 = -0.3872983346207417*alpha3*m5;
+        const double eps57 = q4 + q5 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
+            - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
+        const double eps58 = q4 + q5 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
+            - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
+        const double eps59 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
             + dNdx8*u16 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
             + dNdy8*u15;
-        strain[3] = eps53;
-        strain[4] = eps54;
-        strain[5] = eps55;
-        stress[3] = eps53*m5 + eps54*m6;
-        stress[4] = eps53*m6 + eps54*m5;
-        stress[5] = eps55*m7;
+        strain[3] = eps57;
+        strain[4] = eps58;
+        strain[5] = eps59;
+        stress[3] = eps57*m6 + eps58*m7;
+        stress[4] = eps57*m7 + eps58*m6;
+        stress[5] = eps59*m8;
     }
     {   /* gauss-3x3 point 3 of 9: xi = 0.7745966692414834, eta = -0.7745966692414834, weight = 25/81 */
         const double J00 = gx_1_0 - 1.2*gx_2_1 + 0.6*gx_1_2 + 1.5491933384829668*gx_2_0
@@ -1651,21 +1590,23 @@ static inline void q8_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx8 = -0.2*Ji00 + 0.17459666924148337*Ji01;
         const double dNdy8 = -0.2*Ji10 + 0.17459666924148337*Ji11;
         const double q0 = alpha1*m4;
-        const double eps53 = q0 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4 - 0.5*dNdy3*u6
-            - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
-        const double eps54 = q0 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3 - 0.5*dNdx3*u5
-            - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
-        const double eps55 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+        const double q1 = 0.3872983346207417*alpha2*m5;
+        const double q2 = -0.3872983346207417*alpha3*m5;
+        const double eps57 = q0 + q1 + q2 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
+            - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
+        const double eps58 = q0 + q1 + q2 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
+            - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
+        const double eps59 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
             + dNdx8*u16 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
             + dNdy8*u15;
-        strain[6] = eps53;
-        strain[7] = eps54;
-        strain[8] = eps55;
-        stress[6] = eps53*m5 + eps54*m6;
-        stress[7] = eps53*m6 + eps54*m5;
-        stress[8] = eps55*m7;
+        strain[6] = eps57;
+        strain[7] = eps58;
+        strain[8] = eps59;
+        stress[6] = eps57*m6 + eps58*m7;
+        stress[7] = eps57*m7 + eps58*m6;
+        stress[8] = eps59*m8;
     }
     {   /* gauss-3x3 point 4 of 9: xi = -0.7745966692414834, eta = 0, weight = 40/81 */
         const double J00 = gx_1_0 - 1.5491933384829668*gx_2_0;
@@ -1699,21 +1640,22 @@ static inline void q8_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx8 = -0.5*Ji00;
         const double dNdy8 = -0.5*Ji10;
         const double q4 = alpha1*m4;
-        const double eps53 = q4 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4 - 0.5*dNdy3*u6
-            - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
-        const double eps54 = q4 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3 - 0.5*dNdx3*u5
-            - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
-        const double eps55 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+        const double q5 = -0.3872983346207417*alpha2*m5;
+        const double eps57 = q4 + q5 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
+            - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
+        const double eps58 = q4 + q5 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
+            - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
+        const double eps59 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
             + dNdx8*u16 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
             + dNdy8*u15;
-        strain[9] = eps53;
-        strain[10] = eps54;
-        strain[11] = eps55;
-        stress[9] = eps53*m5 + eps54*m6;
-        stress[10] = eps53*m6 + eps54*m5;
-        stress[11] = eps55*m7;
+        strain[9] = eps57;
+        strain[10] = eps58;
+        strain[11] = eps59;
+        stress[9] = eps57*m6 + eps58*m7;
+        stress[10] = eps57*m7 + eps58*m6;
+        stress[11] = eps59*m8;
     }
     {   /* gauss-3x3 point 5 of 9: xi = 0, eta = 0, weight = 64/81 */
         const double detJ = gx_1_0*gy_0_1 - gx_0_1*gy_1_0;
@@ -1731,18 +1673,18 @@ static inline void q8_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx8 = -0.5*Ji00;
         const double dNdy8 = -0.5*Ji10;
         const double q0 = alpha1*m4;
-        const double eps53 = q0 + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy5*u10
+        const double eps57 = q0 + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy5*u10
             - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
-        const double eps54 = q0 + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx5*u9
+        const double eps58 = q0 + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx5*u9
             - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
-        const double eps55 = dNdx5*u10 + dNdx6*u12 + dNdx7*u14 + dNdx8*u16 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
+        const double eps59 = dNdx5*u10 + dNdx6*u12 + dNdx7*u14 + dNdx8*u16 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
             + dNdy8*u15;
-        strain[12] = eps53;
-        strain[13] = eps54;
-        strain[14] = eps55;
-        stress[12] = eps53*m5 + eps54*m6;
-        stress[13] = eps53*m6 + eps54*m5;
-        stress[14] = eps55*m7;
+        strain[12] = eps57;
+        strain[13] = eps58;
+        strain[14] = eps59;
+        stress[12] = eps57*m6 + eps58*m7;
+        stress[13] = eps57*m7 + eps58*m6;
+        stress[14] = eps59*m8;
     }
     {   /* gauss-3x3 point 6 of 9: xi = 0.7745966692414834, eta = 0, weight = 40/81 */
         const double J00 = gx_1_0 + 1.5491933384829668*gx_2_0;
@@ -1776,21 +1718,22 @@ static inline void q8_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx8 = -0.5*Ji00;
         const double dNdy8 = -0.5*Ji10;
         const double q4 = alpha1*m4;
-        const double eps53 = q4 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4 - 0.5*dNdy3*u6
-            - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
-        const double eps54 = q4 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3 - 0.5*dNdx3*u5
-            - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
-        const double eps55 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+        const double q5 = 0.3872983346207417*alpha2*m5;
+        const double eps57 = q4 + q5 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
+            - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
+        const double eps58 = q4 + q5 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
+            - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
+        const double eps59 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
             + dNdx8*u16 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
             + dNdy8*u15;
-        strain[15] = eps53;
-        strain[16] = eps54;
-        strain[17] = eps55;
-        stress[15] = eps53*m5 + eps54*m6;
-        stress[16] = eps53*m6 + eps54*m5;
-        stress[17] = eps55*m7;
+        strain[15] = eps57;
+        strain[16] = eps58;
+        strain[17] = eps59;
+        stress[15] = eps57*m6 + eps58*m7;
+        stress[16] = eps57*m7 + eps58*m6;
+        stress[17] = eps59*m8;
     }
     {   /* gauss-3x3 point 7 of 9: xi = -0.7745966692414834, eta = 0.7745966692414834, weight = 25/81 */
         const double J00 = gx_1_0 - 1.2*gx_2_1 + 0.6*gx_1_2 + 0.7745966692414834*gx_1_1
@@ -1824,21 +1767,23 @@ static inline void q8_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx8 = -0.2*Ji00 - 1.3745966692414833*Ji01;
         const double dNdy8 = -0.2*Ji10 - 1.3745966692414833*Ji11;
         const double q0 = alpha1*m4;
-        const double eps53 = q0 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4 - 0.5*dNdy3*u6
-            - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
-        const double eps54 = q0 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3 - 0.5*dNdx3*u5
-            - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
-        const double eps55 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+        const double q1 = 0.3872983346207417*alpha3*m5;
+        const double q2 = -0.3872983346207417*alpha2*m5;
+        const double eps57 = q0 + q1 + q2 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
+            - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
+        const double eps58 = q0 + q1 + q2 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
+            - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
+        const double eps59 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
             + dNdx8*u16 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
             + dNdy8*u15;
-        strain[18] = eps53;
-        strain[19] = eps54;
-        strain[20] = eps55;
-        stress[18] = eps53*m5 + eps54*m6;
-        stress[19] = eps53*m6 + eps54*m5;
-        stress[20] = eps55*m7;
+        strain[18] = eps57;
+        strain[19] = eps58;
+        strain[20] = eps59;
+        stress[18] = eps57*m6 + eps58*m7;
+        stress[19] = eps57*m7 + eps58*m6;
+        stress[20] = eps59*m8;
     }
     {   /* gauss-3x3 point 8 of 9: xi = 0, eta = 0.7745966692414834, weight = 40/81 */
         const double J00 = gx_1_0 + 0.6*gx_1_2 + 0.7745966692414834*gx_1_1;
@@ -1872,21 +1817,22 @@ static inline void q8_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx8 = q2 - 0.2*Ji00;
         const double dNdy8 = q3 - 0.2*Ji10;
         const double q4 = alpha1*m4;
-        const double eps53 = q4 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4 - 0.5*dNdy3*u6
-            - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
-        const double eps54 = q4 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3 - 0.5*dNdx3*u5
-            - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
-        const double eps55 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+        const double q5 = 0.3872983346207417*alpha3*m5;
+        const double eps57 = q4 + q5 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
+            - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
+        const double eps58 = q4 + q5 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
+            - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
+        const double eps59 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
             + dNdx8*u16 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
             + dNdy8*u15;
-        strain[21] = eps53;
-        strain[22] = eps54;
-        strain[23] = eps55;
-        stress[21] = eps53*m5 + eps54*m6;
-        stress[22] = eps53*m6 + eps54*m5;
-        stress[23] = eps55*m7;
+        strain[21] = eps57;
+        strain[22] = eps58;
+        strain[23] = eps59;
+        stress[21] = eps57*m6 + eps58*m7;
+        stress[22] = eps57*m7 + eps58*m6;
+        stress[23] = eps59*m8;
     }
     {   /* gauss-3x3 point 9 of 9: xi = 0.7745966692414834, eta = 0.7745966692414834, weight = 25/81 */
         const double q0 = 0.7745966692414834*gx_1_1;
@@ -1918,21 +1864,23 @@ static inline void q8_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx8 = -0.2*Ji00 - 0.17459666924148337*Ji01;
         const double dNdy8 = -0.2*Ji10 - 0.17459666924148337*Ji11;
         const double q2 = alpha1*m4;
-        const double eps53 = q2 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4 - 0.5*dNdy3*u6
-            - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
-        const double eps54 = q2 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3 - 0.5*dNdx3*u5
-            - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
-        const double eps55 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+        const double q3 = 0.3872983346207417*alpha2*m5;
+        const double q4 = 0.3872983346207417*alpha3*m5;
+        const double eps57 = q2 + q3 + q4 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
+            - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
+        const double eps58 = q2 + q3 + q4 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
+            - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
+        const double eps59 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
             + dNdx8*u16 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
             + dNdy8*u15;
-        strain[24] = eps53;
-        strain[25] = eps54;
-        strain[26] = eps55;
-        stress[24] = eps53*m5 + eps54*m6;
-        stress[25] = eps53*m6 + eps54*m5;
-        stress[26] = eps55*m7;
+        strain[24] = eps57;
+        strain[25] = eps58;
+        strain[26] = eps59;
+        stress[24] = eps57*m6 + eps58*m7;
+        stress[25] = eps57*m7 + eps58*m6;
+        stress[26] = eps59*m8;
     }
 }
 

@@ -2,13 +2,13 @@
  * derive generated kernel: Q8 bbar plane-stress
  *
  * element      Q8, 8 nodes, 16 DOFs interleaved u1, v1, u2, v2, ...
- * formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed)
- *              [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
- * integration  B^T D_dev B: gauss-3x3 (9 points); B^T m (g): gauss-3x3 (9 points); -1/kappa
- *              (-V/kappa): gauss-3x3 (9 points)
- * internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+ * formulation  B-bar, dilatation projected on a linear pressure {1, xi, eta}: K_dev + kappa g^T
+ *              M_p^-1 g [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
+ * integration  B^T D_dev B: gauss-3x3 (9 points); B^T m pi (g): gauss-3x3 (9 points); -pi^T pi /
+ *              kappa (-M_p / kappa): gauss-3x3 (9 points)
+ * internal     3 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
  *              (unrolled factorisation of K_aa, no pivoting)
- * flops        stiffness 7052, validity 330, recovery 2842 per element (add, mul, div, sqrt)
+ * flops        stiffness 8749, validity 330, recovery 3971 per element (add, mul, div, sqrt)
  *
  * arguments (units-agnostic; any consistent set of units):
  *   xy      nodal coordinates, shape (n, 8, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
@@ -17,7 +17,7 @@
  *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
  *   t       thickness t (the out-of-plane thickness)
  *   u       nodal displacements for recovery, shape (n, 16), interleaved u1, v1, u2, v2, ...
- *   K       stiffness, shape (n, 16, 16), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1
+ *   K       stiffness, shape (n, 16, 16), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 3
  *           internal unknowns are condensed
  *   detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted
  *            or degenerate element

@@ -2,13 +2,13 @@
  * derive generated kernel: Q9 bbar plane-stress
  *
  * element      Q9, 9 nodes, 18 DOFs interleaved u1, v1, u2, v2, ...
- * formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed)
- *              [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
- * integration  B^T D_dev B: gauss-3x3 (9 points); B^T m (g): gauss-3x3 (9 points); -1/kappa
- *              (-V/kappa): gauss-3x3 (9 points)
- * internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+ * formulation  B-bar, dilatation projected on a linear pressure {1, xi, eta}: K_dev + kappa g^T
+ *              M_p^-1 g [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
+ * integration  B^T D_dev B: gauss-3x3 (9 points); B^T m pi (g): gauss-3x3 (9 points); -pi^T pi /
+ *              kappa (-M_p / kappa): gauss-3x3 (9 points)
+ * internal     3 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
  *              (unrolled factorisation of K_aa, no pivoting)
- * flops        stiffness 8643, validity 366, recovery 3395 per element (add, mul, div, sqrt)
+ * flops        stiffness 10644, validity 366, recovery 4355 per element (add, mul, div, sqrt)
  *
  * arguments (units-agnostic; any consistent set of units):
  *   xy      nodal coordinates, shape (n, 9, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
@@ -17,7 +17,7 @@
  *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
  *   t       thickness t (the out-of-plane thickness)
  *   u       nodal displacements for recovery, shape (n, 18), interleaved u1, v1, u2, v2, ...
- *   K       stiffness, shape (n, 18, 18), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1
+ *   K       stiffness, shape (n, 18, 18), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 3
  *           internal unknowns are condensed
  *   detJ_min validity: min det J over the points of gauss-3x3, shape (n,); <= 0 means an inverted
  *            or degenerate element
@@ -62,7 +62,7 @@
 
 #define NIN 18
 #define NK 324
-#define NMAT 11
+#define NMAT 12
 #define LANES 8
 #if defined(__GNUC__)
 /* inlined into the lane loop so that the loop over elements vectorises */
@@ -360,9 +360,10 @@ static inline void q9_bbar_plane_stress_material(double E, double nu, double t, 
     mat[5] = E/(2.0 + 2.0*nu);   /* m2 */
     mat[6] = -(-3.0 + 3.0*nu*nu)/(-E - 2.0*E*nu);   /* m3 */
     mat[7] = 0.5*(-3.0 + 3.0*nu*nu)/(-E - 2.0*E*nu);   /* m4 */
-    mat[8] = E/(1.0 - nu*nu);   /* m5 */
-    mat[9] = E*nu/(1.0 - nu*nu);   /* m6 */
-    mat[10] = E*(0.5 - 0.5*nu)/(1.0 - nu*nu);   /* m7 */
+    mat[8] = (-3.0 + 3.0*nu*nu)/(-E - 2.0*E*nu);   /* m5 */
+    mat[9] = E/(1.0 - nu*nu);   /* m6 */
+    mat[10] = E*nu/(1.0 - nu*nu);   /* m7 */
+    mat[11] = E*(0.5 - 0.5*nu)/(1.0 - nu*nu);   /* m8 */
 }
 
 /* stiffness of one element; xy[k * sx] is input k, K[k * sk] output k (row-major) */
@@ -438,10 +439,16 @@ DERIVE_INLINE void q9_bbar_plane_stress_stiffness_body(const double *restrict xy
     double K_12_14 = 0.0, K_12_15 = 0.0, K_12_16 = 0.0, K_12_17 = 0.0, K_13_13 = 0.0, K_13_14 = 0.0;
     double K_13_15 = 0.0, K_13_16 = 0.0, K_13_17 = 0.0, K_14_14 = 0.0, K_14_15 = 0.0, K_14_16 = 0.0;
     double K_14_17 = 0.0, K_15_15 = 0.0, K_15_16 = 0.0, K_15_17 = 0.0, K_16_16 = 0.0, K_16_17 = 0.0;
-    double K_17_17 = 0.0, A_0_0 = 0.0, A_1_0 = 0.0, A_2_0 = 0.0, A_3_0 = 0.0, A_4_0 = 0.0;
-    double A_5_0 = 0.0, A_6_0 = 0.0, A_7_0 = 0.0, A_8_0 = 0.0, A_9_0 = 0.0, A_10_0 = 0.0;
-    double A_11_0 = 0.0, A_12_0 = 0.0, A_13_0 = 0.0, A_14_0 = 0.0, A_15_0 = 0.0, A_16_0 = 0.0;
-    double A_17_0 = 0.0, H_0_0 = 0.0;
+    double K_17_17 = 0.0, A_0_0 = 0.0, A_0_1 = 0.0, A_0_2 = 0.0, A_1_0 = 0.0, A_1_1 = 0.0;
+    double A_1_2 = 0.0, A_2_0 = 0.0, A_2_1 = 0.0, A_2_2 = 0.0, A_3_0 = 0.0, A_3_1 = 0.0, A_3_2 = 0.0;
+    double A_4_0 = 0.0, A_4_1 = 0.0, A_4_2 = 0.0, A_5_0 = 0.0, A_5_1 = 0.0, A_5_2 = 0.0, A_6_0 = 0.0;
+    double A_6_1 = 0.0, A_6_2 = 0.0, A_7_0 = 0.0, A_7_1 = 0.0, A_7_2 = 0.0, A_8_0 = 0.0, A_8_1 = 0.0;
+    double A_8_2 = 0.0, A_9_0 = 0.0, A_9_1 = 0.0, A_9_2 = 0.0, A_10_0 = 0.0, A_10_1 = 0.0;
+    double A_10_2 = 0.0, A_11_0 = 0.0, A_11_1 = 0.0, A_11_2 = 0.0, A_12_0 = 0.0, A_12_1 = 0.0;
+    double A_12_2 = 0.0, A_13_0 = 0.0, A_13_1 = 0.0, A_13_2 = 0.0, A_14_0 = 0.0, A_14_1 = 0.0;
+    double A_14_2 = 0.0, A_15_0 = 0.0, A_15_1 = 0.0, A_15_2 = 0.0, A_16_0 = 0.0, A_16_1 = 0.0;
+    double A_16_2 = 0.0, A_17_0 = 0.0, A_17_1 = 0.0, A_17_2 = 0.0, H_0_0 = 0.0, H_0_1 = 0.0;
+    double H_0_2 = 0.0, H_1_1 = 0.0, H_1_2 = 0.0, H_2_2 = 0.0;
     for (int p = 0; p < 9; ++p) {   /* gauss-3x3: loop over the 9 points */
         const double c0 = KS0_c0[p];
         const double c1 = KS0_c1[p];
@@ -556,7 +563,11 @@ DERIVE_INLINE void q9_bbar_plane_stress_stiffness_body(const double *restrict xy
         const double T55 = dNdy9*s2;
         const double T56 = dNdy9*s1;
         const double T57 = dNdx9*s3;
-        const double s58 = m3*sc0;
+        const double T58 = sc0*xi;
+        const double T59 = eta*sc0;
+        const double s60 = m3*sc0;
+        const double T61 = s60*xi;
+        const double T62 = eta*s60;
         K_0_0 += T4*dNdx1 + T6*dNdy1;
         K_0_1 += T7*dNdx1 + T9*dNdy1;
         K_0_2 += T10*dNdx1 + T12*dNdy1;
@@ -729,369 +740,489 @@ DERIVE_INLINE void q9_bbar_plane_stress_stiffness_body(const double *restrict xy
         K_16_17 += T55*dNdx9 + T57*dNdy9;
         K_17_17 += T56*dNdy9 + T57*dNdx9;
         A_0_0 += dNdx1*sc0;
+        A_0_1 += T58*dNdx1;
+        A_0_2 += T59*dNdx1;
         A_1_0 += dNdy1*sc0;
+        A_1_1 += T58*dNdy1;
+        A_1_2 += T59*dNdy1;
         A_2_0 += dNdx2*sc0;
+        A_2_1 += T58*dNdx2;
+        A_2_2 += T59*dNdx2;
         A_3_0 += dNdy2*sc0;
+        A_3_1 += T58*dNdy2;
+        A_3_2 += T59*dNdy2;
         A_4_0 += dNdx3*sc0;
+        A_4_1 += T58*dNdx3;
+        A_4_2 += T59*dNdx3;
         A_5_0 += dNdy3*sc0;
+        A_5_1 += T58*dNdy3;
+        A_5_2 += T59*dNdy3;
         A_6_0 += dNdx4*sc0;
+        A_6_1 += T58*dNdx4;
+        A_6_2 += T59*dNdx4;
         A_7_0 += dNdy4*sc0;
+        A_7_1 += T58*dNdy4;
+        A_7_2 += T59*dNdy4;
         A_8_0 += dNdx5*sc0;
+        A_8_1 += T58*dNdx5;
+        A_8_2 += T59*dNdx5;
         A_9_0 += dNdy5*sc0;
+        A_9_1 += T58*dNdy5;
+        A_9_2 += T59*dNdy5;
         A_10_0 += dNdx6*sc0;
+        A_10_1 += T58*dNdx6;
+        A_10_2 += T59*dNdx6;
         A_11_0 += dNdy6*sc0;
+        A_11_1 += T58*dNdy6;
+        A_11_2 += T59*dNdy6;
         A_12_0 += dNdx7*sc0;
+        A_12_1 += T58*dNdx7;
+        A_12_2 += T59*dNdx7;
         A_13_0 += dNdy7*sc0;
+        A_13_1 += T58*dNdy7;
+        A_13_2 += T59*dNdy7;
         A_14_0 += dNdx8*sc0;
+        A_14_1 += T58*dNdx8;
+        A_14_2 += T59*dNdx8;
         A_15_0 += dNdy8*sc0;
+        A_15_1 += T58*dNdy8;
+        A_15_2 += T59*dNdy8;
         A_16_0 += dNdx9*sc0;
+        A_16_1 += T58*dNdx9;
+        A_16_2 += T59*dNdx9;
         A_17_0 += dNdy9*sc0;
-        H_0_0 += s58;
+        A_17_1 += T58*dNdy9;
+        A_17_2 += T59*dNdy9;
+        H_0_0 += s60;
+        H_0_1 += T61;
+        H_0_2 += T62;
+        H_1_1 += T61*xi;
+        H_1_2 += T62*xi;
+        H_2_2 += T62*eta;
     }
     /* static condensation of the internal unknowns */
     const double cid0 = 1.0/H_0_0;
+    const double cL1_0 = H_0_1*cid0;
+    const double cL2_0 = H_0_2*cid0;
+    const double cd1 = H_1_1 - H_0_0*cL1_0*cL1_0;
+    const double cid1 = 1.0/cd1;
+    const double cL2_1 = cid1*(H_1_2 - H_0_0*cL1_0*cL2_0);
+    const double cd2 = H_2_2 - H_0_0*cL2_0*cL2_0 - cd1*cL2_1*cL2_1;
+    const double cid2 = 1.0/cd2;
+    const double cy1_0 = A_0_1 - A_0_0*cL1_0;
+    const double cy2_0 = A_0_2 - A_0_0*cL2_0 - cL2_1*cy1_0;
+    const double cy1_1 = A_1_1 - A_1_0*cL1_0;
+    const double cy2_1 = A_1_2 - A_1_0*cL2_0 - cL2_1*cy1_1;
+    const double cy1_2 = A_2_1 - A_2_0*cL1_0;
+    const double cy2_2 = A_2_2 - A_2_0*cL2_0 - cL2_1*cy1_2;
+    const double cy1_3 = A_3_1 - A_3_0*cL1_0;
+    const double cy2_3 = A_3_2 - A_3_0*cL2_0 - cL2_1*cy1_3;
+    const double cy1_4 = A_4_1 - A_4_0*cL1_0;
+    const double cy2_4 = A_4_2 - A_4_0*cL2_0 - cL2_1*cy1_4;
+    const double cy1_5 = A_5_1 - A_5_0*cL1_0;
+    const double cy2_5 = A_5_2 - A_5_0*cL2_0 - cL2_1*cy1_5;
+    const double cy1_6 = A_6_1 - A_6_0*cL1_0;
+    const double cy2_6 = A_6_2 - A_6_0*cL2_0 - cL2_1*cy1_6;
+    const double cy1_7 = A_7_1 - A_7_0*cL1_0;
+    const double cy2_7 = A_7_2 - A_7_0*cL2_0 - cL2_1*cy1_7;
+    const double cy1_8 = A_8_1 - A_8_0*cL1_0;
+    const double cy2_8 = A_8_2 - A_8_0*cL2_0 - cL2_1*cy1_8;
+    const double cy1_9 = A_9_1 - A_9_0*cL1_0;
+    const double cy2_9 = A_9_2 - A_9_0*cL2_0 - cL2_1*cy1_9;
+    const double cy1_10 = A_10_1 - A_10_0*cL1_0;
+    const double cy2_10 = A_10_2 - A_10_0*cL2_0 - cL2_1*cy1_10;
+    const double cy1_11 = A_11_1 - A_11_0*cL1_0;
+    const double cy2_11 = A_11_2 - A_11_0*cL2_0 - cL2_1*cy1_11;
+    const double cy1_12 = A_12_1 - A_12_0*cL1_0;
+    const double cy2_12 = A_12_2 - A_12_0*cL2_0 - cL2_1*cy1_12;
+    const double cy1_13 = A_13_1 - A_13_0*cL1_0;
+    const double cy2_13 = A_13_2 - A_13_0*cL2_0 - cL2_1*cy1_13;
+    const double cy1_14 = A_14_1 - A_14_0*cL1_0;
+    const double cy2_14 = A_14_2 - A_14_0*cL2_0 - cL2_1*cy1_14;
+    const double cy1_15 = A_15_1 - A_15_0*cL1_0;
+    const double cy2_15 = A_15_2 - A_15_0*cL2_0 - cL2_1*cy1_15;
+    const double cy1_16 = A_16_1 - A_16_0*cL1_0;
+    const double cy2_16 = A_16_2 - A_16_0*cL2_0 - cL2_1*cy1_16;
+    const double cy1_17 = A_17_1 - A_17_0*cL1_0;
+    const double cy2_17 = A_17_2 - A_17_0*cL2_0 - cL2_1*cy1_17;
     const double cz0_0 = A_0_0*cid0;
+    const double cz1_0 = cid1*cy1_0;
+    const double cz2_0 = cid2*cy2_0;
     const double cz0_1 = A_1_0*cid0;
+    const double cz1_1 = cid1*cy1_1;
+    const double cz2_1 = cid2*cy2_1;
     const double cz0_2 = A_2_0*cid0;
+    const double cz1_2 = cid1*cy1_2;
+    const double cz2_2 = cid2*cy2_2;
     const double cz0_3 = A_3_0*cid0;
+    const double cz1_3 = cid1*cy1_3;
+    const double cz2_3 = cid2*cy2_3;
     const double cz0_4 = A_4_0*cid0;
+    const double cz1_4 = cid1*cy1_4;
+    const double cz2_4 = cid2*cy2_4;
     const double cz0_5 = A_5_0*cid0;
+    const double cz1_5 = cid1*cy1_5;
+    const double cz2_5 = cid2*cy2_5;
     const double cz0_6 = A_6_0*cid0;
+    const double cz1_6 = cid1*cy1_6;
+    const double cz2_6 = cid2*cy2_6;
     const double cz0_7 = A_7_0*cid0;
+    const double cz1_7 = cid1*cy1_7;
+    const double cz2_7 = cid2*cy2_7;
     const double cz0_8 = A_8_0*cid0;
+    const double cz1_8 = cid1*cy1_8;
+    const double cz2_8 = cid2*cy2_8;
     const double cz0_9 = A_9_0*cid0;
+    const double cz1_9 = cid1*cy1_9;
+    const double cz2_9 = cid2*cy2_9;
     const double cz0_10 = A_10_0*cid0;
+    const double cz1_10 = cid1*cy1_10;
+    const double cz2_10 = cid2*cy2_10;
     const double cz0_11 = A_11_0*cid0;
+    const double cz1_11 = cid1*cy1_11;
+    const double cz2_11 = cid2*cy2_11;
     const double cz0_12 = A_12_0*cid0;
+    const double cz1_12 = cid1*cy1_12;
+    const double cz2_12 = cid2*cy2_12;
     const double cz0_13 = A_13_0*cid0;
+    const double cz1_13 = cid1*cy1_13;
+    const double cz2_13 = cid2*cy2_13;
     const double cz0_14 = A_14_0*cid0;
+    const double cz1_14 = cid1*cy1_14;
+    const double cz2_14 = cid2*cy2_14;
     const double cz0_15 = A_15_0*cid0;
+    const double cz1_15 = cid1*cy1_15;
+    const double cz2_15 = cid2*cy2_15;
     const double cz0_16 = A_16_0*cid0;
+    const double cz1_16 = cid1*cy1_16;
+    const double cz2_16 = cid2*cy2_16;
     const double cz0_17 = A_17_0*cid0;
-    K[0 * sk] = K_0_0 - A_0_0*cz0_0;
-    K[1 * sk] = K_0_1 - A_1_0*cz0_0;
-    K[2 * sk] = K_0_2 - A_2_0*cz0_0;
-    K[3 * sk] = K_0_3 - A_3_0*cz0_0;
-    K[4 * sk] = K_0_4 - A_4_0*cz0_0;
-    K[5 * sk] = K_0_5 - A_5_0*cz0_0;
-    K[6 * sk] = K_0_6 - A_6_0*cz0_0;
-    K[7 * sk] = K_0_7 - A_7_0*cz0_0;
-    K[8 * sk] = K_0_8 - A_8_0*cz0_0;
-    K[9 * sk] = K_0_9 - A_9_0*cz0_0;
-    K[10 * sk] = K_0_10 - A_10_0*cz0_0;
-    K[11 * sk] = K_0_11 - A_11_0*cz0_0;
-    K[12 * sk] = K_0_12 - A_12_0*cz0_0;
-    K[13 * sk] = K_0_13 - A_13_0*cz0_0;
-    K[14 * sk] = K_0_14 - A_14_0*cz0_0;
-    K[15 * sk] = K_0_15 - A_15_0*cz0_0;
-    K[16 * sk] = K_0_16 - A_16_0*cz0_0;
-    K[17 * sk] = K_0_17 - A_17_0*cz0_0;
-    K[18 * sk] = K_0_1 - A_1_0*cz0_0;
-    K[19 * sk] = K_1_1 - A_1_0*cz0_1;
-    K[20 * sk] = K_1_2 - A_2_0*cz0_1;
-    K[21 * sk] = K_1_3 - A_3_0*cz0_1;
-    K[22 * sk] = K_1_4 - A_4_0*cz0_1;
-    K[23 * sk] = K_1_5 - A_5_0*cz0_1;
-    K[24 * sk] = K_1_6 - A_6_0*cz0_1;
-    K[25 * sk] = K_1_7 - A_7_0*cz0_1;
-    K[26 * sk] = K_1_8 - A_8_0*cz0_1;
-    K[27 * sk] = K_1_9 - A_9_0*cz0_1;
-    K[28 * sk] = K_1_10 - A_10_0*cz0_1;
-    K[29 * sk] = K_1_11 - A_11_0*cz0_1;
-    K[30 * sk] = K_1_12 - A_12_0*cz0_1;
-    K[31 * sk] = K_1_13 - A_13_0*cz0_1;
-    K[32 * sk] = K_1_14 - A_14_0*cz0_1;
-    K[33 * sk] = K_1_15 - A_15_0*cz0_1;
-    K[34 * sk] = K_1_16 - A_16_0*cz0_1;
-    K[35 * sk] = K_1_17 - A_17_0*cz0_1;
-    K[36 * sk] = K_0_2 - A_2_0*cz0_0;
-    K[37 * sk] = K_1_2 - A_2_0*cz0_1;
-    K[38 * sk] = K_2_2 - A_2_0*cz0_2;
-    K[39 * sk] = K_2_3 - A_3_0*cz0_2;
-    K[40 * sk] = K_2_4 - A_4_0*cz0_2;
-    K[41 * sk] = K_2_5 - A_5_0*cz0_2;
-    K[42 * sk] = K_2_6 - A_6_0*cz0_2;
-    K[43 * sk] = K_2_7 - A_7_0*cz0_2;
-    K[44 * sk] = K_2_8 - A_8_0*cz0_2;
-    K[45 * sk] = K_2_9 - A_9_0*cz0_2;
-    K[46 * sk] = K_2_10 - A_10_0*cz0_2;
-    K[47 * sk] = K_2_11 - A_11_0*cz0_2;
-    K[48 * sk] = K_2_12 - A_12_0*cz0_2;
-    K[49 * sk] = K_2_13 - A_13_0*cz0_2;
-    K[50 * sk] = K_2_14 - A_14_0*cz0_2;
-    K[51 * sk] = K_2_15 - A_15_0*cz0_2;
-    K[52 * sk] = K_2_16 - A_16_0*cz0_2;
-    K[53 * sk] = K_2_17 - A_17_0*cz0_2;
-    K[54 * sk] = K_0_3 - A_3_0*cz0_0;
-    K[55 * sk] = K_1_3 - A_3_0*cz0_1;
-    K[56 * sk] = K_2_3 - A_3_0*cz0_2;
-    K[57 * sk] = K_3_3 - A_3_0*cz0_3;
-    K[58 * sk] = K_3_4 - A_4_0*cz0_3;
-    K[59 * sk] = K_3_5 - A_5_0*cz0_3;
-    K[60 * sk] = K_3_6 - A_6_0*cz0_3;
-    K[61 * sk] = K_3_7 - A_7_0*cz0_3;
-    K[62 * sk] = K_3_8 - A_8_0*cz0_3;
-    K[63 * sk] = K_3_9 - A_9_0*cz0_3;
-    K[64 * sk] = K_3_10 - A_10_0*cz0_3;
-    K[65 * sk] = K_3_11 - A_11_0*cz0_3;
-    K[66 * sk] = K_3_12 - A_12_0*cz0_3;
-    K[67 * sk] = K_3_13 - A_13_0*cz0_3;
-    K[68 * sk] = K_3_14 - A_14_0*cz0_3;
-    K[69 * sk] = K_3_15 - A_15_0*cz0_3;
-    K[70 * sk] = K_3_16 - A_16_0*cz0_3;
-    K[71 * sk] = K_3_17 - A_17_0*cz0_3;
-    K[72 * sk] = K_0_4 - A_4_0*cz0_0;
-    K[73 * sk] = K_1_4 - A_4_0*cz0_1;
-    K[74 * sk] = K_2_4 - A_4_0*cz0_2;
-    K[75 * sk] = K_3_4 - A_4_0*cz0_3;
-    K[76 * sk] = K_4_4 - A_4_0*cz0_4;
-    K[77 * sk] = K_4_5 - A_5_0*cz0_4;
-    K[78 * sk] = K_4_6 - A_6_0*cz0_4;
-    K[79 * sk] = K_4_7 - A_7_0*cz0_4;
-    K[80 * sk] = K_4_8 - A_8_0*cz0_4;
-    K[81 * sk] = K_4_9 - A_9_0*cz0_4;
-    K[82 * sk] = K_4_10 - A_10_0*cz0_4;
-    K[83 * sk] = K_4_11 - A_11_0*cz0_4;
-    K[84 * sk] = K_4_12 - A_12_0*cz0_4;
-    K[85 * sk] = K_4_13 - A_13_0*cz0_4;
-    K[86 * sk] = K_4_14 - A_14_0*cz0_4;
-    K[87 * sk] = K_4_15 - A_15_0*cz0_4;
-    K[88 * sk] = K_4_16 - A_16_0*cz0_4;
-    K[89 * sk] = K_4_17 - A_17_0*cz0_4;
-    K[90 * sk] = K_0_5 - A_5_0*cz0_0;
-    K[91 * sk] = K_1_5 - A_5_0*cz0_1;
-    K[92 * sk] = K_2_5 - A_5_0*cz0_2;
-    K[93 * sk] = K_3_5 - A_5_0*cz0_3;
-    K[94 * sk] = K_4_5 - A_5_0*cz0_4;
-    K[95 * sk] = K_5_5 - A_5_0*cz0_5;
-    K[96 * sk] = K_5_6 - A_6_0*cz0_5;
-    K[97 * sk] = K_5_7 - A_7_0*cz0_5;
-    K[98 * sk] = K_5_8 - A_8_0*cz0_5;
-    K[99 * sk] = K_5_9 - A_9_0*cz0_5;
-    K[100 * sk] = K_5_10 - A_10_0*cz0_5;
-    K[101 * sk] = K_5_11 - A_11_0*cz0_5;
-    K[102 * sk] = K_5_12 - A_12_0*cz0_5;
-    K[103 * sk] = K_5_13 - A_13_0*cz0_5;
-    K[104 * sk] = K_5_14 - A_14_0*cz0_5;
-    K[105 * sk] = K_5_15 - A_15_0*cz0_5;
-    K[106 * sk] = K_5_16 - A_16_0*cz0_5;
-    K[107 * sk] = K_5_17 - A_17_0*cz0_5;
-    K[108 * sk] = K_0_6 - A_6_0*cz0_0;
-    K[109 * sk] = K_1_6 - A_6_0*cz0_1;
-    K[110 * sk] = K_2_6 - A_6_0*cz0_2;
-    K[111 * sk] = K_3_6 - A_6_0*cz0_3;
-    K[112 * sk] = K_4_6 - A_6_0*cz0_4;
-    K[113 * sk] = K_5_6 - A_6_0*cz0_5;
-    K[114 * sk] = K_6_6 - A_6_0*cz0_6;
-    K[115 * sk] = K_6_7 - A_7_0*cz0_6;
-    K[116 * sk] = K_6_8 - A_8_0*cz0_6;
-    K[117 * sk] = K_6_9 - A_9_0*cz0_6;
-    K[118 * sk] = K_6_10 - A_10_0*cz0_6;
-    K[119 * sk] = K_6_11 - A_11_0*cz0_6;
-    K[120 * sk] = K_6_12 - A_12_0*cz0_6;
-    K[121 * sk] = K_6_13 - A_13_0*cz0_6;
-    K[122 * sk] = K_6_14 - A_14_0*cz0_6;
-    K[123 * sk] = K_6_15 - A_15_0*cz0_6;
-    K[124 * sk] = K_6_16 - A_16_0*cz0_6;
-    K[125 * sk] = K_6_17 - A_17_0*cz0_6;
-    K[126 * sk] = K_0_7 - A_7_0*cz0_0;
-    K[127 * sk] = K_1_7 - A_7_0*cz0_1;
-    K[128 * sk] = K_2_7 - A_7_0*cz0_2;
-    K[129 * sk] = K_3_7 - A_7_0*cz0_3;
-    K[130 * sk] = K_4_7 - A_7_0*cz0_4;
-    K[131 * sk] = K_5_7 - A_7_0*cz0_5;
-    K[132 * sk] = K_6_7 - A_7_0*cz0_6;
-    K[133 * sk] = K_7_7 - A_7_0*cz0_7;
-    K[134 * sk] = K_7_8 - A_8_0*cz0_7;
-    K[135 * sk] = K_7_9 - A_9_0*cz0_7;
-    K[136 * sk] = K_7_10 - A_10_0*cz0_7;
-    K[137 * sk] = K_7_11 - A_11_0*cz0_7;
-    K[138 * sk] = K_7_12 - A_12_0*cz0_7;
-    K[139 * sk] = K_7_13 - A_13_0*cz0_7;
-    K[140 * sk] = K_7_14 - A_14_0*cz0_7;
-    K[141 * sk] = K_7_15 - A_15_0*cz0_7;
-    K[142 * sk] = K_7_16 - A_16_0*cz0_7;
-    K[143 * sk] = K_7_17 - A_17_0*cz0_7;
-    K[144 * sk] = K_0_8 - A_8_0*cz0_0;
-    K[145 * sk] = K_1_8 - A_8_0*cz0_1;
-    K[146 * sk] = K_2_8 - A_8_0*cz0_2;
-    K[147 * sk] = K_3_8 - A_8_0*cz0_3;
-    K[148 * sk] = K_4_8 - A_8_0*cz0_4;
-    K[149 * sk] = K_5_8 - A_8_0*cz0_5;
-    K[150 * sk] = K_6_8 - A_8_0*cz0_6;
-    K[151 * sk] = K_7_8 - A_8_0*cz0_7;
-    K[152 * sk] = K_8_8 - A_8_0*cz0_8;
-    K[153 * sk] = K_8_9 - A_9_0*cz0_8;
-    K[154 * sk] = K_8_10 - A_10_0*cz0_8;
-    K[155 * sk] = K_8_11 - A_11_0*cz0_8;
-    K[156 * sk] = K_8_12 - A_12_0*cz0_8;
-    K[157 * sk] = K_8_13 - A_13_0*cz0_8;
-    K[158 * sk] = K_8_14 - A_14_0*cz0_8;
-    K[159 * sk] = K_8_15 - A_15_0*cz0_8;
-    K[160 * sk] = K_8_16 - A_16_0*cz0_8;
-    K[161 * sk] = K_8_17 - A_17_0*cz0_8;
-    K[162 * sk] = K_0_9 - A_9_0*cz0_0;
-    K[163 * sk] = K_1_9 - A_9_0*cz0_1;
-    K[164 * sk] = K_2_9 - A_9_0*cz0_2;
-    K[165 * sk] = K_3_9 - A_9_0*cz0_3;
-    K[166 * sk] = K_4_9 - A_9_0*cz0_4;
-    K[167 * sk] = K_5_9 - A_9_0*cz0_5;
-    K[168 * sk] = K_6_9 - A_9_0*cz0_6;
-    K[169 * sk] = K_7_9 - A_9_0*cz0_7;
-    K[170 * sk] = K_8_9 - A_9_0*cz0_8;
-    K[171 * sk] = K_9_9 - A_9_0*cz0_9;
-    K[172 * sk] = K_9_10 - A_10_0*cz0_9;
-    K[173 * sk] = K_9_11 - A_11_0*cz0_9;
-    K[174 * sk] = K_9_12 - A_12_0*cz0_9;
-    K[175 * sk] = K_9_13 - A_13_0*cz0_9;
-    K[176 * sk] = K_9_14 - A_14_0*cz0_9;
-    K[177 * sk] = K_9_15 - A_15_0*cz0_9;
-    K[178 * sk] = K_9_16 - A_16_0*cz0_9;
-    K[179 * sk] = K_9_17 - A_17_0*cz0_9;
-    K[180 * sk] = K_0_10 - A_10_0*cz0_0;
-    K[181 * sk] = K_1_10 - A_10_0*cz0_1;
-    K[182 * sk] = K_2_10 - A_10_0*cz0_2;
-    K[183 * sk] = K_3_10 - A_10_0*cz0_3;
-    K[184 * sk] = K_4_10 - A_10_0*cz0_4;
-    K[185 * sk] = K_5_10 - A_10_0*cz0_5;
-    K[186 * sk] = K_6_10 - A_10_0*cz0_6;
-    K[187 * sk] = K_7_10 - A_10_0*cz0_7;
-    K[188 * sk] = K_8_10 - A_10_0*cz0_8;
-    K[189 * sk] = K_9_10 - A_10_0*cz0_9;
-    K[190 * sk] = K_10_10 - A_10_0*cz0_10;
-    K[191 * sk] = K_10_11 - A_11_0*cz0_10;
-    K[192 * sk] = K_10_12 - A_12_0*cz0_10;
-    K[193 * sk] = K_10_13 - A_13_0*cz0_10;
-    K[194 * sk] = K_10_14 - A_14_0*cz0_10;
-    K[195 * sk] = K_10_15 - A_15_0*cz0_10;
-    K[196 * sk] = K_10_16 - A_16_0*cz0_10;
-    K[197 * sk] = K_10_17 - A_17_0*cz0_10;
-    K[198 * sk] = K_0_11 - A_11_0*cz0_0;
-    K[199 * sk] = K_1_11 - A_11_0*cz0_1;
-    K[200 * sk] = K_2_11 - A_11_0*cz0_2;
-    K[201 * sk] = K_3_11 - A_11_0*cz0_3;
-    K[202 * sk] = K_4_11 - A_11_0*cz0_4;
-    K[203 * sk] = K_5_11 - A_11_0*cz0_5;
-    K[204 * sk] = K_6_11 - A_11_0*cz0_6;
-    K[205 * sk] = K_7_11 - A_11_0*cz0_7;
-    K[206 * sk] = K_8_11 - A_11_0*cz0_8;
-    K[207 * sk] = K_9_11 - A_11_0*cz0_9;
-    K[208 * sk] = K_10_11 - A_11_0*cz0_10;
-    K[209 * sk] = K_11_11 - A_11_0*cz0_11;
-    K[210 * sk] = K_11_12 - A_12_0*cz0_11;
-    K[211 * sk] = K_11_13 - A_13_0*cz0_11;
-    K[212 * sk] = K_11_14 - A_14_0*cz0_11;
-    K[213 * sk] = K_11_15 - A_15_0*cz0_11;
-    K[214 * sk] = K_11_16 - A_16_0*cz0_11;
-    K[215 * sk] = K_11_17 - A_17_0*cz0_11;
-    K[216 * sk] = K_0_12 - A_12_0*cz0_0;
-    K[217 * sk] = K_1_12 - A_12_0*cz0_1;
-    K[218 * sk] = K_2_12 - A_12_0*cz0_2;
-    K[219 * sk] = K_3_12 - A_12_0*cz0_3;
-    K[220 * sk] = K_4_12 - A_12_0*cz0_4;
-    K[221 * sk] = K_5_12 - A_12_0*cz0_5;
-    K[222 * sk] = K_6_12 - A_12_0*cz0_6;
-    K[223 * sk] = K_7_12 - A_12_0*cz0_7;
-    K[224 * sk] = K_8_12 - A_12_0*cz0_8;
-    K[225 * sk] = K_9_12 - A_12_0*cz0_9;
-    K[226 * sk] = K_10_12 - A_12_0*cz0_10;
-    K[227 * sk] = K_11_12 - A_12_0*cz0_11;
-    K[228 * sk] = K_12_12 - A_12_0*cz0_12;
-    K[229 * sk] = K_12_13 - A_13_0*cz0_12;
-    K[230 * sk] = K_12_14 - A_14_0*cz0_12;
-    K[231 * sk] = K_12_15 - A_15_0*cz0_12;
-    K[232 * sk] = K_12_16 - A_16_0*cz0_12;
-    K[233 * sk] = K_12_17 - A_17_0*cz0_12;
-    K[234 * sk] = K_0_13 - A_13_0*cz0_0;
-    K[235 * sk] = K_1_13 - A_13_0*cz0_1;
-    K[236 * sk] = K_2_13 - A_13_0*cz0_2;
-    K[237 * sk] = K_3_13 - A_13_0*cz0_3;
-    K[238 * sk] = K_4_13 - A_13_0*cz0_4;
-    K[239 * sk] = K_5_13 - A_13_0*cz0_5;
-    K[240 * sk] = K_6_13 - A_13_0*cz0_6;
-    K[241 * sk] = K_7_13 - A_13_0*cz0_7;
-    K[242 * sk] = K_8_13 - A_13_0*cz0_8;
-    K[243 * sk] = K_9_13 - A_13_0*cz0_9;
-    K[244 * sk] = K_10_13 - A_13_0*cz0_10;
-    K[245 * sk] = K_11_13 - A_13_0*cz0_11;
-    K[246 * sk] = K_12_13 - A_13_0*cz0_12;
-    K[247 * sk] = K_13_13 - A_13_0*cz0_13;
-    K[248 * sk] = K_13_14 - A_14_0*cz0_13;
-    K[249 * sk] = K_13_15 - A_15_0*cz0_13;
-    K[250 * sk] = K_13_16 - A_16_0*cz0_13;
-    K[251 * sk] = K_13_17 - A_17_0*cz0_13;
-    K[252 * sk] = K_0_14 - A_14_0*cz0_0;
-    K[253 * sk] = K_1_14 - A_14_0*cz0_1;
-    K[254 * sk] = K_2_14 - A_14_0*cz0_2;
-    K[255 * sk] = K_3_14 - A_14_0*cz0_3;
-    K[256 * sk] = K_4_14 - A_14_0*cz0_4;
-    K[257 * sk] = K_5_14 - A_14_0*cz0_5;
-    K[258 * sk] = K_6_14 - A_14_0*cz0_6;
-    K[259 * sk] = K_7_14 - A_14_0*cz0_7;
-    K[260 * sk] = K_8_14 - A_14_0*cz0_8;
-    K[261 * sk] = K_9_14 - A_14_0*cz0_9;
-    K[262 * sk] = K_10_14 - A_14_0*cz0_10;
-    K[263 * sk] = K_11_14 - A_14_0*cz0_11;
-    K[264 * sk] = K_12_14 - A_14_0*cz0_12;
-    K[265 * sk] = K_13_14 - A_14_0*cz0_13;
-    K[266 * sk] = K_14_14 - A_14_0*cz0_14;
-    K[267 * sk] = K_14_15 - A_15_0*cz0_14;
-    K[268 * sk] = K_14_16 - A_16_0*cz0_14;
-    K[269 * sk] = K_14_17 - A_17_0*cz0_14;
-    K[270 * sk] = K_0_15 - A_15_0*cz0_0;
-    K[271 * sk] = K_1_15 - A_15_0*cz0_1;
-    K[272 * sk] = K_2_15 - A_15_0*cz0_2;
-    K[273 * sk] = K_3_15 - A_15_0*cz0_3;
-    K[274 * sk] = K_4_15 - A_15_0*cz0_4;
-    K[275 * sk] = K_5_15 - A_15_0*cz0_5;
-    K[276 * sk] = K_6_15 - A_15_0*cz0_6;
-    K[277 * sk] = K_7_15 - A_15_0*cz0_7;
-    K[278 * sk] = K_8_15 - A_15_0*cz0_8;
-    K[279 * sk] = K_9_15 - A_15_0*cz0_9;
-    K[280 * sk] = K_10_15 - A_15_0*cz0_10;
-    K[281 * sk] = K_11_15 - A_15_0*cz0_11;
-    K[282 * sk] = K_12_15 - A_15_0*cz0_12;
-    K[283 * sk] = K_13_15 - A_15_0*cz0_13;
-    K[284 * sk] = K_14_15 - A_15_0*cz0_14;
-    K[285 * sk] = K_15_15 - A_15_0*cz0_15;
-    K[286 * sk] = K_15_16 - A_16_0*cz0_15;
-    K[287 * sk] = K_15_17 - A_17_0*cz0_15;
-    K[288 * sk] = K_0_16 - A_16_0*cz0_0;
-    K[289 * sk] = K_1_16 - A_16_0*cz0_1;
-    K[290 * sk] = K_2_16 - A_16_0*cz0_2;
-    K[291 * sk] = K_3_16 - A_16_0*cz0_3;
-    K[292 * sk] = K_4_16 - A_16_0*cz0_4;
-    K[293 * sk] = K_5_16 - A_16_0*cz0_5;
-    K[294 * sk] = K_6_16 - A_16_0*cz0_6;
-    K[295 * sk] = K_7_16 - A_16_0*cz0_7;
-    K[296 * sk] = K_8_16 - A_16_0*cz0_8;
-    K[297 * sk] = K_9_16 - A_16_0*cz0_9;
-    K[298 * sk] = K_10_16 - A_16_0*cz0_10;
-    K[299 * sk] = K_11_16 - A_16_0*cz0_11;
-    K[300 * sk] = K_12_16 - A_16_0*cz0_12;
-    K[301 * sk] = K_13_16 - A_16_0*cz0_13;
-    K[302 * sk] = K_14_16 - A_16_0*cz0_14;
-    K[303 * sk] = K_15_16 - A_16_0*cz0_15;
-    K[304 * sk] = K_16_16 - A_16_0*cz0_16;
-    K[305 * sk] = K_16_17 - A_17_0*cz0_16;
-    K[306 * sk] = K_0_17 - A_17_0*cz0_0;
-    K[307 * sk] = K_1_17 - A_17_0*cz0_1;
-    K[308 * sk] = K_2_17 - A_17_0*cz0_2;
-    K[309 * sk] = K_3_17 - A_17_0*cz0_3;
-    K[310 * sk] = K_4_17 - A_17_0*cz0_4;
-    K[311 * sk] = K_5_17 - A_17_0*cz0_5;
-    K[312 * sk] = K_6_17 - A_17_0*cz0_6;
-    K[313 * sk] = K_7_17 - A_17_0*cz0_7;
-    K[314 * sk] = K_8_17 - A_17_0*cz0_8;
-    K[315 * sk] = K_9_17 - A_17_0*cz0_9;
-    K[316 * sk] = K_10_17 - A_17_0*cz0_10;
-    K[317 * sk] = K_11_17 - A_17_0*cz0_11;
-    K[318 * sk] = K_12_17 - A_17_0*cz0_12;
-    K[319 * sk] = K_13_17 - A_17_0*cz0_13;
-    K[320 * sk] = K_14_17 - A_17_0*cz0_14;
-    K[321 * sk] = K_15_17 - A_17_0*cz0_15;
-    K[322 * sk] = K_16_17 - A_17_0*cz0_16;
-    K[323 * sk] = K_17_17 - A_17_0*cz0_17;
+    const double cz1_17 = cid1*cy1_17;
+    const double cz2_17 = cid2*cy2_17;
+    K[0 * sk] = K_0_0 - A_0_0*cz0_0 - cy1_0*cz1_0 - cy2_0*cz2_0;
+    K[1 * sk] = K_0_1 - A_1_0*cz0_0 - cy1_1*cz1_0 - cy2_1*cz2_0;
+    K[2 * sk] = K_0_2 - A_2_0*cz0_0 - cy1_2*cz1_0 - cy2_2*cz2_0;
+    K[3 * sk] = K_0_3 - A_3_0*cz0_0 - cy1_3*cz1_0 - cy2_3*cz2_0;
+    K[4 * sk] = K_0_4 - A_4_0*cz0_0 - cy1_4*cz1_0 - cy2_4*cz2_0;
+    K[5 * sk] = K_0_5 - A_5_0*cz0_0 - cy1_5*cz1_0 - cy2_5*cz2_0;
+    K[6 * sk] = K_0_6 - A_6_0*cz0_0 - cy1_6*cz1_0 - cy2_6*cz2_0;
+    K[7 * sk] = K_0_7 - A_7_0*cz0_0 - cy1_7*cz1_0 - cy2_7*cz2_0;
+    K[8 * sk] = K_0_8 - A_8_0*cz0_0 - cy1_8*cz1_0 - cy2_8*cz2_0;
+    K[9 * sk] = K_0_9 - A_9_0*cz0_0 - cy1_9*cz1_0 - cy2_9*cz2_0;
+    K[10 * sk] = K_0_10 - A_10_0*cz0_0 - cy1_10*cz1_0 - cy2_10*cz2_0;
+    K[11 * sk] = K_0_11 - A_11_0*cz0_0 - cy1_11*cz1_0 - cy2_11*cz2_0;
+    K[12 * sk] = K_0_12 - A_12_0*cz0_0 - cy1_12*cz1_0 - cy2_12*cz2_0;
+    K[13 * sk] = K_0_13 - A_13_0*cz0_0 - cy1_13*cz1_0 - cy2_13*cz2_0;
+    K[14 * sk] = K_0_14 - A_14_0*cz0_0 - cy1_14*cz1_0 - cy2_14*cz2_0;
+    K[15 * sk] = K_0_15 - A_15_0*cz0_0 - cy1_15*cz1_0 - cy2_15*cz2_0;
+    K[16 * sk] = K_0_16 - A_16_0*cz0_0 - cy1_16*cz1_0 - cy2_16*cz2_0;
+    K[17 * sk] = K_0_17 - A_17_0*cz0_0 - cy1_17*cz1_0 - cy2_17*cz2_0;
+    K[18 * sk] = K_0_1 - A_1_0*cz0_0 - cy1_1*cz1_0 - cy2_1*cz2_0;
+    K[19 * sk] = K_1_1 - A_1_0*cz0_1 - cy1_1*cz1_1 - cy2_1*cz2_1;
+    K[20 * sk] = K_1_2 - A_2_0*cz0_1 - cy1_2*cz1_1 - cy2_2*cz2_1;
+    K[21 * sk] = K_1_3 - A_3_0*cz0_1 - cy1_3*cz1_1 - cy2_3*cz2_1;
+    K[22 * sk] = K_1_4 - A_4_0*cz0_1 - cy1_4*cz1_1 - cy2_4*cz2_1;
+    K[23 * sk] = K_1_5 - A_5_0*cz0_1 - cy1_5*cz1_1 - cy2_5*cz2_1;
+    K[24 * sk] = K_1_6 - A_6_0*cz0_1 - cy1_6*cz1_1 - cy2_6*cz2_1;
+    K[25 * sk] = K_1_7 - A_7_0*cz0_1 - cy1_7*cz1_1 - cy2_7*cz2_1;
+    K[26 * sk] = K_1_8 - A_8_0*cz0_1 - cy1_8*cz1_1 - cy2_8*cz2_1;
+    K[27 * sk] = K_1_9 - A_9_0*cz0_1 - cy1_9*cz1_1 - cy2_9*cz2_1;
+    K[28 * sk] = K_1_10 - A_10_0*cz0_1 - cy1_10*cz1_1 - cy2_10*cz2_1;
+    K[29 * sk] = K_1_11 - A_11_0*cz0_1 - cy1_11*cz1_1 - cy2_11*cz2_1;
+    K[30 * sk] = K_1_12 - A_12_0*cz0_1 - cy1_12*cz1_1 - cy2_12*cz2_1;
+    K[31 * sk] = K_1_13 - A_13_0*cz0_1 - cy1_13*cz1_1 - cy2_13*cz2_1;
+    K[32 * sk] = K_1_14 - A_14_0*cz0_1 - cy1_14*cz1_1 - cy2_14*cz2_1;
+    K[33 * sk] = K_1_15 - A_15_0*cz0_1 - cy1_15*cz1_1 - cy2_15*cz2_1;
+    K[34 * sk] = K_1_16 - A_16_0*cz0_1 - cy1_16*cz1_1 - cy2_16*cz2_1;
+    K[35 * sk] = K_1_17 - A_17_0*cz0_1 - cy1_17*cz1_1 - cy2_17*cz2_1;
+    K[36 * sk] = K_0_2 - A_2_0*cz0_0 - cy1_2*cz1_0 - cy2_2*cz2_0;
+    K[37 * sk] = K_1_2 - A_2_0*cz0_1 - cy1_2*cz1_1 - cy2_2*cz2_1;
+    K[38 * sk] = K_2_2 - A_2_0*cz0_2 - cy1_2*cz1_2 - cy2_2*cz2_2;
+    K[39 * sk] = K_2_3 - A_3_0*cz0_2 - cy1_3*cz1_2 - cy2_3*cz2_2;
+    K[40 * sk] = K_2_4 - A_4_0*cz0_2 - cy1_4*cz1_2 - cy2_4*cz2_2;
+    K[41 * sk] = K_2_5 - A_5_0*cz0_2 - cy1_5*cz1_2 - cy2_5*cz2_2;
+    K[42 * sk] = K_2_6 - A_6_0*cz0_2 - cy1_6*cz1_2 - cy2_6*cz2_2;
+    K[43 * sk] = K_2_7 - A_7_0*cz0_2 - cy1_7*cz1_2 - cy2_7*cz2_2;
+    K[44 * sk] = K_2_8 - A_8_0*cz0_2 - cy1_8*cz1_2 - cy2_8*cz2_2;
+    K[45 * sk] = K_2_9 - A_9_0*cz0_2 - cy1_9*cz1_2 - cy2_9*cz2_2;
+    K[46 * sk] = K_2_10 - A_10_0*cz0_2 - cy1_10*cz1_2 - cy2_10*cz2_2;
+    K[47 * sk] = K_2_11 - A_11_0*cz0_2 - cy1_11*cz1_2 - cy2_11*cz2_2;
+    K[48 * sk] = K_2_12 - A_12_0*cz0_2 - cy1_12*cz1_2 - cy2_12*cz2_2;
+    K[49 * sk] = K_2_13 - A_13_0*cz0_2 - cy1_13*cz1_2 - cy2_13*cz2_2;
+    K[50 * sk] = K_2_14 - A_14_0*cz0_2 - cy1_14*cz1_2 - cy2_14*cz2_2;
+    K[51 * sk] = K_2_15 - A_15_0*cz0_2 - cy1_15*cz1_2 - cy2_15*cz2_2;
+    K[52 * sk] = K_2_16 - A_16_0*cz0_2 - cy1_16*cz1_2 - cy2_16*cz2_2;
+    K[53 * sk] = K_2_17 - A_17_0*cz0_2 - cy1_17*cz1_2 - cy2_17*cz2_2;
+    K[54 * sk] = K_0_3 - A_3_0*cz0_0 - cy1_3*cz1_0 - cy2_3*cz2_0;
+    K[55 * sk] = K_1_3 - A_3_0*cz0_1 - cy1_3*cz1_1 - cy2_3*cz2_1;
+    K[56 * sk] = K_2_3 - A_3_0*cz0_2 - cy1_3*cz1_2 - cy2_3*cz2_2;
+    K[57 * sk] = K_3_3 - A_3_0*cz0_3 - cy1_3*cz1_3 - cy2_3*cz2_3;
+    K[58 * sk] = K_3_4 - A_4_0*cz0_3 - cy1_4*cz1_3 - cy2_4*cz2_3;
+    K[59 * sk] = K_3_5 - A_5_0*cz0_3 - cy1_5*cz1_3 - cy2_5*cz2_3;
+    K[60 * sk] = K_3_6 - A_6_0*cz0_3 - cy1_6*cz1_3 - cy2_6*cz2_3;
+    K[61 * sk] = K_3_7 - A_7_0*cz0_3 - cy1_7*cz1_3 - cy2_7*cz2_3;
+    K[62 * sk] = K_3_8 - A_8_0*cz0_3 - cy1_8*cz1_3 - cy2_8*cz2_3;
+    K[63 * sk] = K_3_9 - A_9_0*cz0_3 - cy1_9*cz1_3 - cy2_9*cz2_3;
+    K[64 * sk] = K_3_10 - A_10_0*cz0_3 - cy1_10*cz1_3 - cy2_10*cz2_3;
+    K[65 * sk] = K_3_11 - A_11_0*cz0_3 - cy1_11*cz1_3 - cy2_11*cz2_3;
+    K[66 * sk] = K_3_12 - A_12_0*cz0_3 - cy1_12*cz1_3 - cy2_12*cz2_3;
+    K[67 * sk] = K_3_13 - A_13_0*cz0_3 - cy1_13*cz1_3 - cy2_13*cz2_3;
+    K[68 * sk] = K_3_14 - A_14_0*cz0_3 - cy1_14*cz1_3 - cy2_14*cz2_3;
+    K[69 * sk] = K_3_15 - A_15_0*cz0_3 - cy1_15*cz1_3 - cy2_15*cz2_3;
+    K[70 * sk] = K_3_16 - A_16_0*cz0_3 - cy1_16*cz1_3 - cy2_16*cz2_3;
+    K[71 * sk] = K_3_17 - A_17_0*cz0_3 - cy1_17*cz1_3 - cy2_17*cz2_3;
+    K[72 * sk] = K_0_4 - A_4_0*cz0_0 - cy1_4*cz1_0 - cy2_4*cz2_0;
+    K[73 * sk] = K_1_4 - A_4_0*cz0_1 - cy1_4*cz1_1 - cy2_4*cz2_1;
+    K[74 * sk] = K_2_4 - A_4_0*cz0_2 - cy1_4*cz1_2 - cy2_4*cz2_2;
+    K[75 * sk] = K_3_4 - A_4_0*cz0_3 - cy1_4*cz1_3 - cy2_4*cz2_3;
+    K[76 * sk] = K_4_4 - A_4_0*cz0_4 - cy1_4*cz1_4 - cy2_4*cz2_4;
+    K[77 * sk] = K_4_5 - A_5_0*cz0_4 - cy1_5*cz1_4 - cy2_5*cz2_4;
+    K[78 * sk] = K_4_6 - A_6_0*cz0_4 - cy1_6*cz1_4 - cy2_6*cz2_4;
+    K[79 * sk] = K_4_7 - A_7_0*cz0_4 - cy1_7*cz1_4 - cy2_7*cz2_4;
+    K[80 * sk] = K_4_8 - A_8_0*cz0_4 - cy1_8*cz1_4 - cy2_8*cz2_4;
+    K[81 * sk] = K_4_9 - A_9_0*cz0_4 - cy1_9*cz1_4 - cy2_9*cz2_4;
+    K[82 * sk] = K_4_10 - A_10_0*cz0_4 - cy1_10*cz1_4 - cy2_10*cz2_4;
+    K[83 * sk] = K_4_11 - A_11_0*cz0_4 - cy1_11*cz1_4 - cy2_11*cz2_4;
+    K[84 * sk] = K_4_12 - A_12_0*cz0_4 - cy1_12*cz1_4 - cy2_12*cz2_4;
+    K[85 * sk] = K_4_13 - A_13_0*cz0_4 - cy1_13*cz1_4 - cy2_13*cz2_4;
+    K[86 * sk] = K_4_14 - A_14_0*cz0_4 - cy1_14*cz1_4 - cy2_14*cz2_4;
+    K[87 * sk] = K_4_15 - A_15_0*cz0_4 - cy1_15*cz1_4 - cy2_15*cz2_4;
+    K[88 * sk] = K_4_16 - A_16_0*cz0_4 - cy1_16*cz1_4 - cy2_16*cz2_4;
+    K[89 * sk] = K_4_17 - A_17_0*cz0_4 - cy1_17*cz1_4 - cy2_17*cz2_4;
+    K[90 * sk] = K_0_5 - A_5_0*cz0_0 - cy1_5*cz1_0 - cy2_5*cz2_0;
+    K[91 * sk] = K_1_5 - A_5_0*cz0_1 - cy1_5*cz1_1 - cy2_5*cz2_1;
+    K[92 * sk] = K_2_5 - A_5_0*cz0_2 - cy1_5*cz1_2 - cy2_5*cz2_2;
+    K[93 * sk] = K_3_5 - A_5_0*cz0_3 - cy1_5*cz1_3 - cy2_5*cz2_3;
+    K[94 * sk] = K_4_5 - A_5_0*cz0_4 - cy1_5*cz1_4 - cy2_5*cz2_4;
+    K[95 * sk] = K_5_5 - A_5_0*cz0_5 - cy1_5*cz1_5 - cy2_5*cz2_5;
+    K[96 * sk] = K_5_6 - A_6_0*cz0_5 - cy1_6*cz1_5 - cy2_6*cz2_5;
+    K[97 * sk] = K_5_7 - A_7_0*cz0_5 - cy1_7*cz1_5 - cy2_7*cz2_5;
+    K[98 * sk] = K_5_8 - A_8_0*cz0_5 - cy1_8*cz1_5 - cy2_8*cz2_5;
+    K[99 * sk] = K_5_9 - A_9_0*cz0_5 - cy1_9*cz1_5 - cy2_9*cz2_5;
+    K[100 * sk] = K_5_10 - A_10_0*cz0_5 - cy1_10*cz1_5 - cy2_10*cz2_5;
+    K[101 * sk] = K_5_11 - A_11_0*cz0_5 - cy1_11*cz1_5 - cy2_11*cz2_5;
+    K[102 * sk] = K_5_12 - A_12_0*cz0_5 - cy1_12*cz1_5 - cy2_12*cz2_5;
+    K[103 * sk] = K_5_13 - A_13_0*cz0_5 - cy1_13*cz1_5 - cy2_13*cz2_5;
+    K[104 * sk] = K_5_14 - A_14_0*cz0_5 - cy1_14*cz1_5 - cy2_14*cz2_5;
+    K[105 * sk] = K_5_15 - A_15_0*cz0_5 - cy1_15*cz1_5 - cy2_15*cz2_5;
+    K[106 * sk] = K_5_16 - A_16_0*cz0_5 - cy1_16*cz1_5 - cy2_16*cz2_5;
+    K[107 * sk] = K_5_17 - A_17_0*cz0_5 - cy1_17*cz1_5 - cy2_17*cz2_5;
+    K[108 * sk] = K_0_6 - A_6_0*cz0_0 - cy1_6*cz1_0 - cy2_6*cz2_0;
+    K[109 * sk] = K_1_6 - A_6_0*cz0_1 - cy1_6*cz1_1 - cy2_6*cz2_1;
+    K[110 * sk] = K_2_6 - A_6_0*cz0_2 - cy1_6*cz1_2 - cy2_6*cz2_2;
+    K[111 * sk] = K_3_6 - A_6_0*cz0_3 - cy1_6*cz1_3 - cy2_6*cz2_3;
+    K[112 * sk] = K_4_6 - A_6_0*cz0_4 - cy1_6*cz1_4 - cy2_6*cz2_4;
+    K[113 * sk] = K_5_6 - A_6_0*cz0_5 - cy1_6*cz1_5 - cy2_6*cz2_5;
+    K[114 * sk] = K_6_6 - A_6_0*cz0_6 - cy1_6*cz1_6 - cy2_6*cz2_6;
+    K[115 * sk] = K_6_7 - A_7_0*cz0_6 - cy1_7*cz1_6 - cy2_7*cz2_6;
+    K[116 * sk] = K_6_8 - A_8_0*cz0_6 - cy1_8*cz1_6 - cy2_8*cz2_6;
+    K[117 * sk] = K_6_9 - A_9_0*cz0_6 - cy1_9*cz1_6 - cy2_9*cz2_6;
+    K[118 * sk] = K_6_10 - A_10_0*cz0_6 - cy1_10*cz1_6 - cy2_10*cz2_6;
+    K[119 * sk] = K_6_11 - A_11_0*cz0_6 - cy1_11*cz1_6 - cy2_11*cz2_6;
+    K[120 * sk] = K_6_12 - A_12_0*cz0_6 - cy1_12*cz1_6 - cy2_12*cz2_6;
+    K[121 * sk] = K_6_13 - A_13_0*cz0_6 - cy1_13*cz1_6 - cy2_13*cz2_6;
+    K[122 * sk] = K_6_14 - A_14_0*cz0_6 - cy1_14*cz1_6 - cy2_14*cz2_6;
+    K[123 * sk] = K_6_15 - A_15_0*cz0_6 - cy1_15*cz1_6 - cy2_15*cz2_6;
+    K[124 * sk] = K_6_16 - A_16_0*cz0_6 - cy1_16*cz1_6 - cy2_16*cz2_6;
+    K[125 * sk] = K_6_17 - A_17_0*cz0_6 - cy1_17*cz1_6 - cy2_17*cz2_6;
+    K[126 * sk] = K_0_7 - A_7_0*cz0_0 - cy1_7*cz1_0 - cy2_7*cz2_0;
+    K[127 * sk] = K_1_7 - A_7_0*cz0_1 - cy1_7*cz1_1 - cy2_7*cz2_1;
+    K[128 * sk] = K_2_7 - A_7_0*cz0_2 - cy1_7*cz1_2 - cy2_7*cz2_2;
+    K[129 * sk] = K_3_7 - A_7_0*cz0_3 - cy1_7*cz1_3 - cy2_7*cz2_3;
+    K[130 * sk] = K_4_7 - A_7_0*cz0_4 - cy1_7*cz1_4 - cy2_7*cz2_4;
+    K[131 * sk] = K_5_7 - A_7_0*cz0_5 - cy1_7*cz1_5 - cy2_7*cz2_5;
+    K[132 * sk] = K_6_7 - A_7_0*cz0_6 - cy1_7*cz1_6 - cy2_7*cz2_6;
+    K[133 * sk] = K_7_7 - A_7_0*cz0_7 - cy1_7*cz1_7 - cy2_7*cz2_7;
+    K[134 * sk] = K_7_8 - A_8_0*cz0_7 - cy1_8*cz1_7 - cy2_8*cz2_7;
+    K[135 * sk] = K_7_9 - A_9_0*cz0_7 - cy1_9*cz1_7 - cy2_9*cz2_7;
+    K[136 * sk] = K_7_10 - A_10_0*cz0_7 - cy1_10*cz1_7 - cy2_10*cz2_7;
+    K[137 * sk] = K_7_11 - A_11_0*cz0_7 - cy1_11*cz1_7 - cy2_11*cz2_7;
+    K[138 * sk] = K_7_12 - A_12_0*cz0_7 - cy1_12*cz1_7 - cy2_12*cz2_7;
+    K[139 * sk] = K_7_13 - A_13_0*cz0_7 - cy1_13*cz1_7 - cy2_13*cz2_7;
+    K[140 * sk] = K_7_14 - A_14_0*cz0_7 - cy1_14*cz1_7 - cy2_14*cz2_7;
+    K[141 * sk] = K_7_15 - A_15_0*cz0_7 - cy1_15*cz1_7 - cy2_15*cz2_7;
+    K[142 * sk] = K_7_16 - A_16_0*cz0_7 - cy1_16*cz1_7 - cy2_16*cz2_7;
+    K[143 * sk] = K_7_17 - A_17_0*cz0_7 - cy1_17*cz1_7 - cy2_17*cz2_7;
+    K[144 * sk] = K_0_8 - A_8_0*cz0_0 - cy1_8*cz1_0 - cy2_8*cz2_0;
+    K[145 * sk] = K_1_8 - A_8_0*cz0_1 - cy1_8*cz1_1 - cy2_8*cz2_1;
+    K[146 * sk] = K_2_8 - A_8_0*cz0_2 - cy1_8*cz1_2 - cy2_8*cz2_2;
+    K[147 * sk] = K_3_8 - A_8_0*cz0_3 - cy1_8*cz1_3 - cy2_8*cz2_3;
+    K[148 * sk] = K_4_8 - A_8_0*cz0_4 - cy1_8*cz1_4 - cy2_8*cz2_4;
+    K[149 * sk] = K_5_8 - A_8_0*cz0_5 - cy1_8*cz1_5 - cy2_8*cz2_5;
+    K[150 * sk] = K_6_8 - A_8_0*cz0_6 - cy1_8*cz1_6 - cy2_8*cz2_6;
+    K[151 * sk] = K_7_8 - A_8_0*cz0_7 - cy1_8*cz1_7 - cy2_8*cz2_7;
+    K[152 * sk] = K_8_8 - A_8_0*cz0_8 - cy1_8*cz1_8 - cy2_8*cz2_8;
+    K[153 * sk] = K_8_9 - A_9_0*cz0_8 - cy1_9*cz1_8 - cy2_9*cz2_8;
+    K[154 * sk] = K_8_10 - A_10_0*cz0_8 - cy1_10*cz1_8 - cy2_10*cz2_8;
+    K[155 * sk] = K_8_11 - A_11_0*cz0_8 - cy1_11*cz1_8 - cy2_11*cz2_8;
+    K[156 * sk] = K_8_12 - A_12_0*cz0_8 - cy1_12*cz1_8 - cy2_12*cz2_8;
+    K[157 * sk] = K_8_13 - A_13_0*cz0_8 - cy1_13*cz1_8 - cy2_13*cz2_8;
+    K[158 * sk] = K_8_14 - A_14_0*cz0_8 - cy1_14*cz1_8 - cy2_14*cz2_8;
+    K[159 * sk] = K_8_15 - A_15_0*cz0_8 - cy1_15*cz1_8 - cy2_15*cz2_8;
+    K[160 * sk] = K_8_16 - A_16_0*cz0_8 - cy1_16*cz1_8 - cy2_16*cz2_8;
+    K[161 * sk] = K_8_17 - A_17_0*cz0_8 - cy1_17*cz1_8 - cy2_17*cz2_8;
+    K[162 * sk] = K_0_9 - A_9_0*cz0_0 - cy1_9*cz1_0 - cy2_9*cz2_0;
+    K[163 * sk] = K_1_9 - A_9_0*cz0_1 - cy1_9*cz1_1 - cy2_9*cz2_1;
+    K[164 * sk] = K_2_9 - A_9_0*cz0_2 - cy1_9*cz1_2 - cy2_9*cz2_2;
+    K[165 * sk] = K_3_9 - A_9_0*cz0_3 - cy1_9*cz1_3 - cy2_9*cz2_3;
+    K[166 * sk] = K_4_9 - A_9_0*cz0_4 - cy1_9*cz1_4 - cy2_9*cz2_4;
+    K[167 * sk] = K_5_9 - A_9_0*cz0_5 - cy1_9*cz1_5 - cy2_9*cz2_5;
+    K[168 * sk] = K_6_9 - A_9_0*cz0_6 - cy1_9*cz1_6 - cy2_9*cz2_6;
+    K[169 * sk] = K_7_9 - A_9_0*cz0_7 - cy1_9*cz1_7 - cy2_9*cz2_7;
+    K[170 * sk] = K_8_9 - A_9_0*cz0_8 - cy1_9*cz1_8 - cy2_9*cz2_8;
+    K[171 * sk] = K_9_9 - A_9_0*cz0_9 - cy1_9*cz1_9 - cy2_9*cz2_9;
+    K[172 * sk] = K_9_10 - A_10_0*cz0_9 - cy1_10*cz1_9 - cy2_10*cz2_9;
+    K[173 * sk] = K_9_11 - A_11_0*cz0_9 - cy1_11*cz1_9 - cy2_11*cz2_9;
+    K[174 * sk] = K_9_12 - A_12_0*cz0_9 - cy1_12*cz1_9 - cy2_12*cz2_9;
+    K[175 * sk] = K_9_13 - A_13_0*cz0_9 - cy1_13*cz1_9 - cy2_13*cz2_9;
+    K[176 * sk] = K_9_14 - A_14_0*cz0_9 - cy1_14*cz1_9 - cy2_14*cz2_9;
+    K[177 * sk] = K_9_15 - A_15_0*cz0_9 - cy1_15*cz1_9 - cy2_15*cz2_9;
+    K[178 * sk] = K_9_16 - A_16_0*cz0_9 - cy1_16*cz1_9 - cy2_16*cz2_9;
+    K[179 * sk] = K_9_17 - A_17_0*cz0_9 - cy1_17*cz1_9 - cy2_17*cz2_9;
+    K[180 * sk] = K_0_10 - A_10_0*cz0_0 - cy1_10*cz1_0 - cy2_10*cz2_0;
+    K[181 * sk] = K_1_10 - A_10_0*cz0_1 - cy1_10*cz1_1 - cy2_10*cz2_1;
+    K[182 * sk] = K_2_10 - A_10_0*cz0_2 - cy1_10*cz1_2 - cy2_10*cz2_2;
+    K[183 * sk] = K_3_10 - A_10_0*cz0_3 - cy1_10*cz1_3 - cy2_10*cz2_3;
+    K[184 * sk] = K_4_10 - A_10_0*cz0_4 - cy1_10*cz1_4 - cy2_10*cz2_4;
+    K[185 * sk] = K_5_10 - A_10_0*cz0_5 - cy1_10*cz1_5 - cy2_10*cz2_5;
+    K[186 * sk] = K_6_10 - A_10_0*cz0_6 - cy1_10*cz1_6 - cy2_10*cz2_6;
+    K[187 * sk] = K_7_10 - A_10_0*cz0_7 - cy1_10*cz1_7 - cy2_10*cz2_7;
+    K[188 * sk] = K_8_10 - A_10_0*cz0_8 - cy1_10*cz1_8 - cy2_10*cz2_8;
+    K[189 * sk] = K_9_10 - A_10_0*cz0_9 - cy1_10*cz1_9 - cy2_10*cz2_9;
+    K[190 * sk] = K_10_10 - A_10_0*cz0_10 - cy1_10*cz1_10 - cy2_10*cz2_10;
+    K[191 * sk] = K_10_11 - A_11_0*cz0_10 - cy1_11*cz1_10 - cy2_11*cz2_10;
+    K[192 * sk] = K_10_12 - A_12_0*cz0_10 - cy1_12*cz1_10 - cy2_12*cz2_10;
+    K[193 * sk] = K_10_13 - A_13_0*cz0_10 - cy1_13*cz1_10 - cy2_13*cz2_10;
+    K[194 * sk] = K_10_14 - A_14_0*cz0_10 - cy1_14*cz1_10 - cy2_14*cz2_10;
+    K[195 * sk] = K_10_15 - A_15_0*cz0_10 - cy1_15*cz1_10 - cy2_15*cz2_10;
+    K[196 * sk] = K_10_16 - A_16_0*cz0_10 - cy1_16*cz1_10 - cy2_16*cz2_10;
+    K[197 * sk] = K_10_17 - A_17_0*cz0_10 - cy1_17*cz1_10 - cy2_17*cz2_10;
+    K[198 * sk] = K_0_11 - A_11_0*cz0_0 - cy1_11*cz1_0 - cy2_11*cz2_0;
+    K[199 * sk] = K_1_11 - A_11_0*cz0_1 - cy1_11*cz1_1 - cy2_11*cz2_1;
+    K[200 * sk] = K_2_11 - A_11_0*cz0_2 - cy1_11*cz1_2 - cy2_11*cz2_2;
+    K[201 * sk] = K_3_11 - A_11_0*cz0_3 - cy1_11*cz1_3 - cy2_11*cz2_3;
+    K[202 * sk] = K_4_11 - A_11_0*cz0_4 - cy1_11*cz1_4 - cy2_11*cz2_4;
+    K[203 * sk] = K_5_11 - A_11_0*cz0_5 - cy1_11*cz1_5 - cy2_11*cz2_5;
+    K[204 * sk] = K_6_11 - A_11_0*cz0_6 - cy1_11*cz1_6 - cy2_11*cz2_6;
+    K[205 * sk] = K_7_11 - A_11_0*cz0_7 - cy1_11*cz1_7 - cy2_11*cz2_7;
+    K[206 * sk] = K_8_11 - A_11_0*cz0_8 - cy1_11*cz1_8 - cy2_11*cz2_8;
+    K[207 * sk] = K_9_11 - A_11_0*cz0_9 - cy1_11*cz1_9 - cy2_11*cz2_9;
+    K[208 * sk] = K_10_11 - A_11_0*cz0_10 - cy1_11*cz1_10 - cy2_11*cz2_10;
+    K[209 * sk] = K_11_11 - A_11_0*cz0_11 - cy1_11*cz1_11 - cy2_11*cz2_11;
+    K[210 * sk] = K_11_12 - A_12_0*cz0_11 - cy1_12*cz1_11 - cy2_12*cz2_11;
+    K[211 * sk] = K_11_13 - A_13_0*cz0_11 - cy1_13*cz1_11 - cy2_13*cz2_11;
+    K[212 * sk] = K_11_14 - A_14_0*cz0_11 - cy1_14*cz1_11 - cy2_14*cz2_11;
+    K[213 * sk] = K_11_15 - A_15_0*cz0_11 - cy1_15*cz1_11 - cy2_15*cz2_11;
+    K[214 * sk] = K_11_16 - A_16_0*cz0_11 - cy1_16*cz1_11 - cy2_16*cz2_11;
+    K[215 * sk] = K_11_17 - A_17_0*cz0_11 - cy1_17*cz1_11 - cy2_17*cz2_11;
+    K[216 * sk] = K_0_12 - A_12_0*cz0_0 - cy1_12*cz1_0 - cy2_12*cz2_0;
+    K[217 * sk] = K_1_12 - A_12_0*cz0_1 - cy1_12*cz1_1 - cy2_12*cz2_1;
+    K[218 * sk] = K_2_12 - A_12_0*cz0_2 - cy1_12*cz1_2 - cy2_12*cz2_2;
+    K[219 * sk] = K_3_12 - A_12_0*cz0_3 - cy1_12*cz1_3 - cy2_12*cz2_3;
+    K[220 * sk] = K_4_12 - A_12_0*cz0_4 - cy1_12*cz1_4 - cy2_12*cz2_4;
+    K[221 * sk] = K_5_12 - A_12_0*cz0_5 - cy1_12*cz1_5 - cy2_12*cz2_5;
+    K[222 * sk] = K_6_12 - A_12_0*cz0_6 - cy1_12*cz1_6 - cy2_12*cz2_6;
+    K[223 * sk] = K_7_12 - A_12_0*cz0_7 - cy1_12*cz1_7 - cy2_12*cz2_7;
+    K[224 * sk] = K_8_12 - A_12_0*cz0_8 - cy1_12*cz1_8 - cy2_12*cz2_8;
+    K[225 * sk] = K_9_12 - A_12_0*cz0_9 - cy1_12*cz1_9 - cy2_12*cz2_9;
+    K[226 * sk] = K_10_12 - A_12_0*cz0_10 - cy1_12*cz1_10 - cy2_12*cz2_10;
+    K[227 * sk] = K_11_12 - A_12_0*cz0_11 - cy1_12*cz1_11 - cy2_12*cz2_11;
+    K[228 * sk] = K_12_12 - A_12_0*cz0_12 - cy1_12*cz1_12 - cy2_12*cz2_12;
+    K[229 * sk] = K_12_13 - A_13_0*cz0_12 - cy1_13*cz1_12 - cy2_13*cz2_12;
+    K[230 * sk] = K_12_14 - A_14_0*cz0_12 - cy1_14*cz1_12 - cy2_14*cz2_12;
+    K[231 * sk] = K_12_15 - A_15_0*cz0_12 - cy1_15*cz1_12 - cy2_15*cz2_12;
+    K[232 * sk] = K_12_16 - A_16_0*cz0_12 - cy1_16*cz1_12 - cy2_16*cz2_12;
+    K[233 * sk] = K_12_17 - A_17_0*cz0_12 - cy1_17*cz1_12 - cy2_17*cz2_12;
+    K[234 * sk] = K_0_13 - A_13_0*cz0_0 - cy1_13*cz1_0 - cy2_13*cz2_0;
+    K[235 * sk] = K_1_13 - A_13_0*cz0_1 - cy1_13*cz1_1 - cy2_13*cz2_1;
+    K[236 * sk] = K_2_13 - A_13_0*cz0_2 - cy1_13*cz1_2 - cy2_13*cz2_2;
+    K[237 * sk] = K_3_13 - A_13_0*cz0_3 - cy1_13*cz1_3 - cy2_13*cz2_3;
+    K[238 * sk] = K_4_13 - A_13_0*cz0_4 - cy1_13*cz1_4 - cy2_13*cz2_4;
+    K[239 * sk] = K_5_13 - A_13_0*cz0_5 - cy1_13*cz1_5 - cy2_13*cz2_5;
+    K[240 * sk] = K_6_13 - A_13_0*cz0_6 - cy1_13*cz1_6 - cy2_13*cz2_6;
+    K[241 * sk] = K_7_13 - A_13_0*cz0_7 - cy1_13*cz1_7 - cy2_13*cz2_7;
+    K[242 * sk] = K_8_13 - A_13_0*cz0_8 - cy1_13*cz1_8 - cy2_13*cz2_8;
+    K[243 * sk] = K_9_13 - A_13_0*cz0_9 - cy1_13*cz1_9 - cy2_13*cz2_9;
+    K[244 * sk] = K_10_13 - A_13_0*cz0_10 - cy1_13*cz1_10 - cy2_13*cz2_10;
+    K[245 * sk] = K_11_13 - A_13_0*cz0_11 - cy1_13*cz1_11 - cy2_13*cz2_11;
+    K[246 * sk] = K_12_13 - A_13_0*cz0_12 - cy1_13*cz1_12 - cy2_13*cz2_12;
+    K[247 * sk] = K_13_13 - A_13_0*cz0_13 - cy1_13*cz1_13 - cy2_13*cz2_13;
+    K[248 * sk] = K_13_14 - A_14_0*cz0_13 - cy1_14*cz1_13 - cy2_14*cz2_13;
+    K[249 * sk] = K_13_15 - A_15_0*cz0_13 - cy1_15*cz1_13 - cy2_15*cz2_13;
+    K[250 * sk] = K_13_16 - A_16_0*cz0_13 - cy1_16*cz1_13 - cy2_16*cz2_13;
+    K[251 * sk] = K_13_17 - A_17_0*cz0_13 - cy1_17*cz1_13 - cy2_17*cz2_13;
+    K[252 * sk] = K_0_14 - A_14_0*cz0_0 - cy1_14*cz1_0 - cy2_14*cz2_0;
+    K[253 * sk] = K_1_14 - A_14_0*cz0_1 - cy1_14*cz1_1 - cy2_14*cz2_1;
+    K[254 * sk] = K_2_14 - A_14_0*cz0_2 - cy1_14*cz1_2 - cy2_14*cz2_2;
+    K[255 * sk] = K_3_14 - A_14_0*cz0_3 - cy1_14*cz1_3 - cy2_14*cz2_3;
+    K[256 * sk] = K_4_14 - A_14_0*cz0_4 - cy1_14*cz1_4 - cy2_14*cz2_4;
+    K[257 * sk] = K_5_14 - A_14_0*cz0_5 - cy1_14*cz1_5 - cy2_14*cz2_5;
+    K[258 * sk] = K_6_14 - A_14_0*cz0_6 - cy1_14*cz1_6 - cy2_14*cz2_6;
+    K[259 * sk] = K_7_14 - A_14_0*cz0_7 - cy1_14*cz1_7 - cy2_14*cz2_7;
+    K[260 * sk] = K_8_14 - A_14_0*cz0_8 - cy1_14*cz1_8 - cy2_14*cz2_8;
+    K[261 * sk] = K_9_14 - A_14_0*cz0_9 - cy1_14*cz1_9 - cy2_14*cz2_9;
+    K[262 * sk] = K_10_14 - A_14_0*cz0_10 - cy1_14*cz1_10 - cy2_14*cz2_10;
+    K[263 * sk] = K_11_14 - A_14_0*cz0_11 - cy1_14*cz1_11 - cy2_14*cz2_11;
+    K[264 * sk] = K_12_14 - A_14_0*cz0_12 - cy1_14*cz1_12 - cy2_14*cz2_12;
+    K[265 * sk] = K_13_14 - A_14_0*cz0_13 - cy1_14*cz1_13 - cy2_14*cz2_13;
+    K[266 * sk] = K_14_14 - A_14_0*cz0_14 - cy1_14*cz1_14 - cy2_14*cz2_14;
+    K[267 * sk] = K_14_15 - A_15_0*cz0_14 - cy1_15*cz1_14 - cy2_15*cz2_14;
+    K[268 * sk] = K_14_16 - A_16_0*cz0_14 - cy1_16*cz1_14 - cy2_16*cz2_14;
+    K[269 * sk] = K_14_17 - A_17_0*cz0_14 - cy1_17*cz1_14 - cy2_17*cz2_14;
+    K[270 * sk] = K_0_15 - A_15_0*cz0_0 - cy1_15*cz1_0 - cy2_15*cz2_0;
+    K[271 * sk] = K_1_15 - A_15_0*cz0_1 - cy1_15*cz1_1 - cy2_15*cz2_1;
+    K[272 * sk] = K_2_15 - A_15_0*cz0_2 - cy1_15*cz1_2 - cy2_15*cz2_2;
+    K[273 * sk] = K_3_15 - A_15_0*cz0_3 - cy1_15*cz1_3 - cy2_15*cz2_3;
+    K[274 * sk] = K_4_15 - A_15_0*cz0_4 - cy1_15*cz1_4 - cy2_15*cz2_4;
+    K[275 * sk] = K_5_15 - A_15_0*cz0_5 - cy1_15*cz1_5 - cy2_15*cz2_5;
+    K[276 * sk] = K_6_15 - A_15_0*cz0_6 - cy1_15*cz1_6 - cy2_15*cz2_6;
+    K[277 * sk] = K_7_15 - A_15_0*cz0_7 - cy1_15*cz1_7 - cy2_15*cz2_7;
+    K[278 * sk] = K_8_15 - A_15_0*cz0_8 - cy1_15*cz1_8 - cy2_15*cz2_8;
+    K[279 * sk] = K_9_15 - A_15_0*cz0_9 - cy1_15*cz1_9 - cy2_15*cz2_9;
+    K[280 * sk] = K_10_15 - A_15_0*cz0_10 - cy1_15*cz1_10 - cy2_15*cz2_10;
+    K[281 * sk] = K_11_15 - A_15_0*cz0_11 - cy1_15*cz1_11 - cy2_15*cz2_11;
+    K[282 * sk] = K_12_15 - A_15_0*cz0_12 - cy1_15*cz1_12 - cy2_15*cz2_12;
+    K[283 * sk] = K_13_15 - A_15_0*cz0_13 - cy1_15*cz1_13 - cy2_15*cz2_13;
+    K[284 * sk] = K_14_15 - A_15_0*cz0_14 - cy1_15*cz1_14 - cy2_15*cz2_14;
+    K[285 * sk] = K_15_15 - A_15_0*cz0_15 - cy1_15*cz1_15 - cy2_15*cz2_15;
+    K[286 * sk] = K_15_16 - A_16_0*cz0_15 - cy1_16*cz1_15 - cy2_16*cz2_15;
+    K[287 * sk] = K_15_17 - A_17_0*cz0_15 - cy1_17*cz1_15 - cy2_17*cz2_15;
+    K[288 * sk] = K_0_16 - A_16_0*cz0_0 - cy1_16*cz1_0 - cy2_16*cz2_0;
+    K[289 * sk] = K_1_16 - A_16_0*cz0_1 - cy1_16*cz1_1 - cy2_16*cz2_1;
+    K[290 * sk] = K_2_16 - A_16_0*cz0_2 - cy1_16*cz1_2 - cy2_16*cz2_2;
+    K[291 * sk] = K_3_16 - A_16_0*cz0_3 - cy1_16*cz1_3 - cy2_16*cz2_3;
+    K[292 * sk] = K_4_16 - A_16_0*cz0_4 - cy1_16*cz1_4 - cy2_16*cz2_4;
+    K[293 * sk] = K_5_16 - A_16_0*cz0_5 - cy1_16*cz1_5 - cy2_16*cz2_5;
+    K[294 * sk] = K_6_16 - A_16_0*cz0_6 - cy1_16*cz1_6 - cy2_16*cz2_6;
+    K[295 * sk] = K_7_16 - A_16_0*cz0_7 - cy1_16*cz1_7 - cy2_16*cz2_7;
+    K[296 * sk] = K_8_16 - A_16_0*cz0_8 - cy1_16*cz1_8 - cy2_16*cz2_8;
+    K[297 * sk] = K_9_16 - A_16_0*cz0_9 - cy1_16*cz1_9 - cy2_16*cz2_9;
+    K[298 * sk] = K_10_16 - A_16_0*cz0_10 - cy1_16*cz1_10 - cy2_16*cz2_10;
+    K[299 * sk] = K_11_16 - A_16_0*cz0_11 - cy1_16*cz1_11 - cy2_16*cz2_11;
+    K[300 * sk] = K_12_16 - A_16_0*cz0_12 - cy1_16*cz1_12 - cy2_16*cz2_12;
+    K[301 * sk] = K_13_16 - A_16_0*cz0_13 - cy1_16*cz1_13 - cy2_16*cz2_13;
+    K[302 * sk] = K_14_16 - A_16_0*cz0_14 - cy1_16*cz1_14 - cy2_16*cz2_14;
+    K[303 * sk] = K_15_16 - A_16_0*cz0_15 - cy1_16*cz1_15 - cy2_16*cz2_15;
+    K[304 * sk] = K_16_16 - A_16_0*cz0_16 - cy1_16*cz1_16 - cy2_16*cz2_16;
+    K[305 * sk] = K_16_17 - A_17_0*cz0_16 - cy1_17*cz1_16 - cy2_17*cz2_16;
+    K[306 * sk] = K_0_17 - A_17_0*cz0_0 - cy1_17*cz1_0 - cy2_17*cz2_0;
+    K[307 * sk] = K_1_17 - A_17_0*cz0_1 - cy1_17*cz1_1 - cy2_17*cz2_1;
+    K[308 * sk] = K_2_17 - A_17_0*cz0_2 - cy1_17*cz1_2 - cy2_17*cz2_2;
+    K[309 * sk] = K_3_17 - A_17_0*cz0_3 - cy1_17*cz1_3 - cy2_17*cz2_3;
+    K[310 * sk] = K_4_17 - A_17_0*cz0_4 - cy1_17*cz1_4 - cy2_17*cz2_4;
+    K[311 * sk] = K_5_17 - A_17_0*cz0_5 - cy1_17*cz1_5 - cy2_17*cz2_5;
+    K[312 * sk] = K_6_17 - A_17_0*cz0_6 - cy1_17*cz1_6 - cy2_17*cz2_6;
+    K[313 * sk] = K_7_17 - A_17_0*cz0_7 - cy1_17*cz1_7 - cy2_17*cz2_7;
+    K[314 * sk] = K_8_17 - A_17_0*cz0_8 - cy1_17*cz1_8 - cy2_17*cz2_8;
+    K[315 * sk] = K_9_17 - A_17_0*cz0_9 - cy1_17*cz1_9 - cy2_17*cz2_9;
+    K[316 * sk] = K_10_17 - A_17_0*cz0_10 - cy1_17*cz1_10 - cy2_17*cz2_10;
+    K[317 * sk] = K_11_17 - A_17_0*cz0_11 - cy1_17*cz1_11 - cy2_17*cz2_11;
+    K[318 * sk] = K_12_17 - A_17_0*cz0_12 - cy1_17*cz1_12 - cy2_17*cz2_12;
+    K[319 * sk] = K_13_17 - A_17_0*cz0_13 - cy1_17*cz1_13 - cy2_17*cz2_13;
+    K[320 * sk] = K_14_17 - A_17_0*cz0_14 - cy1_17*cz1_14 - cy2_17*cz2_14;
+    K[321 * sk] = K_15_17 - A_17_0*cz0_15 - cy1_17*cz1_15 - cy2_17*cz2_15;
+    K[322 * sk] = K_16_17 - A_17_0*cz0_16 - cy1_17*cz1_16 - cy2_17*cz2_16;
+    K[323 * sk] = K_17_17 - A_17_0*cz0_17 - cy1_17*cz1_17 - cy2_17*cz2_17;
 }
 
 void derive_q9_bbar_plane_stress_stiffness(const double *restrict xy, double E, double nu, double t, double *restrict K)
@@ -1375,6 +1506,7 @@ static inline void q9_bbar_plane_stress_recovery_body(const double *restrict xy,
     const double m5 = mat[8];
     const double m6 = mat[9];
     const double m7 = mat[10];
+    const double m8 = mat[11];
     /* element quantities: map coefficients, centre Jacobian */
     const double gx_0_1 = 0.5*x7 - 0.5*x5;
     const double gx_0_2 = 0.5*x5 + 0.5*x7 - x9;
@@ -1392,9 +1524,16 @@ static inline void q9_bbar_plane_stress_recovery_body(const double *restrict xy,
     const double gy_2_0 = 0.5*y6 + 0.5*y8 - y9;
     const double gy_2_1 = 0.5*y5 - 0.5*y7 - 0.25*y1 - 0.25*y2 + 0.25*y3 + 0.25*y4;
     const double gy_2_2 = y9 - 0.5*y5 - 0.5*y6 - 0.5*y7 - 0.5*y8 + 0.25*y1 + 0.25*y2 + 0.25*y3 + 0.25*y4;
-    double A_0_0 = 0.0, A_1_0 = 0.0, A_2_0 = 0.0, A_3_0 = 0.0, A_4_0 = 0.0, A_5_0 = 0.0, A_6_0 = 0.0;
-    double A_7_0 = 0.0, A_8_0 = 0.0, A_9_0 = 0.0, A_10_0 = 0.0, A_11_0 = 0.0, A_12_0 = 0.0;
-    double A_13_0 = 0.0, A_14_0 = 0.0, A_15_0 = 0.0, A_16_0 = 0.0, A_17_0 = 0.0, H_0_0 = 0.0;
+    double A_0_0 = 0.0, A_0_1 = 0.0, A_0_2 = 0.0, A_1_0 = 0.0, A_1_1 = 0.0, A_1_2 = 0.0, A_2_0 = 0.0;
+    double A_2_1 = 0.0, A_2_2 = 0.0, A_3_0 = 0.0, A_3_1 = 0.0, A_3_2 = 0.0, A_4_0 = 0.0, A_4_1 = 0.0;
+    double A_4_2 = 0.0, A_5_0 = 0.0, A_5_1 = 0.0, A_5_2 = 0.0, A_6_0 = 0.0, A_6_1 = 0.0, A_6_2 = 0.0;
+    double A_7_0 = 0.0, A_7_1 = 0.0, A_7_2 = 0.0, A_8_0 = 0.0, A_8_1 = 0.0, A_8_2 = 0.0, A_9_0 = 0.0;
+    double A_9_1 = 0.0, A_9_2 = 0.0, A_10_0 = 0.0, A_10_1 = 0.0, A_10_2 = 0.0, A_11_0 = 0.0;
+    double A_11_1 = 0.0, A_11_2 = 0.0, A_12_0 = 0.0, A_12_1 = 0.0, A_12_2 = 0.0, A_13_0 = 0.0;
+    double A_13_1 = 0.0, A_13_2 = 0.0, A_14_0 = 0.0, A_14_1 = 0.0, A_14_2 = 0.0, A_15_0 = 0.0;
+    double A_15_1 = 0.0, A_15_2 = 0.0, A_16_0 = 0.0, A_16_1 = 0.0, A_16_2 = 0.0, A_17_0 = 0.0;
+    double A_17_1 = 0.0, A_17_2 = 0.0, H_0_0 = 0.0, H_0_1 = 0.0, H_0_2 = 0.0, H_1_1 = 0.0;
+    double H_1_2 = 0.0, H_2_2 = 0.0;
     for (int p = 0; p < 9; ++p) {   /* gauss-3x3: loop over the 9 points */
         const double c0 = KR0_c0[p];
         const double c1 = KR0_c1[p];
@@ -1453,33 +1592,95 @@ static inline void q9_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx9 = Ji00*c23 + Ji01*c24;
         const double dNdy9 = Ji10*c23 + Ji11*c24;
         const double sc0 = detJ*t*w;
-        const double s58 = m3*sc0;
+        const double T58 = sc0*xi;
+        const double T59 = eta*sc0;
+        const double s60 = m3*sc0;
+        const double T61 = s60*xi;
+        const double T62 = eta*s60;
         A_0_0 += dNdx1*sc0;
+        A_0_1 += T58*dNdx1;
+        A_0_2 += T59*dNdx1;
         A_1_0 += dNdy1*sc0;
+        A_1_1 += T58*dNdy1;
+        A_1_2 += T59*dNdy1;
         A_2_0 += dNdx2*sc0;
+        A_2_1 += T58*dNdx2;
+        A_2_2 += T59*dNdx2;
         A_3_0 += dNdy2*sc0;
+        A_3_1 += T58*dNdy2;
+        A_3_2 += T59*dNdy2;
         A_4_0 += dNdx3*sc0;
+        A_4_1 += T58*dNdx3;
+        A_4_2 += T59*dNdx3;
         A_5_0 += dNdy3*sc0;
+        A_5_1 += T58*dNdy3;
+        A_5_2 += T59*dNdy3;
         A_6_0 += dNdx4*sc0;
+        A_6_1 += T58*dNdx4;
+        A_6_2 += T59*dNdx4;
         A_7_0 += dNdy4*sc0;
+        A_7_1 += T58*dNdy4;
+        A_7_2 += T59*dNdy4;
         A_8_0 += dNdx5*sc0;
+        A_8_1 += T58*dNdx5;
+        A_8_2 += T59*dNdx5;
         A_9_0 += dNdy5*sc0;
+        A_9_1 += T58*dNdy5;
+        A_9_2 += T59*dNdy5;
         A_10_0 += dNdx6*sc0;
+        A_10_1 += T58*dNdx6;
+        A_10_2 += T59*dNdx6;
         A_11_0 += dNdy6*sc0;
+        A_11_1 += T58*dNdy6;
+        A_11_2 += T59*dNdy6;
         A_12_0 += dNdx7*sc0;
+        A_12_1 += T58*dNdx7;
+        A_12_2 += T59*dNdx7;
         A_13_0 += dNdy7*sc0;
+        A_13_1 += T58*dNdy7;
+        A_13_2 += T59*dNdy7;
         A_14_0 += dNdx8*sc0;
+        A_14_1 += T58*dNdx8;
+        A_14_2 += T59*dNdx8;
         A_15_0 += dNdy8*sc0;
+        A_15_1 += T58*dNdy8;
+        A_15_2 += T59*dNdy8;
         A_16_0 += dNdx9*sc0;
+        A_16_1 += T58*dNdx9;
+        A_16_2 += T59*dNdx9;
         A_17_0 += dNdy9*sc0;
-        H_0_0 += s58;
+        A_17_1 += T58*dNdy9;
+        A_17_2 += T59*dNdy9;
+        H_0_0 += s60;
+        H_0_1 += T61;
+        H_0_2 += T62;
+        H_1_1 += T61*xi;
+        H_1_2 += T62*xi;
+        H_2_2 += T62*eta;
     }
     /* static condensation of the internal unknowns */
     const double cid0 = 1.0/H_0_0;
+    const double cL1_0 = H_0_1*cid0;
+    const double cL2_0 = H_0_2*cid0;
+    const double cd1 = H_1_1 - H_0_0*cL1_0*cL1_0;
+    const double cid1 = 1.0/cd1;
+    const double cL2_1 = cid1*(H_1_2 - H_0_0*cL1_0*cL2_0);
+    const double cd2 = H_2_2 - H_0_0*cL2_0*cL2_0 - cd1*cL2_1*cL2_1;
+    const double cid2 = 1.0/cd2;
     const double cb0 = -A_0_0*u1 - A_10_0*u11 - A_11_0*u12 - A_12_0*u13 - A_13_0*u14 - A_14_0*u15 - A_15_0*u16
         - A_16_0*u17 - A_17_0*u18 - A_1_0*u2 - A_2_0*u3 - A_3_0*u4 - A_4_0*u5 - A_5_0*u6 - A_6_0*u7 - A_7_0*u8
         - A_8_0*u9 - A_9_0*u10;
-    const double alpha1 = cb0*cid0;
+    const double cb1 = -A_0_1*u1 - A_10_1*u11 - A_11_1*u12 - A_12_1*u13 - A_13_1*u14 - A_14_1*u15 - A_15_1*u16
+        - A_16_1*u17 - A_17_1*u18 - A_1_1*u2 - A_2_1*u3 - A_3_1*u4 - A_4_1*u5 - A_5_1*u6 - A_6_1*u7 - A_7_1*u8
+        - A_8_1*u9 - A_9_1*u10;
+    const double cb2 = -A_0_2*u1 - A_10_2*u11 - A_11_2*u12 - A_12_2*u13 - A_13_2*u14 - A_14_2*u15 - A_15_2*u16
+        - A_16_2*u17 - A_17_2*u18 - A_1_2*u2 - A_2_2*u3 - A_3_2*u4 - A_4_2*u5 - A_5_2*u6 - A_6_2*u7 - A_7_2*u8
+        - A_8_2*u9 - A_9_2*u10;
+    const double cy1_0 = cb1 - cL1_0*cb0;
+    const double cy2_0 = cb2 - cL2_0*cb0 - cL2_1*cy1_0;
+    const double alpha3 = cid2*cy2_0;
+    const double alpha2 = cid1*cy1_0 - alpha3*cL2_1;
+    const double alpha1 = cb0*cid0 - alpha2*cL1_0 - alpha3*cL2_0;
     {   /* gauss-3x3 point 1 of 9: xi = -0.7745966692414834, eta = -0.7745966692414834, weight = 25/81 */
         const double q0 = -0.9295160030897801*gx_2_2;
         const double q1 = -0.7745966692414834*gx_1_1;
@@ -1514,23 +1715,25 @@ static inline void q9_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx9 = 0.6196773353931867*Ji00 + 0.6196773353931867*Ji01;
         const double dNdy9 = 0.6196773353931867*Ji10 + 0.6196773353931867*Ji11;
         const double q4 = alpha1*m4;
-        const double eps59 = q4 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 + 0.5*dNdx9*u17 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
-            - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16
-            - 0.5*dNdy9*u18;
-        const double eps60 = q4 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 + 0.5*dNdy9*u18 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
-            - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15
-            - 0.5*dNdx9*u17;
-        const double eps61 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+        const double q5 = -0.3872983346207417*alpha2*m5;
+        const double q6 = -0.3872983346207417*alpha3*m5;
+        const double eps63 = q4 + q5 + q6 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 + 0.5*dNdx9*u17 - 0.5*dNdy1*u2
+            - 0.5*dNdy2*u4 - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14
+            - 0.5*dNdy8*u16 - 0.5*dNdy9*u18;
+        const double eps64 = q4 + q5 + q6 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 + 0.5*dNdy9*u18 - 0.5*dNdx1*u1
+            - 0.5*dNdx2*u3 - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13
+            - 0.5*dNdx8*u15 - 0.5*dNdx9*u17;
+        const double eps65 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
             + dNdx8*u16 + dNdx9*u18 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
             + dNdy7*u13 + dNdy8*u15 + dNdy9*u17;
-        strain[0] = eps59;
-        strain[1] = eps60;
-        strain[2] = eps61;
-        stress[0] = eps59*m5 + eps60*m6;
-        stress[1] = eps59*m6 + eps60*m5;
-        stress[2] = eps61*m7;
+        strain[0] = eps63;
+        strain[1] = eps64;
+        strain[2] = eps65;
+        stress[0] = eps63*m6 + eps64*m7;
+        stress[1] = eps63*m7 + eps64*m6;
+        stress[2] = eps65*m8;
     }
     {   /* gauss-3x3 point 2 of 9: xi = 0, eta = -0.7745966692414834, weight = 40/81 */
         const double J00 = gx_1_0 + 0.6*gx_1_2 - 0.7745966692414834*gx_1_1;
@@ -1562,23 +1765,24 @@ static inline void q9_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx9 = 1.5491933384829668*Ji01;
         const double dNdy9 = 1.5491933384829668*Ji11;
         const double q0 = alpha1*m4;
-        const double eps59 = q0 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 + 0.5*dNdx9*u17 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
-            - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16
-            - 0.5*dNdy9*u18;
-        const double eps60 = q0 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 + 0.5*dNdy9*u18 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
-            - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15
-            - 0.5*dNdx9*u17;
-        const double eps61 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+        const double q1 = -0.3872983346207417*alpha3*m5;
+        const double eps63 = q0 + q1 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 + 0.5*dNdx9*u17 - 0.5*dNdy1*u2
+            - 0.5*dNdy2*u4 - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14
+            - 0.5*dNdy8*u16 - 0.5*dNdy9*u18;
+        const double eps64 = q0 + q1 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 + 0.5*dNdy9*u18 - 0.5*dNdx1*u1
+            - 0.5*dNdx2*u3 - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13
+            - 0.5*dNdx8*u15 - 0.5*dNdx9*u17;
+        const double eps65 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
             + dNdx8*u16 + dNdx9*u18 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
             + dNdy7*u13 + dNdy8*u15 + dNdy9*u17;
-        strain[3] = eps59;
-        strain[4] = eps60;
-        strain[5] = eps61;
-        stress[3] = eps59*m5 + eps60*m6;
-        stress[4] = eps59*m6 + eps60*m5;
-        stress[5] = eps61*m7;
+        strain[3] = eps63;
+        strain[4] = eps64;
+        strain[5] = eps65;
+        stress[3] = eps63*m6 + eps64*m7;
+        stress[4] = eps63*m7 + eps64*m6;
+        stress[5] = eps65*m8;
     }
     {   /* gauss-3x3 point 3 of 9: xi = 0.7745966692414834, eta = -0.7745966692414834, weight = 25/81 */
         const double J00 = gx_1_0 - 1.2*gx_2_1 + 0.6*gx_1_2 + 0.9295160030897801*gx_2_2
@@ -1614,23 +1818,25 @@ static inline void q9_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx9 = 0.6196773353931867*Ji01 - 0.6196773353931867*Ji00;
         const double dNdy9 = 0.6196773353931867*Ji11 - 0.6196773353931867*Ji10;
         const double q0 = alpha1*m4;
-        const double eps59 = q0 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 + 0.5*dNdx9*u17 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
-            - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16
-            - 0.5*dNdy9*u18;
-        const double eps60 = q0 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 + 0.5*dNdy9*u18 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
-            - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15
-            - 0.5*dNdx9*u17;
-        const double eps61 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+        const double q1 = 0.3872983346207417*alpha2*m5;
+        const double q2 = -0.3872983346207417*alpha3*m5;
+        const double eps63 = q0 + q1 + q2 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 + 0.5*dNdx9*u17 - 0.5*dNdy1*u2
+            - 0.5*dNdy2*u4 - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14
+            - 0.5*dNdy8*u16 - 0.5*dNdy9*u18;
+        const double eps64 = q0 + q1 + q2 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 + 0.5*dNdy9*u18 - 0.5*dNdx1*u1
+            - 0.5*dNdx2*u3 - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13
+            - 0.5*dNdx8*u15 - 0.5*dNdx9*u17;
+        const double eps65 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
             + dNdx8*u16 + dNdx9*u18 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
             + dNdy7*u13 + dNdy8*u15 + dNdy9*u17;
-        strain[6] = eps59;
-        strain[7] = eps60;
-        strain[8] = eps61;
-        stress[6] = eps59*m5 + eps60*m6;
-        stress[7] = eps59*m6 + eps60*m5;
-        stress[8] = eps61*m7;
+        strain[6] = eps63;
+        strain[7] = eps64;
+        strain[8] = eps65;
+        stress[6] = eps63*m6 + eps64*m7;
+        stress[7] = eps63*m7 + eps64*m6;
+        stress[8] = eps65*m8;
     }
     {   /* gauss-3x3 point 4 of 9: xi = -0.7745966692414834, eta = 0, weight = 40/81 */
         const double J00 = gx_1_0 - 1.5491933384829668*gx_2_0;
@@ -1662,23 +1868,24 @@ static inline void q9_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx9 = 1.5491933384829668*Ji00;
         const double dNdy9 = 1.5491933384829668*Ji10;
         const double q0 = alpha1*m4;
-        const double eps59 = q0 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 + 0.5*dNdx9*u17 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
-            - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16
-            - 0.5*dNdy9*u18;
-        const double eps60 = q0 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 + 0.5*dNdy9*u18 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
-            - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15
-            - 0.5*dNdx9*u17;
-        const double eps61 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+        const double q1 = -0.3872983346207417*alpha2*m5;
+        const double eps63 = q0 + q1 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 + 0.5*dNdx9*u17 - 0.5*dNdy1*u2
+            - 0.5*dNdy2*u4 - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14
+            - 0.5*dNdy8*u16 - 0.5*dNdy9*u18;
+        const double eps64 = q0 + q1 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 + 0.5*dNdy9*u18 - 0.5*dNdx1*u1
+            - 0.5*dNdx2*u3 - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13
+            - 0.5*dNdx8*u15 - 0.5*dNdx9*u17;
+        const double eps65 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
             + dNdx8*u16 + dNdx9*u18 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
             + dNdy7*u13 + dNdy8*u15 + dNdy9*u17;
-        strain[9] = eps59;
-        strain[10] = eps60;
-        strain[11] = eps61;
-        stress[9] = eps59*m5 + eps60*m6;
-        stress[10] = eps59*m6 + eps60*m5;
-        stress[11] = eps61*m7;
+        strain[9] = eps63;
+        strain[10] = eps64;
+        strain[11] = eps65;
+        stress[9] = eps63*m6 + eps64*m7;
+        stress[10] = eps63*m7 + eps64*m6;
+        stress[11] = eps65*m8;
     }
     {   /* gauss-3x3 point 5 of 9: xi = 0, eta = 0, weight = 64/81 */
         const double detJ = gx_1_0*gy_0_1 - gx_0_1*gy_1_0;
@@ -1696,18 +1903,18 @@ static inline void q9_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx8 = -0.5*Ji00;
         const double dNdy8 = -0.5*Ji10;
         const double q0 = alpha1*m4;
-        const double eps59 = q0 + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy5*u10
+        const double eps63 = q0 + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy5*u10
             - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16;
-        const double eps60 = q0 + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx5*u9
+        const double eps64 = q0 + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx5*u9
             - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15;
-        const double eps61 = dNdx5*u10 + dNdx6*u12 + dNdx7*u14 + dNdx8*u16 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
+        const double eps65 = dNdx5*u10 + dNdx6*u12 + dNdx7*u14 + dNdx8*u16 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13
             + dNdy8*u15;
-        strain[12] = eps59;
-        strain[13] = eps60;
-        strain[14] = eps61;
-        stress[12] = eps59*m5 + eps60*m6;
-        stress[13] = eps59*m6 + eps60*m5;
-        stress[14] = eps61*m7;
+        strain[12] = eps63;
+        strain[13] = eps64;
+        strain[14] = eps65;
+        stress[12] = eps63*m6 + eps64*m7;
+        stress[13] = eps63*m7 + eps64*m6;
+        stress[14] = eps65*m8;
     }
     {   /* gauss-3x3 point 6 of 9: xi = 0.7745966692414834, eta = 0, weight = 40/81 */
         const double J00 = gx_1_0 + 1.5491933384829668*gx_2_0;
@@ -1739,23 +1946,24 @@ static inline void q9_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx9 = -1.5491933384829668*Ji00;
         const double dNdy9 = -1.5491933384829668*Ji10;
         const double q0 = alpha1*m4;
-        const double eps59 = q0 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 + 0.5*dNdx9*u17 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
-            - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16
-            - 0.5*dNdy9*u18;
-        const double eps60 = q0 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 + 0.5*dNdy9*u18 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
-            - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15
-            - 0.5*dNdx9*u17;
-        const double eps61 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+        const double q1 = 0.3872983346207417*alpha2*m5;
+        const double eps63 = q0 + q1 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 + 0.5*dNdx9*u17 - 0.5*dNdy1*u2
+            - 0.5*dNdy2*u4 - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14
+            - 0.5*dNdy8*u16 - 0.5*dNdy9*u18;
+        const double eps64 = q0 + q1 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 + 0.5*dNdy9*u18 - 0.5*dNdx1*u1
+            - 0.5*dNdx2*u3 - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13
+            - 0.5*dNdx8*u15 - 0.5*dNdx9*u17;
+        const double eps65 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
             + dNdx8*u16 + dNdx9*u18 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
             + dNdy7*u13 + dNdy8*u15 + dNdy9*u17;
-        strain[15] = eps59;
-        strain[16] = eps60;
-        strain[17] = eps61;
-        stress[15] = eps59*m5 + eps60*m6;
-        stress[16] = eps59*m6 + eps60*m5;
-        stress[17] = eps61*m7;
+        strain[15] = eps63;
+        strain[16] = eps64;
+        strain[17] = eps65;
+        stress[15] = eps63*m6 + eps64*m7;
+        stress[16] = eps63*m7 + eps64*m6;
+        stress[17] = eps65*m8;
     }
     {   /* gauss-3x3 point 7 of 9: xi = -0.7745966692414834, eta = 0.7745966692414834, weight = 25/81 */
         const double J00 = gx_1_0 - 1.2*gx_2_1 + 0.6*gx_1_2 + 0.7745966692414834*gx_1_1
@@ -1791,23 +1999,25 @@ static inline void q9_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx9 = 0.6196773353931867*Ji00 - 0.6196773353931867*Ji01;
         const double dNdy9 = 0.6196773353931867*Ji10 - 0.6196773353931867*Ji11;
         const double q0 = alpha1*m4;
-        const double eps59 = q0 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 + 0.5*dNdx9*u17 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
-            - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16
-            - 0.5*dNdy9*u18;
-        const double eps60 = q0 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 + 0.5*dNdy9*u18 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
-            - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15
-            - 0.5*dNdx9*u17;
-        const double eps61 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+        const double q1 = 0.3872983346207417*alpha3*m5;
+        const double q2 = -0.3872983346207417*alpha2*m5;
+        const double eps63 = q0 + q1 + q2 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 + 0.5*dNdx9*u17 - 0.5*dNdy1*u2
+            - 0.5*dNdy2*u4 - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14
+            - 0.5*dNdy8*u16 - 0.5*dNdy9*u18;
+        const double eps64 = q0 + q1 + q2 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 + 0.5*dNdy9*u18 - 0.5*dNdx1*u1
+            - 0.5*dNdx2*u3 - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13
+            - 0.5*dNdx8*u15 - 0.5*dNdx9*u17;
+        const double eps65 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
             + dNdx8*u16 + dNdx9*u18 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
             + dNdy7*u13 + dNdy8*u15 + dNdy9*u17;
-        strain[18] = eps59;
-        strain[19] = eps60;
-        strain[20] = eps61;
-        stress[18] = eps59*m5 + eps60*m6;
-        stress[19] = eps59*m6 + eps60*m5;
-        stress[20] = eps61*m7;
+        strain[18] = eps63;
+        strain[19] = eps64;
+        strain[20] = eps65;
+        stress[18] = eps63*m6 + eps64*m7;
+        stress[19] = eps63*m7 + eps64*m6;
+        stress[20] = eps65*m8;
     }
     {   /* gauss-3x3 point 8 of 9: xi = 0, eta = 0.7745966692414834, weight = 40/81 */
         const double J00 = gx_1_0 + 0.6*gx_1_2 + 0.7745966692414834*gx_1_1;
@@ -1839,23 +2049,24 @@ static inline void q9_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx9 = -1.5491933384829668*Ji01;
         const double dNdy9 = -1.5491933384829668*Ji11;
         const double q0 = alpha1*m4;
-        const double eps59 = q0 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 + 0.5*dNdx9*u17 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
-            - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16
-            - 0.5*dNdy9*u18;
-        const double eps60 = q0 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 + 0.5*dNdy9*u18 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
-            - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15
-            - 0.5*dNdx9*u17;
-        const double eps61 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+        const double q1 = 0.3872983346207417*alpha3*m5;
+        const double eps63 = q0 + q1 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 + 0.5*dNdx9*u17 - 0.5*dNdy1*u2
+            - 0.5*dNdy2*u4 - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14
+            - 0.5*dNdy8*u16 - 0.5*dNdy9*u18;
+        const double eps64 = q0 + q1 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 + 0.5*dNdy9*u18 - 0.5*dNdx1*u1
+            - 0.5*dNdx2*u3 - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13
+            - 0.5*dNdx8*u15 - 0.5*dNdx9*u17;
+        const double eps65 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
             + dNdx8*u16 + dNdx9*u18 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
             + dNdy7*u13 + dNdy8*u15 + dNdy9*u17;
-        strain[21] = eps59;
-        strain[22] = eps60;
-        strain[23] = eps61;
-        stress[21] = eps59*m5 + eps60*m6;
-        stress[22] = eps59*m6 + eps60*m5;
-        stress[23] = eps61*m7;
+        strain[21] = eps63;
+        strain[22] = eps64;
+        strain[23] = eps65;
+        stress[21] = eps63*m6 + eps64*m7;
+        stress[22] = eps63*m7 + eps64*m6;
+        stress[23] = eps65*m8;
     }
     {   /* gauss-3x3 point 9 of 9: xi = 0.7745966692414834, eta = 0.7745966692414834, weight = 25/81 */
         const double q0 = 0.9295160030897801*gx_2_2;
@@ -1891,23 +2102,25 @@ static inline void q9_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx9 = -0.6196773353931867*Ji00 - 0.6196773353931867*Ji01;
         const double dNdy9 = -0.6196773353931867*Ji10 - 0.6196773353931867*Ji11;
         const double q4 = alpha1*m4;
-        const double eps59 = q4 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 + 0.5*dNdx9*u17 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
-            - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16
-            - 0.5*dNdy9*u18;
-        const double eps60 = q4 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 + 0.5*dNdy9*u18 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
-            - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15
-            - 0.5*dNdx9*u17;
-        const double eps61 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
+        const double q5 = 0.3872983346207417*alpha2*m5;
+        const double q6 = 0.3872983346207417*alpha3*m5;
+        const double eps63 = q4 + q5 + q6 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 + 0.5*dNdx9*u17 - 0.5*dNdy1*u2
+            - 0.5*dNdy2*u4 - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14
+            - 0.5*dNdy8*u16 - 0.5*dNdy9*u18;
+        const double eps64 = q4 + q5 + q6 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 + 0.5*dNdy9*u18 - 0.5*dNdx1*u1
+            - 0.5*dNdx2*u3 - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13
+            - 0.5*dNdx8*u15 - 0.5*dNdx9*u17;
+        const double eps65 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14
             + dNdx8*u16 + dNdx9*u18 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
             + dNdy7*u13 + dNdy8*u15 + dNdy9*u17;
-        strain[24] = eps59;
-        strain[25] = eps60;
-        strain[26] = eps61;
-        stress[24] = eps59*m5 + eps60*m6;
-        stress[25] = eps59*m6 + eps60*m5;
-        stress[26] = eps61*m7;
+        strain[24] = eps63;
+        strain[25] = eps64;
+        strain[26] = eps65;
+        stress[24] = eps63*m6 + eps64*m7;
+        stress[25] = eps63*m7 + eps64*m6;
+        stress[26] = eps65*m8;
     }
 }
 

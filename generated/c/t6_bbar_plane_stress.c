@@ -2,13 +2,13 @@
  * derive generated kernel: T6 bbar plane-stress
  *
  * element      T6, 6 nodes, 12 DOFs interleaved u1, v1, u2, v2, ...
- * formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed)
- *              [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
- * integration  B^T D_dev B: triangle-d2 (3 points); B^T m (g): triangle-d2 (3 points); -1/kappa
- *              (-V/kappa): triangle-d2 (3 points)
- * internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+ * formulation  B-bar, dilatation projected on a linear pressure {1, xi, eta}: K_dev + kappa g^T
+ *              M_p^-1 g [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
+ * integration  B^T D_dev B: triangle-d2 (3 points); B^T m pi (g): triangle-d2 (3 points); -pi^T pi
+ *              / kappa (-M_p / kappa): triangle-d2 (3 points)
+ * internal     3 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
  *              (unrolled factorisation of K_aa, no pivoting)
- * flops        stiffness 1624, validity 114, recovery 820 per element (add, mul, div, sqrt)
+ * flops        stiffness 2425, validity 114, recovery 1112 per element (add, mul, div, sqrt)
  *
  * arguments (units-agnostic; any consistent set of units):
  *   xy      nodal coordinates, shape (n, 6, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
@@ -17,7 +17,7 @@
  *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
  *   t       thickness t (the out-of-plane thickness)
  *   u       nodal displacements for recovery, shape (n, 12), interleaved u1, v1, u2, v2, ...
- *   K       stiffness, shape (n, 12, 12), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1
+ *   K       stiffness, shape (n, 12, 12), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 3
  *           internal unknowns are condensed
  *   detJ_min validity: min det J over the points of triangle-d2, shape (n,); <= 0 means an
  *            inverted or degenerate element
@@ -62,7 +62,7 @@
 
 #define NIN 12
 #define NK 144
-#define NMAT 11
+#define NMAT 12
 #define LANES 8
 #if defined(__GNUC__)
 /* inlined into the lane loop so that the loop over elements vectorises */
@@ -140,9 +140,10 @@ static inline void t6_bbar_plane_stress_material(double E, double nu, double t, 
     mat[5] = E/(2.0 + 2.0*nu);   /* m2 */
     mat[6] = -(-3.0 + 3.0*nu*nu)/(-E - 2.0*E*nu);   /* m3 */
     mat[7] = 0.5*(-3.0 + 3.0*nu*nu)/(-E - 2.0*E*nu);   /* m4 */
-    mat[8] = E/(1.0 - nu*nu);   /* m5 */
-    mat[9] = E*nu/(1.0 - nu*nu);   /* m6 */
-    mat[10] = E*(0.5 - 0.5*nu)/(1.0 - nu*nu);   /* m7 */
+    mat[8] = (-3.0 + 3.0*nu*nu)/(-E - 2.0*E*nu);   /* m5 */
+    mat[9] = E/(1.0 - nu*nu);   /* m6 */
+    mat[10] = E*nu/(1.0 - nu*nu);   /* m7 */
+    mat[11] = E*(0.5 - 0.5*nu)/(1.0 - nu*nu);   /* m8 */
 }
 
 /* stiffness of one element; xy[k * sx] is input k, K[k * sk] output k (row-major) */
@@ -190,9 +191,13 @@ DERIVE_INLINE void t6_bbar_plane_stress_stiffness_body(const double *restrict xy
     double K_5_11 = 0.0, K_6_6 = 0.0, K_6_7 = 0.0, K_6_8 = 0.0, K_6_9 = 0.0, K_6_10 = 0.0;
     double K_6_11 = 0.0, K_7_7 = 0.0, K_7_8 = 0.0, K_7_9 = 0.0, K_7_10 = 0.0, K_7_11 = 0.0;
     double K_8_8 = 0.0, K_8_9 = 0.0, K_8_10 = 0.0, K_8_11 = 0.0, K_9_9 = 0.0, K_9_10 = 0.0;
-    double K_9_11 = 0.0, K_10_10 = 0.0, K_10_11 = 0.0, K_11_11 = 0.0, A_0_0 = 0.0, A_1_0 = 0.0;
-    double A_2_0 = 0.0, A_3_0 = 0.0, A_4_0 = 0.0, A_5_0 = 0.0, A_6_0 = 0.0, A_7_0 = 0.0, A_8_0 = 0.0;
-    double A_9_0 = 0.0, A_10_0 = 0.0, A_11_0 = 0.0, H_0_0 = 0.0;
+    double K_9_11 = 0.0, K_10_10 = 0.0, K_10_11 = 0.0, K_11_11 = 0.0, A_0_0 = 0.0, A_0_1 = 0.0;
+    double A_0_2 = 0.0, A_1_0 = 0.0, A_1_1 = 0.0, A_1_2 = 0.0, A_2_0 = 0.0, A_2_1 = 0.0, A_2_2 = 0.0;
+    double A_3_0 = 0.0, A_3_1 = 0.0, A_3_2 = 0.0, A_4_0 = 0.0, A_4_1 = 0.0, A_4_2 = 0.0, A_5_0 = 0.0;
+    double A_5_1 = 0.0, A_5_2 = 0.0, A_6_0 = 0.0, A_6_1 = 0.0, A_6_2 = 0.0, A_7_0 = 0.0, A_7_1 = 0.0;
+    double A_7_2 = 0.0, A_8_0 = 0.0, A_8_1 = 0.0, A_8_2 = 0.0, A_9_0 = 0.0, A_9_1 = 0.0, A_9_2 = 0.0;
+    double A_10_0 = 0.0, A_10_1 = 0.0, A_10_2 = 0.0, A_11_0 = 0.0, A_11_1 = 0.0, A_11_2 = 0.0;
+    double H_0_0 = 0.0, H_0_1 = 0.0, H_0_2 = 0.0, H_1_1 = 0.0, H_1_2 = 0.0, H_2_2 = 0.0;
     for (int p = 0; p < 3; ++p) {   /* triangle-d2: loop over the 3 points */
         const double c0 = KS0_c0[p];
         const double c1 = KS0_c1[p];
@@ -269,7 +274,11 @@ DERIVE_INLINE void t6_bbar_plane_stress_stiffness_body(const double *restrict xy
         const double T37 = dNdy6*s2;
         const double T38 = dNdy6*s1;
         const double T39 = dNdx6*s3;
-        const double s40 = m3*sc0;
+        const double T40 = sc0*xi;
+        const double T41 = eta*sc0;
+        const double s42 = m3*sc0;
+        const double T43 = s42*xi;
+        const double T44 = eta*s42;
         K_0_0 += T4*dNdx1 + T6*dNdy1;
         K_0_1 += T7*dNdx1 + T9*dNdy1;
         K_0_2 += T10*dNdx1 + T12*dNdy1;
@@ -349,177 +358,261 @@ DERIVE_INLINE void t6_bbar_plane_stress_stiffness_body(const double *restrict xy
         K_10_11 += T37*dNdx6 + T39*dNdy6;
         K_11_11 += T38*dNdy6 + T39*dNdx6;
         A_0_0 += dNdx1*sc0;
+        A_0_1 += T40*dNdx1;
+        A_0_2 += T41*dNdx1;
         A_1_0 += dNdy1*sc0;
+        A_1_1 += T40*dNdy1;
+        A_1_2 += T41*dNdy1;
         A_2_0 += dNdx2*sc0;
+        A_2_1 += T40*dNdx2;
+        A_2_2 += T41*dNdx2;
         A_3_0 += dNdy2*sc0;
+        A_3_1 += T40*dNdy2;
+        A_3_2 += T41*dNdy2;
         A_4_0 += dNdx3*sc0;
+        A_4_1 += T40*dNdx3;
+        A_4_2 += T41*dNdx3;
         A_5_0 += dNdy3*sc0;
+        A_5_1 += T40*dNdy3;
+        A_5_2 += T41*dNdy3;
         A_6_0 += dNdx4*sc0;
+        A_6_1 += T40*dNdx4;
+        A_6_2 += T41*dNdx4;
         A_7_0 += dNdy4*sc0;
+        A_7_1 += T40*dNdy4;
+        A_7_2 += T41*dNdy4;
         A_8_0 += dNdx5*sc0;
+        A_8_1 += T40*dNdx5;
+        A_8_2 += T41*dNdx5;
         A_9_0 += dNdy5*sc0;
+        A_9_1 += T40*dNdy5;
+        A_9_2 += T41*dNdy5;
         A_10_0 += dNdx6*sc0;
+        A_10_1 += T40*dNdx6;
+        A_10_2 += T41*dNdx6;
         A_11_0 += dNdy6*sc0;
-        H_0_0 += s40;
+        A_11_1 += T40*dNdy6;
+        A_11_2 += T41*dNdy6;
+        H_0_0 += s42;
+        H_0_1 += T43;
+        H_0_2 += T44;
+        H_1_1 += T43*xi;
+        H_1_2 += T44*xi;
+        H_2_2 += T44*eta;
     }
     /* static condensation of the internal unknowns */
     const double cid0 = 1.0/H_0_0;
+    const double cL1_0 = H_0_1*cid0;
+    const double cL2_0 = H_0_2*cid0;
+    const double cd1 = H_1_1 - H_0_0*cL1_0*cL1_0;
+    const double cid1 = 1.0/cd1;
+    const double cL2_1 = cid1*(H_1_2 - H_0_0*cL1_0*cL2_0);
+    const double cd2 = H_2_2 - H_0_0*cL2_0*cL2_0 - cd1*cL2_1*cL2_1;
+    const double cid2 = 1.0/cd2;
+    const double cy1_0 = A_0_1 - A_0_0*cL1_0;
+    const double cy2_0 = A_0_2 - A_0_0*cL2_0 - cL2_1*cy1_0;
+    const double cy1_1 = A_1_1 - A_1_0*cL1_0;
+    const double cy2_1 = A_1_2 - A_1_0*cL2_0 - cL2_1*cy1_1;
+    const double cy1_2 = A_2_1 - A_2_0*cL1_0;
+    const double cy2_2 = A_2_2 - A_2_0*cL2_0 - cL2_1*cy1_2;
+    const double cy1_3 = A_3_1 - A_3_0*cL1_0;
+    const double cy2_3 = A_3_2 - A_3_0*cL2_0 - cL2_1*cy1_3;
+    const double cy1_4 = A_4_1 - A_4_0*cL1_0;
+    const double cy2_4 = A_4_2 - A_4_0*cL2_0 - cL2_1*cy1_4;
+    const double cy1_5 = A_5_1 - A_5_0*cL1_0;
+    const double cy2_5 = A_5_2 - A_5_0*cL2_0 - cL2_1*cy1_5;
+    const double cy1_6 = A_6_1 - A_6_0*cL1_0;
+    const double cy2_6 = A_6_2 - A_6_0*cL2_0 - cL2_1*cy1_6;
+    const double cy1_7 = A_7_1 - A_7_0*cL1_0;
+    const double cy2_7 = A_7_2 - A_7_0*cL2_0 - cL2_1*cy1_7;
+    const double cy1_8 = A_8_1 - A_8_0*cL1_0;
+    const double cy2_8 = A_8_2 - A_8_0*cL2_0 - cL2_1*cy1_8;
+    const double cy1_9 = A_9_1 - A_9_0*cL1_0;
+    const double cy2_9 = A_9_2 - A_9_0*cL2_0 - cL2_1*cy1_9;
+    const double cy1_10 = A_10_1 - A_10_0*cL1_0;
+    const double cy2_10 = A_10_2 - A_10_0*cL2_0 - cL2_1*cy1_10;
+    const double cy1_11 = A_11_1 - A_11_0*cL1_0;
+    const double cy2_11 = A_11_2 - A_11_0*cL2_0 - cL2_1*cy1_11;
     const double cz0_0 = A_0_0*cid0;
+    const double cz1_0 = cid1*cy1_0;
+    const double cz2_0 = cid2*cy2_0;
     const double cz0_1 = A_1_0*cid0;
+    const double cz1_1 = cid1*cy1_1;
+    const double cz2_1 = cid2*cy2_1;
     const double cz0_2 = A_2_0*cid0;
+    const double cz1_2 = cid1*cy1_2;
+    const double cz2_2 = cid2*cy2_2;
     const double cz0_3 = A_3_0*cid0;
+    const double cz1_3 = cid1*cy1_3;
+    const double cz2_3 = cid2*cy2_3;
     const double cz0_4 = A_4_0*cid0;
+    const double cz1_4 = cid1*cy1_4;
+    const double cz2_4 = cid2*cy2_4;
     const double cz0_5 = A_5_0*cid0;
+    const double cz1_5 = cid1*cy1_5;
+    const double cz2_5 = cid2*cy2_5;
     const double cz0_6 = A_6_0*cid0;
+    const double cz1_6 = cid1*cy1_6;
+    const double cz2_6 = cid2*cy2_6;
     const double cz0_7 = A_7_0*cid0;
+    const double cz1_7 = cid1*cy1_7;
+    const double cz2_7 = cid2*cy2_7;
     const double cz0_8 = A_8_0*cid0;
+    const double cz1_8 = cid1*cy1_8;
+    const double cz2_8 = cid2*cy2_8;
     const double cz0_9 = A_9_0*cid0;
+    const double cz1_9 = cid1*cy1_9;
+    const double cz2_9 = cid2*cy2_9;
     const double cz0_10 = A_10_0*cid0;
+    const double cz1_10 = cid1*cy1_10;
+    const double cz2_10 = cid2*cy2_10;
     const double cz0_11 = A_11_0*cid0;
-    K[0 * sk] = K_0_0 - A_0_0*cz0_0;
-    K[1 * sk] = K_0_1 - A_1_0*cz0_0;
-    K[2 * sk] = K_0_2 - A_2_0*cz0_0;
-    K[3 * sk] = K_0_3 - A_3_0*cz0_0;
-    K[4 * sk] = K_0_4 - A_4_0*cz0_0;
-    K[5 * sk] = K_0_5 - A_5_0*cz0_0;
-    K[6 * sk] = K_0_6 - A_6_0*cz0_0;
-    K[7 * sk] = K_0_7 - A_7_0*cz0_0;
-    K[8 * sk] = K_0_8 - A_8_0*cz0_0;
-    K[9 * sk] = K_0_9 - A_9_0*cz0_0;
-    K[10 * sk] = K_0_10 - A_10_0*cz0_0;
-    K[11 * sk] = K_0_11 - A_11_0*cz0_0;
-    K[12 * sk] = K_0_1 - A_1_0*cz0_0;
-    K[13 * sk] = K_1_1 - A_1_0*cz0_1;
-    K[14 * sk] = K_1_2 - A_2_0*cz0_1;
-    K[15 * sk] = K_1_3 - A_3_0*cz0_1;
-    K[16 * sk] = K_1_4 - A_4_0*cz0_1;
-    K[17 * sk] = K_1_5 - A_5_0*cz0_1;
-    K[18 * sk] = K_1_6 - A_6_0*cz0_1;
-    K[19 * sk] = K_1_7 - A_7_0*cz0_1;
-    K[20 * sk] = K_1_8 - A_8_0*cz0_1;
-    K[21 * sk] = K_1_9 - A_9_0*cz0_1;
-    K[22 * sk] = K_1_10 - A_10_0*cz0_1;
-    K[23 * sk] = K_1_11 - A_11_0*cz0_1;
-    K[24 * sk] = K_0_2 - A_2_0*cz0_0;
-    K[25 * sk] = K_1_2 - A_2_0*cz0_1;
-    K[26 * sk] = K_2_2 - A_2_0*cz0_2;
-    K[27 * sk] = K_2_3 - A_3_0*cz0_2;
-    K[28 * sk] = K_2_4 - A_4_0*cz0_2;
-    K[29 * sk] = K_2_5 - A_5_0*cz0_2;
-    K[30 * sk] = K_2_6 - A_6_0*cz0_2;
-    K[31 * sk] = K_2_7 - A_7_0*cz0_2;
-    K[32 * sk] = K_2_8 - A_8_0*cz0_2;
-    K[33 * sk] = K_2_9 - A_9_0*cz0_2;
-    K[34 * sk] = K_2_10 - A_10_0*cz0_2;
-    K[35 * sk] = K_2_11 - A_11_0*cz0_2;
-    K[36 * sk] = K_0_3 - A_3_0*cz0_0;
-    K[37 * sk] = K_1_3 - A_3_0*cz0_1;
-    K[38 * sk] = K_2_3 - A_3_0*cz0_2;
-    K[39 * sk] = K_3_3 - A_3_0*cz0_3;
-    K[40 * sk] = K_3_4 - A_4_0*cz0_3;
-    K[41 * sk] = K_3_5 - A_5_0*cz0_3;
-    K[42 * sk] = K_3_6 - A_6_0*cz0_3;
-    K[43 * sk] = K_3_7 - A_7_0*cz0_3;
-    K[44 * sk] = K_3_8 - A_8_0*cz0_3;
-    K[45 * sk] = K_3_9 - A_9_0*cz0_3;
-    K[46 * sk] = K_3_10 - A_10_0*cz0_3;
-    K[47 * sk] = K_3_11 - A_11_0*cz0_3;
-    K[48 * sk] = K_0_4 - A_4_0*cz0_0;
-    K[49 * sk] = K_1_4 - A_4_0*cz0_1;
-    K[50 * sk] = K_2_4 - A_4_0*cz0_2;
-    K[51 * sk] = K_3_4 - A_4_0*cz0_3;
-    K[52 * sk] = K_4_4 - A_4_0*cz0_4;
-    K[53 * sk] = K_4_5 - A_5_0*cz0_4;
-    K[54 * sk] = K_4_6 - A_6_0*cz0_4;
-    K[55 * sk] = K_4_7 - A_7_0*cz0_4;
-    K[56 * sk] = K_4_8 - A_8_0*cz0_4;
-    K[57 * sk] = K_4_9 - A_9_0*cz0_4;
-    K[58 * sk] = K_4_10 - A_10_0*cz0_4;
-    K[59 * sk] = K_4_11 - A_11_0*cz0_4;
-    K[60 * sk] = K_0_5 - A_5_0*cz0_0;
-    K[61 * sk] = K_1_5 - A_5_0*cz0_1;
-    K[62 * sk] = K_2_5 - A_5_0*cz0_2;
-    K[63 * sk] = K_3_5 - A_5_0*cz0_3;
-    K[64 * sk] = K_4_5 - A_5_0*cz0_4;
-    K[65 * sk] = K_5_5 - A_5_0*cz0_5;
-    K[66 * sk] = K_5_6 - A_6_0*cz0_5;
-    K[67 * sk] = K_5_7 - A_7_0*cz0_5;
-    K[68 * sk] = K_5_8 - A_8_0*cz0_5;
-    K[69 * sk] = K_5_9 - A_9_0*cz0_5;
-    K[70 * sk] = K_5_10 - A_10_0*cz0_5;
-    K[71 * sk] = K_5_11 - A_11_0*cz0_5;
-    K[72 * sk] = K_0_6 - A_6_0*cz0_0;
-    K[73 * sk] = K_1_6 - A_6_0*cz0_1;
-    K[74 * sk] = K_2_6 - A_6_0*cz0_2;
-    K[75 * sk] = K_3_6 - A_6_0*cz0_3;
-    K[76 * sk] = K_4_6 - A_6_0*cz0_4;
-    K[77 * sk] = K_5_6 - A_6_0*cz0_5;
-    K[78 * sk] = K_6_6 - A_6_0*cz0_6;
-    K[79 * sk] = K_6_7 - A_7_0*cz0_6;
-    K[80 * sk] = K_6_8 - A_8_0*cz0_6;
-    K[81 * sk] = K_6_9 - A_9_0*cz0_6;
-    K[82 * sk] = K_6_10 - A_10_0*cz0_6;
-    K[83 * sk] = K_6_11 - A_11_0*cz0_6;
-    K[84 * sk] = K_0_7 - A_7_0*cz0_0;
-    K[85 * sk] = K_1_7 - A_7_0*cz0_1;
-    K[86 * sk] = K_2_7 - A_7_0*cz0_2;
-    K[87 * sk] = K_3_7 - A_7_0*cz0_3;
-    K[88 * sk] = K_4_7 - A_7_0*cz0_4;
-    K[89 * sk] = K_5_7 - A_7_0*cz0_5;
-    K[90 * sk] = K_6_7 - A_7_0*cz0_6;
-    K[91 * sk] = K_7_7 - A_7_0*cz0_7;
-    K[92 * sk] = K_7_8 - A_8_0*cz0_7;
-    K[93 * sk] = K_7_9 - A_9_0*cz0_7;
-    K[94 * sk] = K_7_10 - A_10_0*cz0_7;
-    K[95 * sk] = K_7_11 - A_11_0*cz0_7;
-    K[96 * sk] = K_0_8 - A_8_0*cz0_0;
-    K[97 * sk] = K_1_8 - A_8_0*cz0_1;
-    K[98 * sk] = K_2_8 - A_8_0*cz0_2;
-    K[99 * sk] = K_3_8 - A_8_0*cz0_3;
-    K[100 * sk] = K_4_8 - A_8_0*cz0_4;
-    K[101 * sk] = K_5_8 - A_8_0*cz0_5;
-    K[102 * sk] = K_6_8 - A_8_0*cz0_6;
-    K[103 * sk] = K_7_8 - A_8_0*cz0_7;
-    K[104 * sk] = K_8_8 - A_8_0*cz0_8;
-    K[105 * sk] = K_8_9 - A_9_0*cz0_8;
-    K[106 * sk] = K_8_10 - A_10_0*cz0_8;
-    K[107 * sk] = K_8_11 - A_11_0*cz0_8;
-    K[108 * sk] = K_0_9 - A_9_0*cz0_0;
-    K[109 * sk] = K_1_9 - A_9_0*cz0_1;
-    K[110 * sk] = K_2_9 - A_9_0*cz0_2;
-    K[111 * sk] = K_3_9 - A_9_0*cz0_3;
-    K[112 * sk] = K_4_9 - A_9_0*cz0_4;
-    K[113 * sk] = K_5_9 - A_9_0*cz0_5;
-    K[114 * sk] = K_6_9 - A_9_0*cz0_6;
-    K[115 * sk] = K_7_9 - A_9_0*cz0_7;
-    K[116 * sk] = K_8_9 - A_9_0*cz0_8;
-    K[117 * sk] = K_9_9 - A_9_0*cz0_9;
-    K[118 * sk] = K_9_10 - A_10_0*cz0_9;
-    K[119 * sk] = K_9_11 - A_11_0*cz0_9;
-    K[120 * sk] = K_0_10 - A_10_0*cz0_0;
-    K[121 * sk] = K_1_10 - A_10_0*cz0_1;
-    K[122 * sk] = K_2_10 - A_10_0*cz0_2;
-    K[123 * sk] = K_3_10 - A_10_0*cz0_3;
-    K[124 * sk] = K_4_10 - A_10_0*cz0_4;
-    K[125 * sk] = K_5_10 - A_10_0*cz0_5;
-    K[126 * sk] = K_6_10 - A_10_0*cz0_6;
-    K[127 * sk] = K_7_10 - A_10_0*cz0_7;
-    K[128 * sk] = K_8_10 - A_10_0*cz0_8;
-    K[129 * sk] = K_9_10 - A_10_0*cz0_9;
-    K[130 * sk] = K_10_10 - A_10_0*cz0_10;
-    K[131 * sk] = K_10_11 - A_11_0*cz0_10;
-    K[132 * sk] = K_0_11 - A_11_0*cz0_0;
-    K[133 * sk] = K_1_11 - A_11_0*cz0_1;
-    K[134 * sk] = K_2_11 - A_11_0*cz0_2;
-    K[135 * sk] = K_3_11 - A_11_0*cz0_3;
-    K[136 * sk] = K_4_11 - A_11_0*cz0_4;
-    K[137 * sk] = K_5_11 - A_11_0*cz0_5;
-    K[138 * sk] = K_6_11 - A_11_0*cz0_6;
-    K[139 * sk] = K_7_11 - A_11_0*cz0_7;
-    K[140 * sk] = K_8_11 - A_11_0*cz0_8;
-    K[141 * sk] = K_9_11 - A_11_0*cz0_9;
-    K[142 * sk] = K_10_11 - A_11_0*cz0_10;
-    K[143 * sk] = K_11_11 - A_11_0*cz0_11;
+    const double cz1_11 = cid1*cy1_11;
+    const double cz2_11 = cid2*cy2_11;
+    K[0 * sk] = K_0_0 - A_0_0*cz0_0 - cy1_0*cz1_0 - cy2_0*cz2_0;
+    K[1 * sk] = K_0_1 - A_1_0*cz0_0 - cy1_1*cz1_0 - cy2_1*cz2_0;
+    K[2 * sk] = K_0_2 - A_2_0*cz0_0 - cy1_2*cz1_0 - cy2_2*cz2_0;
+    K[3 * sk] = K_0_3 - A_3_0*cz0_0 - cy1_3*cz1_0 - cy2_3*cz2_0;
+    K[4 * sk] = K_0_4 - A_4_0*cz0_0 - cy1_4*cz1_0 - cy2_4*cz2_0;
+    K[5 * sk] = K_0_5 - A_5_0*cz0_0 - cy1_5*cz1_0 - cy2_5*cz2_0;
+    K[6 * sk] = K_0_6 - A_6_0*cz0_0 - cy1_6*cz1_0 - cy2_6*cz2_0;
+    K[7 * sk] = K_0_7 - A_7_0*cz0_0 - cy1_7*cz1_0 - cy2_7*cz2_0;
+    K[8 * sk] = K_0_8 - A_8_0*cz0_0 - cy1_8*cz1_0 - cy2_8*cz2_0;
+    K[9 * sk] = K_0_9 - A_9_0*cz0_0 - cy1_9*cz1_0 - cy2_9*cz2_0;
+    K[10 * sk] = K_0_10 - A_10_0*cz0_0 - cy1_10*cz1_0 - cy2_10*cz2_0;
+    K[11 * sk] = K_0_11 - A_11_0*cz0_0 - cy1_11*cz1_0 - cy2_11*cz2_0;
+    K[12 * sk] = K_0_1 - A_1_0*cz0_0 - cy1_1*cz1_0 - cy2_1*cz2_0;
+    K[13 * sk] = K_1_1 - A_1_0*cz0_1 - cy1_1*cz1_1 - cy2_1*cz2_1;
+    K[14 * sk] = K_1_2 - A_2_0*cz0_1 - cy1_2*cz1_1 - cy2_2*cz2_1;
+    K[15 * sk] = K_1_3 - A_3_0*cz0_1 - cy1_3*cz1_1 - cy2_3*cz2_1;
+    K[16 * sk] = K_1_4 - A_4_0*cz0_1 - cy1_4*cz1_1 - cy2_4*cz2_1;
+    K[17 * sk] = K_1_5 - A_5_0*cz0_1 - cy1_5*cz1_1 - cy2_5*cz2_1;
+    K[18 * sk] = K_1_6 - A_6_0*cz0_1 - cy1_6*cz1_1 - cy2_6*cz2_1;
+    K[19 * sk] = K_1_7 - A_7_0*cz0_1 - cy1_7*cz1_1 - cy2_7*cz2_1;
+    K[20 * sk] = K_1_8 - A_8_0*cz0_1 - cy1_8*cz1_1 - cy2_8*cz2_1;
+    K[21 * sk] = K_1_9 - A_9_0*cz0_1 - cy1_9*cz1_1 - cy2_9*cz2_1;
+    K[22 * sk] = K_1_10 - A_10_0*cz0_1 - cy1_10*cz1_1 - cy2_10*cz2_1;
+    K[23 * sk] = K_1_11 - A_11_0*cz0_1 - cy1_11*cz1_1 - cy2_11*cz2_1;
+    K[24 * sk] = K_0_2 - A_2_0*cz0_0 - cy1_2*cz1_0 - cy2_2*cz2_0;
+    K[25 * sk] = K_1_2 - A_2_0*cz0_1 - cy1_2*cz1_1 - cy2_2*cz2_1;
+    K[26 * sk] = K_2_2 - A_2_0*cz0_2 - cy1_2*cz1_2 - cy2_2*cz2_2;
+    K[27 * sk] = K_2_3 - A_3_0*cz0_2 - cy1_3*cz1_2 - cy2_3*cz2_2;
+    K[28 * sk] = K_2_4 - A_4_0*cz0_2 - cy1_4*cz1_2 - cy2_4*cz2_2;
+    K[29 * sk] = K_2_5 - A_5_0*cz0_2 - cy1_5*cz1_2 - cy2_5*cz2_2;
+    K[30 * sk] = K_2_6 - A_6_0*cz0_2 - cy1_6*cz1_2 - cy2_6*cz2_2;
+    K[31 * sk] = K_2_7 - A_7_0*cz0_2 - cy1_7*cz1_2 - cy2_7*cz2_2;
+    K[32 * sk] = K_2_8 - A_8_0*cz0_2 - cy1_8*cz1_2 - cy2_8*cz2_2;
+    K[33 * sk] = K_2_9 - A_9_0*cz0_2 - cy1_9*cz1_2 - cy2_9*cz2_2;
+    K[34 * sk] = K_2_10 - A_10_0*cz0_2 - cy1_10*cz1_2 - cy2_10*cz2_2;
+    K[35 * sk] = K_2_11 - A_11_0*cz0_2 - cy1_11*cz1_2 - cy2_11*cz2_2;
+    K[36 * sk] = K_0_3 - A_3_0*cz0_0 - cy1_3*cz1_0 - cy2_3*cz2_0;
+    K[37 * sk] = K_1_3 - A_3_0*cz0_1 - cy1_3*cz1_1 - cy2_3*cz2_1;
+    K[38 * sk] = K_2_3 - A_3_0*cz0_2 - cy1_3*cz1_2 - cy2_3*cz2_2;
+    K[39 * sk] = K_3_3 - A_3_0*cz0_3 - cy1_3*cz1_3 - cy2_3*cz2_3;
+    K[40 * sk] = K_3_4 - A_4_0*cz0_3 - cy1_4*cz1_3 - cy2_4*cz2_3;
+    K[41 * sk] = K_3_5 - A_5_0*cz0_3 - cy1_5*cz1_3 - cy2_5*cz2_3;
+    K[42 * sk] = K_3_6 - A_6_0*cz0_3 - cy1_6*cz1_3 - cy2_6*cz2_3;
+    K[43 * sk] = K_3_7 - A_7_0*cz0_3 - cy1_7*cz1_3 - cy2_7*cz2_3;
+    K[44 * sk] = K_3_8 - A_8_0*cz0_3 - cy1_8*cz1_3 - cy2_8*cz2_3;
+    K[45 * sk] = K_3_9 - A_9_0*cz0_3 - cy1_9*cz1_3 - cy2_9*cz2_3;
+    K[46 * sk] = K_3_10 - A_10_0*cz0_3 - cy1_10*cz1_3 - cy2_10*cz2_3;
+    K[47 * sk] = K_3_11 - A_11_0*cz0_3 - cy1_11*cz1_3 - cy2_11*cz2_3;
+    K[48 * sk] = K_0_4 - A_4_0*cz0_0 - cy1_4*cz1_0 - cy2_4*cz2_0;
+    K[49 * sk] = K_1_4 - A_4_0*cz0_1 - cy1_4*cz1_1 - cy2_4*cz2_1;
+    K[50 * sk] = K_2_4 - A_4_0*cz0_2 - cy1_4*cz1_2 - cy2_4*cz2_2;
+    K[51 * sk] = K_3_4 - A_4_0*cz0_3 - cy1_4*cz1_3 - cy2_4*cz2_3;
+    K[52 * sk] = K_4_4 - A_4_0*cz0_4 - cy1_4*cz1_4 - cy2_4*cz2_4;
+    K[53 * sk] = K_4_5 - A_5_0*cz0_4 - cy1_5*cz1_4 - cy2_5*cz2_4;
+    K[54 * sk] = K_4_6 - A_6_0*cz0_4 - cy1_6*cz1_4 - cy2_6*cz2_4;
+    K[55 * sk] = K_4_7 - A_7_0*cz0_4 - cy1_7*cz1_4 - cy2_7*cz2_4;
+    K[56 * sk] = K_4_8 - A_8_0*cz0_4 - cy1_8*cz1_4 - cy2_8*cz2_4;
+    K[57 * sk] = K_4_9 - A_9_0*cz0_4 - cy1_9*cz1_4 - cy2_9*cz2_4;
+    K[58 * sk] = K_4_10 - A_10_0*cz0_4 - cy1_10*cz1_4 - cy2_10*cz2_4;
+    K[59 * sk] = K_4_11 - A_11_0*cz0_4 - cy1_11*cz1_4 - cy2_11*cz2_4;
+    K[60 * sk] = K_0_5 - A_5_0*cz0_0 - cy1_5*cz1_0 - cy2_5*cz2_0;
+    K[61 * sk] = K_1_5 - A_5_0*cz0_1 - cy1_5*cz1_1 - cy2_5*cz2_1;
+    K[62 * sk] = K_2_5 - A_5_0*cz0_2 - cy1_5*cz1_2 - cy2_5*cz2_2;
+    K[63 * sk] = K_3_5 - A_5_0*cz0_3 - cy1_5*cz1_3 - cy2_5*cz2_3;
+    K[64 * sk] = K_4_5 - A_5_0*cz0_4 - cy1_5*cz1_4 - cy2_5*cz2_4;
+    K[65 * sk] = K_5_5 - A_5_0*cz0_5 - cy1_5*cz1_5 - cy2_5*cz2_5;
+    K[66 * sk] = K_5_6 - A_6_0*cz0_5 - cy1_6*cz1_5 - cy2_6*cz2_5;
+    K[67 * sk] = K_5_7 - A_7_0*cz0_5 - cy1_7*cz1_5 - cy2_7*cz2_5;
+    K[68 * sk] = K_5_8 - A_8_0*cz0_5 - cy1_8*cz1_5 - cy2_8*cz2_5;
+    K[69 * sk] = K_5_9 - A_9_0*cz0_5 - cy1_9*cz1_5 - cy2_9*cz2_5;
+    K[70 * sk] = K_5_10 - A_10_0*cz0_5 - cy1_10*cz1_5 - cy2_10*cz2_5;
+    K[71 * sk] = K_5_11 - A_11_0*cz0_5 - cy1_11*cz1_5 - cy2_11*cz2_5;
+    K[72 * sk] = K_0_6 - A_6_0*cz0_0 - cy1_6*cz1_0 - cy2_6*cz2_0;
+    K[73 * sk] = K_1_6 - A_6_0*cz0_1 - cy1_6*cz1_1 - cy2_6*cz2_1;
+    K[74 * sk] = K_2_6 - A_6_0*cz0_2 - cy1_6*cz1_2 - cy2_6*cz2_2;
+    K[75 * sk] = K_3_6 - A_6_0*cz0_3 - cy1_6*cz1_3 - cy2_6*cz2_3;
+    K[76 * sk] = K_4_6 - A_6_0*cz0_4 - cy1_6*cz1_4 - cy2_6*cz2_4;
+    K[77 * sk] = K_5_6 - A_6_0*cz0_5 - cy1_6*cz1_5 - cy2_6*cz2_5;
+    K[78 * sk] = K_6_6 - A_6_0*cz0_6 - cy1_6*cz1_6 - cy2_6*cz2_6;
+    K[79 * sk] = K_6_7 - A_7_0*cz0_6 - cy1_7*cz1_6 - cy2_7*cz2_6;
+    K[80 * sk] = K_6_8 - A_8_0*cz0_6 - cy1_8*cz1_6 - cy2_8*cz2_6;
+    K[81 * sk] = K_6_9 - A_9_0*cz0_6 - cy1_9*cz1_6 - cy2_9*cz2_6;
+    K[82 * sk] = K_6_10 - A_10_0*cz0_6 - cy1_10*cz1_6 - cy2_10*cz2_6;
+    K[83 * sk] = K_6_11 - A_11_0*cz0_6 - cy1_11*cz1_6 - cy2_11*cz2_6;
+    K[84 * sk] = K_0_7 - A_7_0*cz0_0 - cy1_7*cz1_0 - cy2_7*cz2_0;
+    K[85 * sk] = K_1_7 - A_7_0*cz0_1 - cy1_7*cz1_1 - cy2_7*cz2_1;
+    K[86 * sk] = K_2_7 - A_7_0*cz0_2 - cy1_7*cz1_2 - cy2_7*cz2_2;
+    K[87 * sk] = K_3_7 - A_7_0*cz0_3 - cy1_7*cz1_3 - cy2_7*cz2_3;
+    K[88 * sk] = K_4_7 - A_7_0*cz0_4 - cy1_7*cz1_4 - cy2_7*cz2_4;
+    K[89 * sk] = K_5_7 - A_7_0*cz0_5 - cy1_7*cz1_5 - cy2_7*cz2_5;
+    K[90 * sk] = K_6_7 - A_7_0*cz0_6 - cy1_7*cz1_6 - cy2_7*cz2_6;
+    K[91 * sk] = K_7_7 - A_7_0*cz0_7 - cy1_7*cz1_7 - cy2_7*cz2_7;
+    K[92 * sk] = K_7_8 - A_8_0*cz0_7 - cy1_8*cz1_7 - cy2_8*cz2_7;
+    K[93 * sk] = K_7_9 - A_9_0*cz0_7 - cy1_9*cz1_7 - cy2_9*cz2_7;
+    K[94 * sk] = K_7_10 - A_10_0*cz0_7 - cy1_10*cz1_7 - cy2_10*cz2_7;
+    K[95 * sk] = K_7_11 - A_11_0*cz0_7 - cy1_11*cz1_7 - cy2_11*cz2_7;
+    K[96 * sk] = K_0_8 - A_8_0*cz0_0 - cy1_8*cz1_0 - cy2_8*cz2_0;
+    K[97 * sk] = K_1_8 - A_8_0*cz0_1 - cy1_8*cz1_1 - cy2_8*cz2_1;
+    K[98 * sk] = K_2_8 - A_8_0*cz0_2 - cy1_8*cz1_2 - cy2_8*cz2_2;
+    K[99 * sk] = K_3_8 - A_8_0*cz0_3 - cy1_8*cz1_3 - cy2_8*cz2_3;
+    K[100 * sk] = K_4_8 - A_8_0*cz0_4 - cy1_8*cz1_4 - cy2_8*cz2_4;
+    K[101 * sk] = K_5_8 - A_8_0*cz0_5 - cy1_8*cz1_5 - cy2_8*cz2_5;
+    K[102 * sk] = K_6_8 - A_8_0*cz0_6 - cy1_8*cz1_6 - cy2_8*cz2_6;
+    K[103 * sk] = K_7_8 - A_8_0*cz0_7 - cy1_8*cz1_7 - cy2_8*cz2_7;
+    K[104 * sk] = K_8_8 - A_8_0*cz0_8 - cy1_8*cz1_8 - cy2_8*cz2_8;
+    K[105 * sk] = K_8_9 - A_9_0*cz0_8 - cy1_9*cz1_8 - cy2_9*cz2_8;
+    K[106 * sk] = K_8_10 - A_10_0*cz0_8 - cy1_10*cz1_8 - cy2_10*cz2_8;
+    K[107 * sk] = K_8_11 - A_11_0*cz0_8 - cy1_11*cz1_8 - cy2_11*cz2_8;
+    K[108 * sk] = K_0_9 - A_9_0*cz0_0 - cy1_9*cz1_0 - cy2_9*cz2_0;
+    K[109 * sk] = K_1_9 - A_9_0*cz0_1 - cy1_9*cz1_1 - cy2_9*cz2_1;
+    K[110 * sk] = K_2_9 - A_9_0*cz0_2 - cy1_9*cz1_2 - cy2_9*cz2_2;
+    K[111 * sk] = K_3_9 - A_9_0*cz0_3 - cy1_9*cz1_3 - cy2_9*cz2_3;
+    K[112 * sk] = K_4_9 - A_9_0*cz0_4 - cy1_9*cz1_4 - cy2_9*cz2_4;
+    K[113 * sk] = K_5_9 - A_9_0*cz0_5 - cy1_9*cz1_5 - cy2_9*cz2_5;
+    K[114 * sk] = K_6_9 - A_9_0*cz0_6 - cy1_9*cz1_6 - cy2_9*cz2_6;
+    K[115 * sk] = K_7_9 - A_9_0*cz0_7 - cy1_9*cz1_7 - cy2_9*cz2_7;
+    K[116 * sk] = K_8_9 - A_9_0*cz0_8 - cy1_9*cz1_8 - cy2_9*cz2_8;
+    K[117 * sk] = K_9_9 - A_9_0*cz0_9 - cy1_9*cz1_9 - cy2_9*cz2_9;
+    K[118 * sk] = K_9_10 - A_10_0*cz0_9 - cy1_10*cz1_9 - cy2_10*cz2_9;
+    K[119 * sk] = K_9_11 - A_11_0*cz0_9 - cy1_11*cz1_9 - cy2_11*cz2_9;
+    K[120 * sk] = K_0_10 - A_10_0*cz0_0 - cy1_10*cz1_0 - cy2_10*cz2_0;
+    K[121 * sk] = K_1_10 - A_10_0*cz0_1 - cy1_10*cz1_1 - cy2_10*cz2_1;
+    K[122 * sk] = K_2_10 - A_10_0*cz0_2 - cy1_10*cz1_2 - cy2_10*cz2_2;
+    K[123 * sk] = K_3_10 - A_10_0*cz0_3 - cy1_10*cz1_3 - cy2_10*cz2_3;
+    K[124 * sk] = K_4_10 - A_10_0*cz0_4 - cy1_10*cz1_4 - cy2_10*cz2_4;
+    K[125 * sk] = K_5_10 - A_10_0*cz0_5 - cy1_10*cz1_5 - cy2_10*cz2_5;
+    K[126 * sk] = K_6_10 - A_10_0*cz0_6 - cy1_10*cz1_6 - cy2_10*cz2_6;
+    K[127 * sk] = K_7_10 - A_10_0*cz0_7 - cy1_10*cz1_7 - cy2_10*cz2_7;
+    K[128 * sk] = K_8_10 - A_10_0*cz0_8 - cy1_10*cz1_8 - cy2_10*cz2_8;
+    K[129 * sk] = K_9_10 - A_10_0*cz0_9 - cy1_10*cz1_9 - cy2_10*cz2_9;
+    K[130 * sk] = K_10_10 - A_10_0*cz0_10 - cy1_10*cz1_10 - cy2_10*cz2_10;
+    K[131 * sk] = K_10_11 - A_11_0*cz0_10 - cy1_11*cz1_10 - cy2_11*cz2_10;
+    K[132 * sk] = K_0_11 - A_11_0*cz0_0 - cy1_11*cz1_0 - cy2_11*cz2_0;
+    K[133 * sk] = K_1_11 - A_11_0*cz0_1 - cy1_11*cz1_1 - cy2_11*cz2_1;
+    K[134 * sk] = K_2_11 - A_11_0*cz0_2 - cy1_11*cz1_2 - cy2_11*cz2_2;
+    K[135 * sk] = K_3_11 - A_11_0*cz0_3 - cy1_11*cz1_3 - cy2_11*cz2_3;
+    K[136 * sk] = K_4_11 - A_11_0*cz0_4 - cy1_11*cz1_4 - cy2_11*cz2_4;
+    K[137 * sk] = K_5_11 - A_11_0*cz0_5 - cy1_11*cz1_5 - cy2_11*cz2_5;
+    K[138 * sk] = K_6_11 - A_11_0*cz0_6 - cy1_11*cz1_6 - cy2_11*cz2_6;
+    K[139 * sk] = K_7_11 - A_11_0*cz0_7 - cy1_11*cz1_7 - cy2_11*cz2_7;
+    K[140 * sk] = K_8_11 - A_11_0*cz0_8 - cy1_11*cz1_8 - cy2_11*cz2_8;
+    K[141 * sk] = K_9_11 - A_11_0*cz0_9 - cy1_11*cz1_9 - cy2_11*cz2_9;
+    K[142 * sk] = K_10_11 - A_11_0*cz0_10 - cy1_11*cz1_10 - cy2_11*cz2_10;
+    K[143 * sk] = K_11_11 - A_11_0*cz0_11 - cy1_11*cz1_11 - cy2_11*cz2_11;
 }
 
 void derive_t6_bbar_plane_stress_stiffness(const double *restrict xy, double E, double nu, double t, double *restrict K)
@@ -721,6 +814,7 @@ static inline void t6_bbar_plane_stress_recovery_body(const double *restrict xy,
     const double m5 = mat[8];
     const double m6 = mat[9];
     const double m7 = mat[10];
+    const double m8 = mat[11];
     /* element quantities: map coefficients, centre Jacobian */
     const double gx_0_1 = -x3 - 3.0*x1 + 4.0*x6;
     const double gx_0_2 = -4.0*x6 + 2.0*x1 + 2.0*x3;
@@ -732,8 +826,10 @@ static inline void t6_bbar_plane_stress_recovery_body(const double *restrict xy,
     const double gy_1_0 = -y2 - 3.0*y1 + 4.0*y4;
     const double gy_1_1 = -4.0*y4 - 4.0*y6 + 4.0*y1 + 4.0*y5;
     const double gy_2_0 = -4.0*y4 + 2.0*y1 + 2.0*y2;
-    double A_0_0, A_1_0, A_2_0, A_3_0, A_4_0, A_5_0, A_6_0, A_7_0, A_8_0, A_9_0, A_10_0, A_11_0;
-    double H_0_0;
+    double A_0_0, A_0_1, A_0_2, A_1_0, A_1_1, A_1_2, A_2_0, A_2_1, A_2_2, A_3_0, A_3_1, A_3_2, A_4_0;
+    double A_4_1, A_4_2, A_5_0, A_5_1, A_5_2, A_6_0, A_6_1, A_6_2, A_7_0, A_7_1, A_7_2, A_8_0, A_8_1;
+    double A_8_2, A_9_0, A_9_1, A_9_2, A_10_0, A_10_1, A_10_2, A_11_0, A_11_1, A_11_2, H_0_0, H_0_1;
+    double H_0_2, H_1_1, H_1_2, H_2_2;
     {   /* triangle-d2 point 1 of 3: xi = 1/6, eta = 1/6, weight = 1/6 */
         const double q0 = 0.16666666666666666*gx_1_1;
         const double J00 = gx_1_0 + q0 + 0.3333333333333333*gx_2_0;
@@ -760,20 +856,52 @@ static inline void t6_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx6 = 2.0*Ji01 - 0.6666666666666666*Ji00;
         const double dNdy6 = 2.0*Ji11 - 0.6666666666666666*Ji10;
         const double sc0 = 0.16666666666666666*detJ*t;
-        const double s40 = m3*sc0;
+        const double q2 = 0.16666666666666666*sc0;
+        const double s42 = m3*sc0;
+        const double q3 = 0.16666666666666666*s42;
+        const double q4 = 0.16666666666666666*q3;
         A_0_0 = dNdx1*sc0;
+        A_0_1 = dNdx1*q2;
+        A_0_2 = dNdx1*q2;
         A_1_0 = dNdy1*sc0;
+        A_1_1 = dNdy1*q2;
+        A_1_2 = dNdy1*q2;
         A_2_0 = dNdx2*sc0;
+        A_2_1 = dNdx2*q2;
+        A_2_2 = dNdx2*q2;
         A_3_0 = dNdy2*sc0;
+        A_3_1 = dNdy2*q2;
+        A_3_2 = dNdy2*q2;
         A_4_0 = dNdx3*sc0;
+        A_4_1 = dNdx3*q2;
+        A_4_2 = dNdx3*q2;
         A_5_0 = dNdy3*sc0;
+        A_5_1 = dNdy3*q2;
+        A_5_2 = dNdy3*q2;
         A_6_0 = dNdx4*sc0;
+        A_6_1 = dNdx4*q2;
+        A_6_2 = dNdx4*q2;
         A_7_0 = dNdy4*sc0;
+        A_7_1 = dNdy4*q2;
+        A_7_2 = dNdy4*q2;
         A_8_0 = dNdx5*sc0;
+        A_8_1 = dNdx5*q2;
+        A_8_2 = dNdx5*q2;
         A_9_0 = dNdy5*sc0;
+        A_9_1 = dNdy5*q2;
+        A_9_2 = dNdy5*q2;
         A_10_0 = dNdx6*sc0;
+        A_10_1 = dNdx6*q2;
+        A_10_2 = dNdx6*q2;
         A_11_0 = dNdy6*sc0;
-        H_0_0 = s40;
+        A_11_1 = dNdy6*q2;
+        A_11_2 = dNdy6*q2;
+        H_0_0 = s42;
+        H_0_1 = q3;
+        H_0_2 = q3;
+        H_1_1 = 0.16666666666666666*q3;
+        H_1_2 = q4;
+        H_2_2 = q4;
     }
     {   /* triangle-d2 point 2 of 3: xi = 2/3, eta = 1/6, weight = 1/6 */
         const double J00 = gx_1_0 + 0.16666666666666666*gx_1_1 + 1.3333333333333333*gx_2_0;
@@ -799,20 +927,53 @@ static inline void t6_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx6 = -0.6666666666666666*Ji00;
         const double dNdy6 = -0.6666666666666666*Ji10;
         const double sc0 = 0.16666666666666666*detJ*t;
-        const double s40 = m3*sc0;
+        const double T40 = 0.6666666666666666*sc0;
+        const double T41 = 0.16666666666666666*sc0;
+        const double s42 = m3*sc0;
+        const double T43 = 0.6666666666666666*s42;
+        const double T44 = 0.16666666666666666*s42;
         A_0_0 += dNdx1*sc0;
+        A_0_1 += T40*dNdx1;
+        A_0_2 += T41*dNdx1;
         A_1_0 += dNdy1*sc0;
+        A_1_1 += T40*dNdy1;
+        A_1_2 += T41*dNdy1;
         A_2_0 += dNdx2*sc0;
+        A_2_1 += T40*dNdx2;
+        A_2_2 += T41*dNdx2;
         A_3_0 += dNdy2*sc0;
+        A_3_1 += T40*dNdy2;
+        A_3_2 += T41*dNdy2;
         A_4_0 += dNdx3*sc0;
+        A_4_1 += T40*dNdx3;
+        A_4_2 += T41*dNdx3;
         A_5_0 += dNdy3*sc0;
+        A_5_1 += T40*dNdy3;
+        A_5_2 += T41*dNdy3;
         A_6_0 += dNdx4*sc0;
+        A_6_1 += T40*dNdx4;
+        A_6_2 += T41*dNdx4;
         A_7_0 += dNdy4*sc0;
+        A_7_1 += T40*dNdy4;
+        A_7_2 += T41*dNdy4;
         A_8_0 += dNdx5*sc0;
+        A_8_1 += T40*dNdx5;
+        A_8_2 += T41*dNdx5;
         A_9_0 += dNdy5*sc0;
+        A_9_1 += T40*dNdy5;
+        A_9_2 += T41*dNdy5;
         A_10_0 += dNdx6*sc0;
+        A_10_1 += T40*dNdx6;
+        A_10_2 += T41*dNdx6;
         A_11_0 += dNdy6*sc0;
-        H_0_0 += s40;
+        A_11_1 += T40*dNdy6;
+        A_11_2 += T41*dNdy6;
+        H_0_0 += s42;
+        H_0_1 += T43;
+        H_0_2 += T44;
+        H_1_1 += 0.6666666666666666*T43;
+        H_1_2 += 0.6666666666666666*T44;
+        H_2_2 += 0.16666666666666666*T44;
     }
     {   /* triangle-d2 point 3 of 3: xi = 1/6, eta = 2/3, weight = 1/6 */
         const double J00 = gx_1_0 + 0.3333333333333333*gx_2_0 + 0.6666666666666666*gx_1_1;
@@ -838,26 +999,74 @@ static inline void t6_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx6 = -2.0*Ji01 - 2.6666666666666665*Ji00;
         const double dNdy6 = -2.0*Ji11 - 2.6666666666666665*Ji10;
         const double sc0 = 0.16666666666666666*detJ*t;
-        const double s40 = m3*sc0;
+        const double T40 = 0.16666666666666666*sc0;
+        const double T41 = 0.6666666666666666*sc0;
+        const double s42 = m3*sc0;
+        const double T43 = 0.16666666666666666*s42;
+        const double T44 = 0.6666666666666666*s42;
         A_0_0 += dNdx1*sc0;
+        A_0_1 += T40*dNdx1;
+        A_0_2 += T41*dNdx1;
         A_1_0 += dNdy1*sc0;
+        A_1_1 += T40*dNdy1;
+        A_1_2 += T41*dNdy1;
         A_2_0 += dNdx2*sc0;
+        A_2_1 += T40*dNdx2;
+        A_2_2 += T41*dNdx2;
         A_3_0 += dNdy2*sc0;
+        A_3_1 += T40*dNdy2;
+        A_3_2 += T41*dNdy2;
         A_4_0 += dNdx3*sc0;
+        A_4_1 += T40*dNdx3;
+        A_4_2 += T41*dNdx3;
         A_5_0 += dNdy3*sc0;
+        A_5_1 += T40*dNdy3;
+        A_5_2 += T41*dNdy3;
         A_6_0 += dNdx4*sc0;
+        A_6_1 += T40*dNdx4;
+        A_6_2 += T41*dNdx4;
         A_7_0 += dNdy4*sc0;
+        A_7_1 += T40*dNdy4;
+        A_7_2 += T41*dNdy4;
         A_8_0 += dNdx5*sc0;
+        A_8_1 += T40*dNdx5;
+        A_8_2 += T41*dNdx5;
         A_9_0 += dNdy5*sc0;
+        A_9_1 += T40*dNdy5;
+        A_9_2 += T41*dNdy5;
         A_10_0 += dNdx6*sc0;
+        A_10_1 += T40*dNdx6;
+        A_10_2 += T41*dNdx6;
         A_11_0 += dNdy6*sc0;
-        H_0_0 += s40;
+        A_11_1 += T40*dNdy6;
+        A_11_2 += T41*dNdy6;
+        H_0_0 += s42;
+        H_0_1 += T43;
+        H_0_2 += T44;
+        H_1_1 += 0.16666666666666666*T43;
+        H_1_2 += 0.16666666666666666*T44;
+        H_2_2 += 0.6666666666666666*T44;
     }
     /* static condensation of the internal unknowns */
     const double cid0 = 1.0/H_0_0;
+    const double cL1_0 = H_0_1*cid0;
+    const double cL2_0 = H_0_2*cid0;
+    const double cd1 = H_1_1 - H_0_0*cL1_0*cL1_0;
+    const double cid1 = 1.0/cd1;
+    const double cL2_1 = cid1*(H_1_2 - H_0_0*cL1_0*cL2_0);
+    const double cd2 = H_2_2 - H_0_0*cL2_0*cL2_0 - cd1*cL2_1*cL2_1;
+    const double cid2 = 1.0/cd2;
     const double cb0 = -A_0_0*u1 - A_10_0*u11 - A_11_0*u12 - A_1_0*u2 - A_2_0*u3 - A_3_0*u4 - A_4_0*u5
         - A_5_0*u6 - A_6_0*u7 - A_7_0*u8 - A_8_0*u9 - A_9_0*u10;
-    const double alpha1 = cb0*cid0;
+    const double cb1 = -A_0_1*u1 - A_10_1*u11 - A_11_1*u12 - A_1_1*u2 - A_2_1*u3 - A_3_1*u4 - A_4_1*u5
+        - A_5_1*u6 - A_6_1*u7 - A_7_1*u8 - A_8_1*u9 - A_9_1*u10;
+    const double cb2 = -A_0_2*u1 - A_10_2*u11 - A_11_2*u12 - A_1_2*u2 - A_2_2*u3 - A_3_2*u4 - A_4_2*u5
+        - A_5_2*u6 - A_6_2*u7 - A_7_2*u8 - A_8_2*u9 - A_9_2*u10;
+    const double cy1_0 = cb1 - cL1_0*cb0;
+    const double cy2_0 = cb2 - cL2_0*cb0 - cL2_1*cy1_0;
+    const double alpha3 = cid2*cy2_0;
+    const double alpha2 = cid1*cy1_0 - alpha3*cL2_1;
+    const double alpha1 = cb0*cid0 - alpha2*cL1_0 - alpha3*cL2_0;
     {   /* triangle-d2 point 1 of 3: xi = 1/6, eta = 1/6, weight = 1/6 */
         const double q0 = 0.16666666666666666*gx_1_1;
         const double J00 = gx_1_0 + q0 + 0.3333333333333333*gx_2_0;
@@ -884,20 +1093,22 @@ static inline void t6_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx6 = 2.0*Ji01 - 0.6666666666666666*Ji00;
         const double dNdy6 = 2.0*Ji11 - 0.6666666666666666*Ji10;
         const double q2 = alpha1*m4;
-        const double eps41 = q2 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4 - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10
-            - 0.5*dNdy6*u12;
-        const double eps42 = q2 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3 - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9
-            - 0.5*dNdx6*u11;
-        const double eps43 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdy1*u1
+        const double q3 = 0.08333333333333333*alpha2*m5;
+        const double q4 = 0.08333333333333333*alpha3*m5;
+        const double eps45 = q2 + q3 + q4 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4 - 0.5*dNdy3*u6 - 0.5*dNdy4*u8
+            - 0.5*dNdy5*u10 - 0.5*dNdy6*u12;
+        const double eps46 = q2 + q3 + q4 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3 - 0.5*dNdx3*u5 - 0.5*dNdx4*u7
+            - 0.5*dNdx5*u9 - 0.5*dNdx6*u11;
+        const double eps47 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdy1*u1
             + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11;
-        strain[0] = eps41;
-        strain[1] = eps42;
-        strain[2] = eps43;
-        stress[0] = eps41*m5 + eps42*m6;
-        stress[1] = eps41*m6 + eps42*m5;
-        stress[2] = eps43*m7;
+        strain[0] = eps45;
+        strain[1] = eps46;
+        strain[2] = eps47;
+        stress[0] = eps45*m6 + eps46*m7;
+        stress[1] = eps45*m7 + eps46*m6;
+        stress[2] = eps47*m8;
     }
     {   /* triangle-d2 point 2 of 3: xi = 2/3, eta = 1/6, weight = 1/6 */
         const double J00 = gx_1_0 + 0.16666666666666666*gx_1_1 + 1.3333333333333333*gx_2_0;
@@ -923,20 +1134,22 @@ static inline void t6_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx6 = -0.6666666666666666*Ji00;
         const double dNdy6 = -0.6666666666666666*Ji10;
         const double q0 = alpha1*m4;
-        const double eps41 = q0 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4 - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10
-            - 0.5*dNdy6*u12;
-        const double eps42 = q0 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3 - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9
-            - 0.5*dNdx6*u11;
-        const double eps43 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdy1*u1
+        const double q1 = 0.3333333333333333*alpha2*m5;
+        const double q2 = 0.08333333333333333*alpha3*m5;
+        const double eps45 = q0 + q1 + q2 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4 - 0.5*dNdy3*u6 - 0.5*dNdy4*u8
+            - 0.5*dNdy5*u10 - 0.5*dNdy6*u12;
+        const double eps46 = q0 + q1 + q2 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3 - 0.5*dNdx3*u5 - 0.5*dNdx4*u7
+            - 0.5*dNdx5*u9 - 0.5*dNdx6*u11;
+        const double eps47 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdy1*u1
             + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11;
-        strain[3] = eps41;
-        strain[4] = eps42;
-        strain[5] = eps43;
-        stress[3] = eps41*m5 + eps42*m6;
-        stress[4] = eps41*m6 + eps42*m5;
-        stress[5] = eps43*m7;
+        strain[3] = eps45;
+        strain[4] = eps46;
+        strain[5] = eps47;
+        stress[3] = eps45*m6 + eps46*m7;
+        stress[4] = eps45*m7 + eps46*m6;
+        stress[5] = eps47*m8;
     }
     {   /* triangle-d2 point 3 of 3: xi = 1/6, eta = 2/3, weight = 1/6 */
         const double J00 = gx_1_0 + 0.3333333333333333*gx_2_0 + 0.6666666666666666*gx_1_1;
@@ -962,20 +1175,22 @@ static inline void t6_bbar_plane_stress_recovery_body(const double *restrict xy,
         const double dNdx6 = -2.0*Ji01 - 2.6666666666666665*Ji00;
         const double dNdy6 = -2.0*Ji11 - 2.6666666666666665*Ji10;
         const double q0 = alpha1*m4;
-        const double eps41 = q0 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
-            + 0.5*dNdx6*u11 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4 - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10
-            - 0.5*dNdy6*u12;
-        const double eps42 = q0 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
-            + 0.5*dNdy6*u12 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3 - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9
-            - 0.5*dNdx6*u11;
-        const double eps43 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdy1*u1
+        const double q1 = 0.3333333333333333*alpha3*m5;
+        const double q2 = 0.08333333333333333*alpha2*m5;
+        const double eps45 = q0 + q1 + q2 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7
+            + 0.5*dNdx5*u9 + 0.5*dNdx6*u11 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4 - 0.5*dNdy3*u6 - 0.5*dNdy4*u8
+            - 0.5*dNdy5*u10 - 0.5*dNdy6*u12;
+        const double eps46 = q0 + q1 + q2 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8
+            + 0.5*dNdy5*u10 + 0.5*dNdy6*u12 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3 - 0.5*dNdx3*u5 - 0.5*dNdx4*u7
+            - 0.5*dNdx5*u9 - 0.5*dNdx6*u11;
+        const double eps47 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdy1*u1
             + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11;
-        strain[6] = eps41;
-        strain[7] = eps42;
-        strain[8] = eps43;
-        stress[6] = eps41*m5 + eps42*m6;
-        stress[7] = eps41*m6 + eps42*m5;
-        stress[8] = eps43*m7;
+        strain[6] = eps45;
+        strain[7] = eps46;
+        strain[8] = eps47;
+        stress[6] = eps45*m6 + eps46*m7;
+        stress[7] = eps45*m7 + eps46*m6;
+        stress[8] = eps47*m8;
     }
 }
 

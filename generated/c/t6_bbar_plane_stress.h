@@ -2,13 +2,13 @@
  * derive generated kernel: T6 bbar plane-stress
  *
  * element      T6, 6 nodes, 12 DOFs interleaved u1, v1, u2, v2, ...
- * formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed)
- *              [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
- * integration  B^T D_dev B: triangle-d2 (3 points); B^T m (g): triangle-d2 (3 points); -1/kappa
- *              (-V/kappa): triangle-d2 (3 points)
- * internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+ * formulation  B-bar, dilatation projected on a linear pressure {1, xi, eta}: K_dev + kappa g^T
+ *              M_p^-1 g [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
+ * integration  B^T D_dev B: triangle-d2 (3 points); B^T m pi (g): triangle-d2 (3 points); -pi^T pi
+ *              / kappa (-M_p / kappa): triangle-d2 (3 points)
+ * internal     3 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
  *              (unrolled factorisation of K_aa, no pivoting)
- * flops        stiffness 1624, validity 114, recovery 820 per element (add, mul, div, sqrt)
+ * flops        stiffness 2425, validity 114, recovery 1112 per element (add, mul, div, sqrt)
  *
  * arguments (units-agnostic; any consistent set of units):
  *   xy      nodal coordinates, shape (n, 6, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
@@ -17,7 +17,7 @@
  *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
  *   t       thickness t (the out-of-plane thickness)
  *   u       nodal displacements for recovery, shape (n, 12), interleaved u1, v1, u2, v2, ...
- *   K       stiffness, shape (n, 12, 12), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1
+ *   K       stiffness, shape (n, 12, 12), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 3
  *           internal unknowns are condensed
  *   detJ_min validity: min det J over the points of triangle-d2, shape (n,); <= 0 means an
  *            inverted or degenerate element

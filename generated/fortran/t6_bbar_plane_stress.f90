@@ -1,13 +1,13 @@
 ! derive generated kernel: T6 bbar plane-stress
 !
 ! element      T6, 6 nodes, 12 DOFs interleaved u1, v1, u2, v2, ...
-! formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed)
-!              [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
-! integration  B^T D_dev B: triangle-d2 (3 points); B^T m (g): triangle-d2 (3 points); -1/kappa
-!              (-V/kappa): triangle-d2 (3 points)
-! internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
+! formulation  B-bar, dilatation projected on a linear pressure {1, xi, eta}: K_dev + kappa g^T
+!              M_p^-1 g [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
+! integration  B^T D_dev B: triangle-d2 (3 points); B^T m pi (g): triangle-d2 (3 points); -pi^T pi
+!              / kappa (-M_p / kappa): triangle-d2 (3 points)
+! internal     3 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
 !              (unrolled factorisation of K_aa, no pivoting)
-! flops        stiffness 1653, validity 167, recovery 834 per element (add, mul, div, sqrt)
+! flops        stiffness 2463, validity 176, recovery 1126 per element (add, mul, div, sqrt)
 !
 ! arguments (units-agnostic; any consistent set of units):
 !   xy      nodal coordinates, shape (n, 6, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
@@ -16,7 +16,7 @@
 !   nu      Poisson's ratio (-1 < nu < 0.5), scalar
 !   t       thickness t (the out-of-plane thickness)
 !   u       nodal displacements for recovery, shape (n, 12), interleaved u1, v1, u2, v2, ...
-!   K       stiffness, shape (n, 12, 12), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 1
+!   K       stiffness, shape (n, 12, 12), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 3
 !           internal unknowns are condensed
 !   detJ_min validity: min det J over the points of triangle-d2, shape (n,); <= 0 means an
 !            inverted or degenerate element
@@ -98,9 +98,16 @@ contains
     real(dp) :: K_3_10, K_3_11, K_4_4, K_4_5, K_4_6, K_4_7, K_4_8, K_4_9, K_4_10, K_4_11, K_5_5, K_5_6
     real(dp) :: K_5_7, K_5_8, K_5_9, K_5_10, K_5_11, K_6_6, K_6_7, K_6_8, K_6_9, K_6_10, K_6_11, K_7_7
     real(dp) :: K_7_8, K_7_9, K_7_10, K_7_11, K_8_8, K_8_9, K_8_10, K_8_11, K_9_9, K_9_10, K_9_11
-    real(dp) :: K_10_10, K_10_11, K_11_11, A_0_0, A_1_0, A_2_0, A_3_0, A_4_0, A_5_0, A_6_0, A_7_0
-    real(dp) :: A_8_0, A_9_0, A_10_0, A_11_0, H_0_0, cid0, cz0_0, cz0_1, cz0_2, cz0_3, cz0_4, cz0_5
-    real(dp) :: cz0_6, cz0_7, cz0_8, cz0_9, cz0_10, cz0_11
+    real(dp) :: K_10_10, K_10_11, K_11_11, A_0_0, A_0_1, A_0_2, A_1_0, A_1_1, A_1_2, A_2_0, A_2_1
+    real(dp) :: A_2_2, A_3_0, A_3_1, A_3_2, A_4_0, A_4_1, A_4_2, A_5_0, A_5_1, A_5_2, A_6_0, A_6_1
+    real(dp) :: A_6_2, A_7_0, A_7_1, A_7_2, A_8_0, A_8_1, A_8_2, A_9_0, A_9_1, A_9_2, A_10_0, A_10_1
+    real(dp) :: A_10_2, A_11_0, A_11_1, A_11_2, H_0_0, H_0_1, H_0_2, H_1_1, H_1_2, H_2_2, cid0, cL1_0
+    real(dp) :: cL2_0, cd1, cid1, cL2_1, cd2, cid2, cy1_0, cy2_0, cy1_1, cy2_1, cy1_2, cy2_2, cy1_3
+    real(dp) :: cy2_3, cy1_4, cy2_4, cy1_5, cy2_5, cy1_6, cy2_6, cy1_7, cy2_7, cy1_8, cy2_8, cy1_9
+    real(dp) :: cy2_9, cy1_10, cy2_10, cy1_11, cy2_11, cz0_0, cz1_0, cz2_0, cz0_1, cz1_1, cz2_1, cz0_2
+    real(dp) :: cz1_2, cz2_2, cz0_3, cz1_3, cz2_3, cz0_4, cz1_4, cz2_4, cz0_5, cz1_5, cz2_5, cz0_6
+    real(dp) :: cz1_6, cz2_6, cz0_7, cz1_7, cz2_7, cz0_8, cz1_8, cz2_8, cz0_9, cz1_9, cz2_9, cz0_10
+    real(dp) :: cz1_10, cz2_10, cz0_11, cz1_11, cz2_11
     integer :: p
     x1 = xy(1, 1)
     y1 = xy(2, 1)
@@ -207,25 +214,54 @@ contains
     K_10_11 = 0.0_dp
     K_11_11 = 0.0_dp
     A_0_0 = 0.0_dp
+    A_0_1 = 0.0_dp
+    A_0_2 = 0.0_dp
     A_1_0 = 0.0_dp
+    A_1_1 = 0.0_dp
+    A_1_2 = 0.0_dp
     A_2_0 = 0.0_dp
+    A_2_1 = 0.0_dp
+    A_2_2 = 0.0_dp
     A_3_0 = 0.0_dp
+    A_3_1 = 0.0_dp
+    A_3_2 = 0.0_dp
     A_4_0 = 0.0_dp
+    A_4_1 = 0.0_dp
+    A_4_2 = 0.0_dp
     A_5_0 = 0.0_dp
+    A_5_1 = 0.0_dp
+    A_5_2 = 0.0_dp
     A_6_0 = 0.0_dp
+    A_6_1 = 0.0_dp
+    A_6_2 = 0.0_dp
     A_7_0 = 0.0_dp
+    A_7_1 = 0.0_dp
+    A_7_2 = 0.0_dp
     A_8_0 = 0.0_dp
+    A_8_1 = 0.0_dp
+    A_8_2 = 0.0_dp
     A_9_0 = 0.0_dp
+    A_9_1 = 0.0_dp
+    A_9_2 = 0.0_dp
     A_10_0 = 0.0_dp
+    A_10_1 = 0.0_dp
+    A_10_2 = 0.0_dp
     A_11_0 = 0.0_dp
+    A_11_1 = 0.0_dp
+    A_11_2 = 0.0_dp
     H_0_0 = 0.0_dp
+    H_0_1 = 0.0_dp
+    H_0_2 = 0.0_dp
+    H_1_1 = 0.0_dp
+    H_1_2 = 0.0_dp
+    H_2_2 = 0.0_dp
     do p = 1, 3   ! triangle-d2: loop over the 3 points
       block
         real(dp) :: c0, c1, c2, c3, c4, c5, c6, c7, c8, c9, c10, eta, w, xi, J00, J01, J10, J11, detJ
         real(dp) :: idet, Ji00, Ji01, Ji10, Ji11, dNdx1, dNdy1, dNdx2, dNdy2, dNdx3, dNdy3, dNdx4, dNdy4
         real(dp) :: dNdx5, dNdy5, dNdx6, dNdy6, sc0, s1, s2, s3, T4, T6, T7, T8, T9, T10, T11, T12, T13
         real(dp) :: T14, T15, T16, T17, T18, T19, T20, T21, T22, T23, T24, T25, T26, T27, T28, T29, T30
-        real(dp) :: T31, T32, T33, T34, T35, T36, T37, T38, T39, s40
+        real(dp) :: T31, T32, T33, T34, T35, T36, T37, T38, T39, T40, T41, s42, T43, T44
         c0 = KS0_c0(p)
         c1 = KS0_c1(p)
         c2 = KS0_c2(p)
@@ -301,7 +337,11 @@ contains
         T37 = dNdy6*s2
         T38 = dNdy6*s1
         T39 = dNdx6*s3
-        s40 = m3*sc0
+        T40 = sc0*xi
+        T41 = eta*sc0
+        s42 = m3*sc0
+        T43 = s42*xi
+        T44 = eta*s42
         K_0_0 = K_0_0 + (T4*dNdx1 + T6*dNdy1)
         K_0_1 = K_0_1 + (T7*dNdx1 + T9*dNdy1)
         K_0_2 = K_0_2 + (T10*dNdx1 + T12*dNdy1)
@@ -381,178 +421,262 @@ contains
         K_10_11 = K_10_11 + (T37*dNdx6 + T39*dNdy6)
         K_11_11 = K_11_11 + (T38*dNdy6 + T39*dNdx6)
         A_0_0 = A_0_0 + (dNdx1*sc0)
+        A_0_1 = A_0_1 + (T40*dNdx1)
+        A_0_2 = A_0_2 + (T41*dNdx1)
         A_1_0 = A_1_0 + (dNdy1*sc0)
+        A_1_1 = A_1_1 + (T40*dNdy1)
+        A_1_2 = A_1_2 + (T41*dNdy1)
         A_2_0 = A_2_0 + (dNdx2*sc0)
+        A_2_1 = A_2_1 + (T40*dNdx2)
+        A_2_2 = A_2_2 + (T41*dNdx2)
         A_3_0 = A_3_0 + (dNdy2*sc0)
+        A_3_1 = A_3_1 + (T40*dNdy2)
+        A_3_2 = A_3_2 + (T41*dNdy2)
         A_4_0 = A_4_0 + (dNdx3*sc0)
+        A_4_1 = A_4_1 + (T40*dNdx3)
+        A_4_2 = A_4_2 + (T41*dNdx3)
         A_5_0 = A_5_0 + (dNdy3*sc0)
+        A_5_1 = A_5_1 + (T40*dNdy3)
+        A_5_2 = A_5_2 + (T41*dNdy3)
         A_6_0 = A_6_0 + (dNdx4*sc0)
+        A_6_1 = A_6_1 + (T40*dNdx4)
+        A_6_2 = A_6_2 + (T41*dNdx4)
         A_7_0 = A_7_0 + (dNdy4*sc0)
+        A_7_1 = A_7_1 + (T40*dNdy4)
+        A_7_2 = A_7_2 + (T41*dNdy4)
         A_8_0 = A_8_0 + (dNdx5*sc0)
+        A_8_1 = A_8_1 + (T40*dNdx5)
+        A_8_2 = A_8_2 + (T41*dNdx5)
         A_9_0 = A_9_0 + (dNdy5*sc0)
+        A_9_1 = A_9_1 + (T40*dNdy5)
+        A_9_2 = A_9_2 + (T41*dNdy5)
         A_10_0 = A_10_0 + (dNdx6*sc0)
+        A_10_1 = A_10_1 + (T40*dNdx6)
+        A_10_2 = A_10_2 + (T41*dNdx6)
         A_11_0 = A_11_0 + (dNdy6*sc0)
-        H_0_0 = H_0_0 + (s40)
+        A_11_1 = A_11_1 + (T40*dNdy6)
+        A_11_2 = A_11_2 + (T41*dNdy6)
+        H_0_0 = H_0_0 + (s42)
+        H_0_1 = H_0_1 + (T43)
+        H_0_2 = H_0_2 + (T44)
+        H_1_1 = H_1_1 + (T43*xi)
+        H_1_2 = H_1_2 + (T44*xi)
+        H_2_2 = H_2_2 + (T44*eta)
       end block
     end do
     ! static condensation of the internal unknowns
     cid0 = 1.0_dp/H_0_0
+    cL1_0 = H_0_1*cid0
+    cL2_0 = H_0_2*cid0
+    cd1 = H_1_1 - H_0_0*cL1_0*cL1_0
+    cid1 = 1.0_dp/cd1
+    cL2_1 = cid1*(H_1_2 - H_0_0*cL1_0*cL2_0)
+    cd2 = H_2_2 - H_0_0*cL2_0*cL2_0 - cd1*cL2_1*cL2_1
+    cid2 = 1.0_dp/cd2
+    cy1_0 = A_0_1 - A_0_0*cL1_0
+    cy2_0 = A_0_2 - A_0_0*cL2_0 - cL2_1*cy1_0
+    cy1_1 = A_1_1 - A_1_0*cL1_0
+    cy2_1 = A_1_2 - A_1_0*cL2_0 - cL2_1*cy1_1
+    cy1_2 = A_2_1 - A_2_0*cL1_0
+    cy2_2 = A_2_2 - A_2_0*cL2_0 - cL2_1*cy1_2
+    cy1_3 = A_3_1 - A_3_0*cL1_0
+    cy2_3 = A_3_2 - A_3_0*cL2_0 - cL2_1*cy1_3
+    cy1_4 = A_4_1 - A_4_0*cL1_0
+    cy2_4 = A_4_2 - A_4_0*cL2_0 - cL2_1*cy1_4
+    cy1_5 = A_5_1 - A_5_0*cL1_0
+    cy2_5 = A_5_2 - A_5_0*cL2_0 - cL2_1*cy1_5
+    cy1_6 = A_6_1 - A_6_0*cL1_0
+    cy2_6 = A_6_2 - A_6_0*cL2_0 - cL2_1*cy1_6
+    cy1_7 = A_7_1 - A_7_0*cL1_0
+    cy2_7 = A_7_2 - A_7_0*cL2_0 - cL2_1*cy1_7
+    cy1_8 = A_8_1 - A_8_0*cL1_0
+    cy2_8 = A_8_2 - A_8_0*cL2_0 - cL2_1*cy1_8
+    cy1_9 = A_9_1 - A_9_0*cL1_0
+    cy2_9 = A_9_2 - A_9_0*cL2_0 - cL2_1*cy1_9
+    cy1_10 = A_10_1 - A_10_0*cL1_0
+    cy2_10 = A_10_2 - A_10_0*cL2_0 - cL2_1*cy1_10
+    cy1_11 = A_11_1 - A_11_0*cL1_0
+    cy2_11 = A_11_2 - A_11_0*cL2_0 - cL2_1*cy1_11
     cz0_0 = A_0_0*cid0
+    cz1_0 = cid1*cy1_0
+    cz2_0 = cid2*cy2_0
     cz0_1 = A_1_0*cid0
+    cz1_1 = cid1*cy1_1
+    cz2_1 = cid2*cy2_1
     cz0_2 = A_2_0*cid0
+    cz1_2 = cid1*cy1_2
+    cz2_2 = cid2*cy2_2
     cz0_3 = A_3_0*cid0
+    cz1_3 = cid1*cy1_3
+    cz2_3 = cid2*cy2_3
     cz0_4 = A_4_0*cid0
+    cz1_4 = cid1*cy1_4
+    cz2_4 = cid2*cy2_4
     cz0_5 = A_5_0*cid0
+    cz1_5 = cid1*cy1_5
+    cz2_5 = cid2*cy2_5
     cz0_6 = A_6_0*cid0
+    cz1_6 = cid1*cy1_6
+    cz2_6 = cid2*cy2_6
     cz0_7 = A_7_0*cid0
+    cz1_7 = cid1*cy1_7
+    cz2_7 = cid2*cy2_7
     cz0_8 = A_8_0*cid0
+    cz1_8 = cid1*cy1_8
+    cz2_8 = cid2*cy2_8
     cz0_9 = A_9_0*cid0
+    cz1_9 = cid1*cy1_9
+    cz2_9 = cid2*cy2_9
     cz0_10 = A_10_0*cid0
+    cz1_10 = cid1*cy1_10
+    cz2_10 = cid2*cy2_10
     cz0_11 = A_11_0*cid0
-    K(1, 1) = K_0_0 - A_0_0*cz0_0
-    K(1, 2) = K_0_1 - A_1_0*cz0_0
-    K(1, 3) = K_0_2 - A_2_0*cz0_0
-    K(1, 4) = K_0_3 - A_3_0*cz0_0
-    K(1, 5) = K_0_4 - A_4_0*cz0_0
-    K(1, 6) = K_0_5 - A_5_0*cz0_0
-    K(1, 7) = K_0_6 - A_6_0*cz0_0
-    K(1, 8) = K_0_7 - A_7_0*cz0_0
-    K(1, 9) = K_0_8 - A_8_0*cz0_0
-    K(1, 10) = K_0_9 - A_9_0*cz0_0
-    K(1, 11) = K_0_10 - A_10_0*cz0_0
-    K(1, 12) = K_0_11 - A_11_0*cz0_0
-    K(2, 1) = K_0_1 - A_1_0*cz0_0
-    K(2, 2) = K_1_1 - A_1_0*cz0_1
-    K(2, 3) = K_1_2 - A_2_0*cz0_1
-    K(2, 4) = K_1_3 - A_3_0*cz0_1
-    K(2, 5) = K_1_4 - A_4_0*cz0_1
-    K(2, 6) = K_1_5 - A_5_0*cz0_1
-    K(2, 7) = K_1_6 - A_6_0*cz0_1
-    K(2, 8) = K_1_7 - A_7_0*cz0_1
-    K(2, 9) = K_1_8 - A_8_0*cz0_1
-    K(2, 10) = K_1_9 - A_9_0*cz0_1
-    K(2, 11) = K_1_10 - A_10_0*cz0_1
-    K(2, 12) = K_1_11 - A_11_0*cz0_1
-    K(3, 1) = K_0_2 - A_2_0*cz0_0
-    K(3, 2) = K_1_2 - A_2_0*cz0_1
-    K(3, 3) = K_2_2 - A_2_0*cz0_2
-    K(3, 4) = K_2_3 - A_3_0*cz0_2
-    K(3, 5) = K_2_4 - A_4_0*cz0_2
-    K(3, 6) = K_2_5 - A_5_0*cz0_2
-    K(3, 7) = K_2_6 - A_6_0*cz0_2
-    K(3, 8) = K_2_7 - A_7_0*cz0_2
-    K(3, 9) = K_2_8 - A_8_0*cz0_2
-    K(3, 10) = K_2_9 - A_9_0*cz0_2
-    K(3, 11) = K_2_10 - A_10_0*cz0_2
-    K(3, 12) = K_2_11 - A_11_0*cz0_2
-    K(4, 1) = K_0_3 - A_3_0*cz0_0
-    K(4, 2) = K_1_3 - A_3_0*cz0_1
-    K(4, 3) = K_2_3 - A_3_0*cz0_2
-    K(4, 4) = K_3_3 - A_3_0*cz0_3
-    K(4, 5) = K_3_4 - A_4_0*cz0_3
-    K(4, 6) = K_3_5 - A_5_0*cz0_3
-    K(4, 7) = K_3_6 - A_6_0*cz0_3
-    K(4, 8) = K_3_7 - A_7_0*cz0_3
-    K(4, 9) = K_3_8 - A_8_0*cz0_3
-    K(4, 10) = K_3_9 - A_9_0*cz0_3
-    K(4, 11) = K_3_10 - A_10_0*cz0_3
-    K(4, 12) = K_3_11 - A_11_0*cz0_3
-    K(5, 1) = K_0_4 - A_4_0*cz0_0
-    K(5, 2) = K_1_4 - A_4_0*cz0_1
-    K(5, 3) = K_2_4 - A_4_0*cz0_2
-    K(5, 4) = K_3_4 - A_4_0*cz0_3
-    K(5, 5) = K_4_4 - A_4_0*cz0_4
-    K(5, 6) = K_4_5 - A_5_0*cz0_4
-    K(5, 7) = K_4_6 - A_6_0*cz0_4
-    K(5, 8) = K_4_7 - A_7_0*cz0_4
-    K(5, 9) = K_4_8 - A_8_0*cz0_4
-    K(5, 10) = K_4_9 - A_9_0*cz0_4
-    K(5, 11) = K_4_10 - A_10_0*cz0_4
-    K(5, 12) = K_4_11 - A_11_0*cz0_4
-    K(6, 1) = K_0_5 - A_5_0*cz0_0
-    K(6, 2) = K_1_5 - A_5_0*cz0_1
-    K(6, 3) = K_2_5 - A_5_0*cz0_2
-    K(6, 4) = K_3_5 - A_5_0*cz0_3
-    K(6, 5) = K_4_5 - A_5_0*cz0_4
-    K(6, 6) = K_5_5 - A_5_0*cz0_5
-    K(6, 7) = K_5_6 - A_6_0*cz0_5
-    K(6, 8) = K_5_7 - A_7_0*cz0_5
-    K(6, 9) = K_5_8 - A_8_0*cz0_5
-    K(6, 10) = K_5_9 - A_9_0*cz0_5
-    K(6, 11) = K_5_10 - A_10_0*cz0_5
-    K(6, 12) = K_5_11 - A_11_0*cz0_5
-    K(7, 1) = K_0_6 - A_6_0*cz0_0
-    K(7, 2) = K_1_6 - A_6_0*cz0_1
-    K(7, 3) = K_2_6 - A_6_0*cz0_2
-    K(7, 4) = K_3_6 - A_6_0*cz0_3
-    K(7, 5) = K_4_6 - A_6_0*cz0_4
-    K(7, 6) = K_5_6 - A_6_0*cz0_5
-    K(7, 7) = K_6_6 - A_6_0*cz0_6
-    K(7, 8) = K_6_7 - A_7_0*cz0_6
-    K(7, 9) = K_6_8 - A_8_0*cz0_6
-    K(7, 10) = K_6_9 - A_9_0*cz0_6
-    K(7, 11) = K_6_10 - A_10_0*cz0_6
-    K(7, 12) = K_6_11 - A_11_0*cz0_6
-    K(8, 1) = K_0_7 - A_7_0*cz0_0
-    K(8, 2) = K_1_7 - A_7_0*cz0_1
-    K(8, 3) = K_2_7 - A_7_0*cz0_2
-    K(8, 4) = K_3_7 - A_7_0*cz0_3
-    K(8, 5) = K_4_7 - A_7_0*cz0_4
-    K(8, 6) = K_5_7 - A_7_0*cz0_5
-    K(8, 7) = K_6_7 - A_7_0*cz0_6
-    K(8, 8) = K_7_7 - A_7_0*cz0_7
-    K(8, 9) = K_7_8 - A_8_0*cz0_7
-    K(8, 10) = K_7_9 - A_9_0*cz0_7
-    K(8, 11) = K_7_10 - A_10_0*cz0_7
-    K(8, 12) = K_7_11 - A_11_0*cz0_7
-    K(9, 1) = K_0_8 - A_8_0*cz0_0
-    K(9, 2) = K_1_8 - A_8_0*cz0_1
-    K(9, 3) = K_2_8 - A_8_0*cz0_2
-    K(9, 4) = K_3_8 - A_8_0*cz0_3
-    K(9, 5) = K_4_8 - A_8_0*cz0_4
-    K(9, 6) = K_5_8 - A_8_0*cz0_5
-    K(9, 7) = K_6_8 - A_8_0*cz0_6
-    K(9, 8) = K_7_8 - A_8_0*cz0_7
-    K(9, 9) = K_8_8 - A_8_0*cz0_8
-    K(9, 10) = K_8_9 - A_9_0*cz0_8
-    K(9, 11) = K_8_10 - A_10_0*cz0_8
-    K(9, 12) = K_8_11 - A_11_0*cz0_8
-    K(10, 1) = K_0_9 - A_9_0*cz0_0
-    K(10, 2) = K_1_9 - A_9_0*cz0_1
-    K(10, 3) = K_2_9 - A_9_0*cz0_2
-    K(10, 4) = K_3_9 - A_9_0*cz0_3
-    K(10, 5) = K_4_9 - A_9_0*cz0_4
-    K(10, 6) = K_5_9 - A_9_0*cz0_5
-    K(10, 7) = K_6_9 - A_9_0*cz0_6
-    K(10, 8) = K_7_9 - A_9_0*cz0_7
-    K(10, 9) = K_8_9 - A_9_0*cz0_8
-    K(10, 10) = K_9_9 - A_9_0*cz0_9
-    K(10, 11) = K_9_10 - A_10_0*cz0_9
-    K(10, 12) = K_9_11 - A_11_0*cz0_9
-    K(11, 1) = K_0_10 - A_10_0*cz0_0
-    K(11, 2) = K_1_10 - A_10_0*cz0_1
-    K(11, 3) = K_2_10 - A_10_0*cz0_2
-    K(11, 4) = K_3_10 - A_10_0*cz0_3
-    K(11, 5) = K_4_10 - A_10_0*cz0_4
-    K(11, 6) = K_5_10 - A_10_0*cz0_5
-    K(11, 7) = K_6_10 - A_10_0*cz0_6
-    K(11, 8) = K_7_10 - A_10_0*cz0_7
-    K(11, 9) = K_8_10 - A_10_0*cz0_8
-    K(11, 10) = K_9_10 - A_10_0*cz0_9
-    K(11, 11) = K_10_10 - A_10_0*cz0_10
-    K(11, 12) = K_10_11 - A_11_0*cz0_10
-    K(12, 1) = K_0_11 - A_11_0*cz0_0
-    K(12, 2) = K_1_11 - A_11_0*cz0_1
-    K(12, 3) = K_2_11 - A_11_0*cz0_2
-    K(12, 4) = K_3_11 - A_11_0*cz0_3
-    K(12, 5) = K_4_11 - A_11_0*cz0_4
-    K(12, 6) = K_5_11 - A_11_0*cz0_5
-    K(12, 7) = K_6_11 - A_11_0*cz0_6
-    K(12, 8) = K_7_11 - A_11_0*cz0_7
-    K(12, 9) = K_8_11 - A_11_0*cz0_8
-    K(12, 10) = K_9_11 - A_11_0*cz0_9
-    K(12, 11) = K_10_11 - A_11_0*cz0_10
-    K(12, 12) = K_11_11 - A_11_0*cz0_11
+    cz1_11 = cid1*cy1_11
+    cz2_11 = cid2*cy2_11
+    K(1, 1) = K_0_0 - A_0_0*cz0_0 - cy1_0*cz1_0 - cy2_0*cz2_0
+    K(1, 2) = K_0_1 - A_1_0*cz0_0 - cy1_1*cz1_0 - cy2_1*cz2_0
+    K(1, 3) = K_0_2 - A_2_0*cz0_0 - cy1_2*cz1_0 - cy2_2*cz2_0
+    K(1, 4) = K_0_3 - A_3_0*cz0_0 - cy1_3*cz1_0 - cy2_3*cz2_0
+    K(1, 5) = K_0_4 - A_4_0*cz0_0 - cy1_4*cz1_0 - cy2_4*cz2_0
+    K(1, 6) = K_0_5 - A_5_0*cz0_0 - cy1_5*cz1_0 - cy2_5*cz2_0
+    K(1, 7) = K_0_6 - A_6_0*cz0_0 - cy1_6*cz1_0 - cy2_6*cz2_0
+    K(1, 8) = K_0_7 - A_7_0*cz0_0 - cy1_7*cz1_0 - cy2_7*cz2_0
+    K(1, 9) = K_0_8 - A_8_0*cz0_0 - cy1_8*cz1_0 - cy2_8*cz2_0
+    K(1, 10) = K_0_9 - A_9_0*cz0_0 - cy1_9*cz1_0 - cy2_9*cz2_0
+    K(1, 11) = K_0_10 - A_10_0*cz0_0 - cy1_10*cz1_0 - cy2_10*cz2_0
+    K(1, 12) = K_0_11 - A_11_0*cz0_0 - cy1_11*cz1_0 - cy2_11*cz2_0
+    K(2, 1) = K_0_1 - A_1_0*cz0_0 - cy1_1*cz1_0 - cy2_1*cz2_0
+    K(2, 2) = K_1_1 - A_1_0*cz0_1 - cy1_1*cz1_1 - cy2_1*cz2_1
+    K(2, 3) = K_1_2 - A_2_0*cz0_1 - cy1_2*cz1_1 - cy2_2*cz2_1
+    K(2, 4) = K_1_3 - A_3_0*cz0_1 - cy1_3*cz1_1 - cy2_3*cz2_1
+    K(2, 5) = K_1_4 - A_4_0*cz0_1 - cy1_4*cz1_1 - cy2_4*cz2_1
+    K(2, 6) = K_1_5 - A_5_0*cz0_1 - cy1_5*cz1_1 - cy2_5*cz2_1
+    K(2, 7) = K_1_6 - A_6_0*cz0_1 - cy1_6*cz1_1 - cy2_6*cz2_1
+    K(2, 8) = K_1_7 - A_7_0*cz0_1 - cy1_7*cz1_1 - cy2_7*cz2_1
+    K(2, 9) = K_1_8 - A_8_0*cz0_1 - cy1_8*cz1_1 - cy2_8*cz2_1
+    K(2, 10) = K_1_9 - A_9_0*cz0_1 - cy1_9*cz1_1 - cy2_9*cz2_1
+    K(2, 11) = K_1_10 - A_10_0*cz0_1 - cy1_10*cz1_1 - cy2_10*cz2_1
+    K(2, 12) = K_1_11 - A_11_0*cz0_1 - cy1_11*cz1_1 - cy2_11*cz2_1
+    K(3, 1) = K_0_2 - A_2_0*cz0_0 - cy1_2*cz1_0 - cy2_2*cz2_0
+    K(3, 2) = K_1_2 - A_2_0*cz0_1 - cy1_2*cz1_1 - cy2_2*cz2_1
+    K(3, 3) = K_2_2 - A_2_0*cz0_2 - cy1_2*cz1_2 - cy2_2*cz2_2
+    K(3, 4) = K_2_3 - A_3_0*cz0_2 - cy1_3*cz1_2 - cy2_3*cz2_2
+    K(3, 5) = K_2_4 - A_4_0*cz0_2 - cy1_4*cz1_2 - cy2_4*cz2_2
+    K(3, 6) = K_2_5 - A_5_0*cz0_2 - cy1_5*cz1_2 - cy2_5*cz2_2
+    K(3, 7) = K_2_6 - A_6_0*cz0_2 - cy1_6*cz1_2 - cy2_6*cz2_2
+    K(3, 8) = K_2_7 - A_7_0*cz0_2 - cy1_7*cz1_2 - cy2_7*cz2_2
+    K(3, 9) = K_2_8 - A_8_0*cz0_2 - cy1_8*cz1_2 - cy2_8*cz2_2
+    K(3, 10) = K_2_9 - A_9_0*cz0_2 - cy1_9*cz1_2 - cy2_9*cz2_2
+    K(3, 11) = K_2_10 - A_10_0*cz0_2 - cy1_10*cz1_2 - cy2_10*cz2_2
+    K(3, 12) = K_2_11 - A_11_0*cz0_2 - cy1_11*cz1_2 - cy2_11*cz2_2
+    K(4, 1) = K_0_3 - A_3_0*cz0_0 - cy1_3*cz1_0 - cy2_3*cz2_0
+    K(4, 2) = K_1_3 - A_3_0*cz0_1 - cy1_3*cz1_1 - cy2_3*cz2_1
+    K(4, 3) = K_2_3 - A_3_0*cz0_2 - cy1_3*cz1_2 - cy2_3*cz2_2
+    K(4, 4) = K_3_3 - A_3_0*cz0_3 - cy1_3*cz1_3 - cy2_3*cz2_3
+    K(4, 5) = K_3_4 - A_4_0*cz0_3 - cy1_4*cz1_3 - cy2_4*cz2_3
+    K(4, 6) = K_3_5 - A_5_0*cz0_3 - cy1_5*cz1_3 - cy2_5*cz2_3
+    K(4, 7) = K_3_6 - A_6_0*cz0_3 - cy1_6*cz1_3 - cy2_6*cz2_3
+    K(4, 8) = K_3_7 - A_7_0*cz0_3 - cy1_7*cz1_3 - cy2_7*cz2_3
+    K(4, 9) = K_3_8 - A_8_0*cz0_3 - cy1_8*cz1_3 - cy2_8*cz2_3
+    K(4, 10) = K_3_9 - A_9_0*cz0_3 - cy1_9*cz1_3 - cy2_9*cz2_3
+    K(4, 11) = K_3_10 - A_10_0*cz0_3 - cy1_10*cz1_3 - cy2_10*cz2_3
+    K(4, 12) = K_3_11 - A_11_0*cz0_3 - cy1_11*cz1_3 - cy2_11*cz2_3
+    K(5, 1) = K_0_4 - A_4_0*cz0_0 - cy1_4*cz1_0 - cy2_4*cz2_0
+    K(5, 2) = K_1_4 - A_4_0*cz0_1 - cy1_4*cz1_1 - cy2_4*cz2_1
+    K(5, 3) = K_2_4 - A_4_0*cz0_2 - cy1_4*cz1_2 - cy2_4*cz2_2
+    K(5, 4) = K_3_4 - A_4_0*cz0_3 - cy1_4*cz1_3 - cy2_4*cz2_3
+    K(5, 5) = K_4_4 - A_4_0*cz0_4 - cy1_4*cz1_4 - cy2_4*cz2_4
+    K(5, 6) = K_4_5 - A_5_0*cz0_4 - cy1_5*cz1_4 - cy2_5*cz2_4
+    K(5, 7) = K_4_6 - A_6_0*cz0_4 - cy1_6*cz1_4 - cy2_6*cz2_4
+    K(5, 8) = K_4_7 - A_7_0*cz0_4 - cy1_7*cz1_4 - cy2_7*cz2_4
+    K(5, 9) = K_4_8 - A_8_0*cz0_4 - cy1_8*cz1_4 - cy2_8*cz2_4
+    K(5, 10) = K_4_9 - A_9_0*cz0_4 - cy1_9*cz1_4 - cy2_9*cz2_4
+    K(5, 11) = K_4_10 - A_10_0*cz0_4 - cy1_10*cz1_4 - cy2_10*cz2_4
+    K(5, 12) = K_4_11 - A_11_0*cz0_4 - cy1_11*cz1_4 - cy2_11*cz2_4
+    K(6, 1) = K_0_5 - A_5_0*cz0_0 - cy1_5*cz1_0 - cy2_5*cz2_0
+    K(6, 2) = K_1_5 - A_5_0*cz0_1 - cy1_5*cz1_1 - cy2_5*cz2_1
+    K(6, 3) = K_2_5 - A_5_0*cz0_2 - cy1_5*cz1_2 - cy2_5*cz2_2
+    K(6, 4) = K_3_5 - A_5_0*cz0_3 - cy1_5*cz1_3 - cy2_5*cz2_3
+    K(6, 5) = K_4_5 - A_5_0*cz0_4 - cy1_5*cz1_4 - cy2_5*cz2_4
+    K(6, 6) = K_5_5 - A_5_0*cz0_5 - cy1_5*cz1_5 - cy2_5*cz2_5
+    K(6, 7) = K_5_6 - A_6_0*cz0_5 - cy1_6*cz1_5 - cy2_6*cz2_5
+    K(6, 8) = K_5_7 - A_7_0*cz0_5 - cy1_7*cz1_5 - cy2_7*cz2_5
+    K(6, 9) = K_5_8 - A_8_0*cz0_5 - cy1_8*cz1_5 - cy2_8*cz2_5
+    K(6, 10) = K_5_9 - A_9_0*cz0_5 - cy1_9*cz1_5 - cy2_9*cz2_5
+    K(6, 11) = K_5_10 - A_10_0*cz0_5 - cy1_10*cz1_5 - cy2_10*cz2_5
+    K(6, 12) = K_5_11 - A_11_0*cz0_5 - cy1_11*cz1_5 - cy2_11*cz2_5
+    K(7, 1) = K_0_6 - A_6_0*cz0_0 - cy1_6*cz1_0 - cy2_6*cz2_0
+    K(7, 2) = K_1_6 - A_6_0*cz0_1 - cy1_6*cz1_1 - cy2_6*cz2_1
+    K(7, 3) = K_2_6 - A_6_0*cz0_2 - cy1_6*cz1_2 - cy2_6*cz2_2
+    K(7, 4) = K_3_6 - A_6_0*cz0_3 - cy1_6*cz1_3 - cy2_6*cz2_3
+    K(7, 5) = K_4_6 - A_6_0*cz0_4 - cy1_6*cz1_4 - cy2_6*cz2_4
+    K(7, 6) = K_5_6 - A_6_0*cz0_5 - cy1_6*cz1_5 - cy2_6*cz2_5
+    K(7, 7) = K_6_6 - A_6_0*cz0_6 - cy1_6*cz1_6 - cy2_6*cz2_6
+    K(7, 8) = K_6_7 - A_7_0*cz0_6 - cy1_7*cz1_6 - cy2_7*cz2_6
+    K(7, 9) = K_6_8 - A_8_0*cz0_6 - cy1_8*cz1_6 - cy2_8*cz2_6
+    K(7, 10) = K_6_9 - A_9_0*cz0_6 - cy1_9*cz1_6 - cy2_9*cz2_6
+    K(7, 11) = K_6_10 - A_10_0*cz0_6 - cy1_10*cz1_6 - cy2_10*cz2_6
+    K(7, 12) = K_6_11 - A_11_0*cz0_6 - cy1_11*cz1_6 - cy2_11*cz2_6
+    K(8, 1) = K_0_7 - A_7_0*cz0_0 - cy1_7*cz1_0 - cy2_7*cz2_0
+    K(8, 2) = K_1_7 - A_7_0*cz0_1 - cy1_7*cz1_1 - cy2_7*cz2_1
+    K(8, 3) = K_2_7 - A_7_0*cz0_2 - cy1_7*cz1_2 - cy2_7*cz2_2
+    K(8, 4) = K_3_7 - A_7_0*cz0_3 - cy1_7*cz1_3 - cy2_7*cz2_3
+    K(8, 5) = K_4_7 - A_7_0*cz0_4 - cy1_7*cz1_4 - cy2_7*cz2_4
+    K(8, 6) = K_5_7 - A_7_0*cz0_5 - cy1_7*cz1_5 - cy2_7*cz2_5
+    K(8, 7) = K_6_7 - A_7_0*cz0_6 - cy1_7*cz1_6 - cy2_7*cz2_6
+    K(8, 8) = K_7_7 - A_7_0*cz0_7 - cy1_7*cz1_7 - cy2_7*cz2_7
+    K(8, 9) = K_7_8 - A_8_0*cz0_7 - cy1_8*cz1_7 - cy2_8*cz2_7
+    K(8, 10) = K_7_9 - A_9_0*cz0_7 - cy1_9*cz1_7 - cy2_9*cz2_7
+    K(8, 11) = K_7_10 - A_10_0*cz0_7 - cy1_10*cz1_7 - cy2_10*cz2_7
+    K(8, 12) = K_7_11 - A_11_0*cz0_7 - cy1_11*cz1_7 - cy2_11*cz2_7
+    K(9, 1) = K_0_8 - A_8_0*cz0_0 - cy1_8*cz1_0 - cy2_8*cz2_0
+    K(9, 2) = K_1_8 - A_8_0*cz0_1 - cy1_8*cz1_1 - cy2_8*cz2_1
+    K(9, 3) = K_2_8 - A_8_0*cz0_2 - cy1_8*cz1_2 - cy2_8*cz2_2
+    K(9, 4) = K_3_8 - A_8_0*cz0_3 - cy1_8*cz1_3 - cy2_8*cz2_3
+    K(9, 5) = K_4_8 - A_8_0*cz0_4 - cy1_8*cz1_4 - cy2_8*cz2_4
+    K(9, 6) = K_5_8 - A_8_0*cz0_5 - cy1_8*cz1_5 - cy2_8*cz2_5
+    K(9, 7) = K_6_8 - A_8_0*cz0_6 - cy1_8*cz1_6 - cy2_8*cz2_6
+    K(9, 8) = K_7_8 - A_8_0*cz0_7 - cy1_8*cz1_7 - cy2_8*cz2_7
+    K(9, 9) = K_8_8 - A_8_0*cz0_8 - cy1_8*cz1_8 - cy2_8*cz2_8
+    K(9, 10) = K_8_9 - A_9_0*cz0_8 - cy1_9*cz1_8 - cy2_9*cz2_8
+    K(9, 11) = K_8_10 - A_10_0*cz0_8 - cy1_10*cz1_8 - cy2_10*cz2_8
+    K(9, 12) = K_8_11 - A_11_0*cz0_8 - cy1_11*cz1_8 - cy2_11*cz2_8
+    K(10, 1) = K_0_9 - A_9_0*cz0_0 - cy1_9*cz1_0 - cy2_9*cz2_0
+    K(10, 2) = K_1_9 - A_9_0*cz0_1 - cy1_9*cz1_1 - cy2_9*cz2_1
+    K(10, 3) = K_2_9 - A_9_0*cz0_2 - cy1_9*cz1_2 - cy2_9*cz2_2
+    K(10, 4) = K_3_9 - A_9_0*cz0_3 - cy1_9*cz1_3 - cy2_9*cz2_3
+    K(10, 5) = K_4_9 - A_9_0*cz0_4 - cy1_9*cz1_4 - cy2_9*cz2_4
+    K(10, 6) = K_5_9 - A_9_0*cz0_5 - cy1_9*cz1_5 - cy2_9*cz2_5
+    K(10, 7) = K_6_9 - A_9_0*cz0_6 - cy1_9*cz1_6 - cy2_9*cz2_6
+    K(10, 8) = K_7_9 - A_9_0*cz0_7 - cy1_9*cz1_7 - cy2_9*cz2_7
+    K(10, 9) = K_8_9 - A_9_0*cz0_8 - cy1_9*cz1_8 - cy2_9*cz2_8
+    K(10, 10) = K_9_9 - A_9_0*cz0_9 - cy1_9*cz1_9 - cy2_9*cz2_9
+    K(10, 11) = K_9_10 - A_10_0*cz0_9 - cy1_10*cz1_9 - cy2_10*cz2_9
+    K(10, 12) = K_9_11 - A_11_0*cz0_9 - cy1_11*cz1_9 - cy2_11*cz2_9
+    K(11, 1) = K_0_10 - A_10_0*cz0_0 - cy1_10*cz1_0 - cy2_10*cz2_0
+    K(11, 2) = K_1_10 - A_10_0*cz0_1 - cy1_10*cz1_1 - cy2_10*cz2_1
+    K(11, 3) = K_2_10 - A_10_0*cz0_2 - cy1_10*cz1_2 - cy2_10*cz2_2
+    K(11, 4) = K_3_10 - A_10_0*cz0_3 - cy1_10*cz1_3 - cy2_10*cz2_3
+    K(11, 5) = K_4_10 - A_10_0*cz0_4 - cy1_10*cz1_4 - cy2_10*cz2_4
+    K(11, 6) = K_5_10 - A_10_0*cz0_5 - cy1_10*cz1_5 - cy2_10*cz2_5
+    K(11, 7) = K_6_10 - A_10_0*cz0_6 - cy1_10*cz1_6 - cy2_10*cz2_6
+    K(11, 8) = K_7_10 - A_10_0*cz0_7 - cy1_10*cz1_7 - cy2_10*cz2_7
+    K(11, 9) = K_8_10 - A_10_0*cz0_8 - cy1_10*cz1_8 - cy2_10*cz2_8
+    K(11, 10) = K_9_10 - A_10_0*cz0_9 - cy1_10*cz1_9 - cy2_10*cz2_9
+    K(11, 11) = K_10_10 - A_10_0*cz0_10 - cy1_10*cz1_10 - cy2_10*cz2_10
+    K(11, 12) = K_10_11 - A_11_0*cz0_10 - cy1_11*cz1_10 - cy2_11*cz2_10
+    K(12, 1) = K_0_11 - A_11_0*cz0_0 - cy1_11*cz1_0 - cy2_11*cz2_0
+    K(12, 2) = K_1_11 - A_11_0*cz0_1 - cy1_11*cz1_1 - cy2_11*cz2_1
+    K(12, 3) = K_2_11 - A_11_0*cz0_2 - cy1_11*cz1_2 - cy2_11*cz2_2
+    K(12, 4) = K_3_11 - A_11_0*cz0_3 - cy1_11*cz1_3 - cy2_11*cz2_3
+    K(12, 5) = K_4_11 - A_11_0*cz0_4 - cy1_11*cz1_4 - cy2_11*cz2_4
+    K(12, 6) = K_5_11 - A_11_0*cz0_5 - cy1_11*cz1_5 - cy2_11*cz2_5
+    K(12, 7) = K_6_11 - A_11_0*cz0_6 - cy1_11*cz1_6 - cy2_11*cz2_6
+    K(12, 8) = K_7_11 - A_11_0*cz0_7 - cy1_11*cz1_7 - cy2_11*cz2_7
+    K(12, 9) = K_8_11 - A_11_0*cz0_8 - cy1_11*cz1_8 - cy2_11*cz2_8
+    K(12, 10) = K_9_11 - A_11_0*cz0_9 - cy1_11*cz1_9 - cy2_11*cz2_9
+    K(12, 11) = K_10_11 - A_11_0*cz0_10 - cy1_11*cz1_10 - cy2_11*cz2_10
+    K(12, 12) = K_11_11 - A_11_0*cz0_11 - cy1_11*cz1_11 - cy2_11*cz2_11
   end subroutine t6_bbar_plane_stress_stiffness
 
   pure subroutine t6_bbar_plane_stress_stiffness_batch(n, xy, E, nu, t, K) &
@@ -643,9 +767,12 @@ contains
     real(dp), intent(out) :: strain(3, 3), stress(3, 3)
     real(dp), parameter :: t = 1.0_dp
     real(dp) :: x1, y1, x2, y2, x3, y3, x4, y4, x5, y5, x6, y6, u1, u2, u3, u4, u5, u6, u7, u8, u9
-    real(dp) :: u10, u11, u12, m3, m4, m5, m6, m7, gx_0_1, gx_0_2, gx_1_0, gx_1_1, gx_2_0, gy_0_1
-    real(dp) :: gy_0_2, gy_1_0, gy_1_1, gy_2_0, A_0_0, A_1_0, A_2_0, A_3_0, A_4_0, A_5_0, A_6_0, A_7_0
-    real(dp) :: A_8_0, A_9_0, A_10_0, A_11_0, H_0_0, cid0, cb0, alpha1
+    real(dp) :: u10, u11, u12, m3, m4, m5, m6, m7, m8, gx_0_1, gx_0_2, gx_1_0, gx_1_1, gx_2_0, gy_0_1
+    real(dp) :: gy_0_2, gy_1_0, gy_1_1, gy_2_0, A_0_0, A_0_1, A_0_2, A_1_0, A_1_1, A_1_2, A_2_0, A_2_1
+    real(dp) :: A_2_2, A_3_0, A_3_1, A_3_2, A_4_0, A_4_1, A_4_2, A_5_0, A_5_1, A_5_2, A_6_0, A_6_1
+    real(dp) :: A_6_2, A_7_0, A_7_1, A_7_2, A_8_0, A_8_1, A_8_2, A_9_0, A_9_1, A_9_2, A_10_0, A_10_1
+    real(dp) :: A_10_2, A_11_0, A_11_1, A_11_2, H_0_0, H_0_1, H_0_2, H_1_1, H_1_2, H_2_2, cid0, cL1_0
+    real(dp) :: cL2_0, cd1, cid1, cL2_1, cd2, cid2, cb0, cb1, cb2, cy1_0, cy2_0, alpha3, alpha2, alpha1
     x1 = xy(1, 1)
     y1 = xy(2, 1)
     x2 = xy(1, 2)
@@ -672,9 +799,10 @@ contains
     u12 = u(12)
     m3 = -(-3.0_dp + 3.0_dp*nu*nu)/(-E - 2.0_dp*E*nu)
     m4 = 0.5_dp*(-3.0_dp + 3.0_dp*nu*nu)/(-E - 2.0_dp*E*nu)
-    m5 = E/(1.0_dp - nu*nu)
-    m6 = E*nu/(1.0_dp - nu*nu)
-    m7 = E*(0.5_dp - 0.5_dp*nu)/(1.0_dp - nu*nu)
+    m5 = (-3.0_dp + 3.0_dp*nu*nu)/(-E - 2.0_dp*E*nu)
+    m6 = E/(1.0_dp - nu*nu)
+    m7 = E*nu/(1.0_dp - nu*nu)
+    m8 = E*(0.5_dp - 0.5_dp*nu)/(1.0_dp - nu*nu)
     gx_0_1 = -x3 - 3.0_dp*x1 + 4.0_dp*x6
     gx_0_2 = -4.0_dp*x6 + 2.0_dp*x1 + 2.0_dp*x3
     gx_1_0 = -x2 - 3.0_dp*x1 + 4.0_dp*x4
@@ -687,7 +815,7 @@ contains
     gy_2_0 = -4.0_dp*y4 + 2.0_dp*y1 + 2.0_dp*y2
     block   ! triangle-d2 point 1 of 3: xi = 1/6, eta = 1/6, weight = 1/6
       real(dp) :: q0, J00, q1, J01, J10, J11, detJ, idet, Ji00, Ji01, Ji10, Ji11, dNdx1, dNdy1, dNdx2
-      real(dp) :: dNdy2, dNdx3, dNdy3, dNdx4, dNdy4, dNdx5, dNdy5, dNdx6, dNdy6, sc0, s40
+      real(dp) :: dNdy2, dNdx3, dNdy3, dNdx4, dNdy4, dNdx5, dNdy5, dNdx6, dNdy6, sc0, q2, s42, q3, q4
       q0 = 0.16666666666666666_dp*gx_1_1
       J00 = gx_1_0 + q0 + 0.3333333333333333_dp*gx_2_0
       q1 = 0.16666666666666666_dp*gy_1_1
@@ -713,24 +841,56 @@ contains
       dNdx6 = 2.0_dp*Ji01 - 0.6666666666666666_dp*Ji00
       dNdy6 = 2.0_dp*Ji11 - 0.6666666666666666_dp*Ji10
       sc0 = 0.16666666666666666_dp*detJ*t
-      s40 = m3*sc0
+      q2 = 0.16666666666666666_dp*sc0
+      s42 = m3*sc0
+      q3 = 0.16666666666666666_dp*s42
+      q4 = 0.16666666666666666_dp*q3
       A_0_0 = dNdx1*sc0
+      A_0_1 = dNdx1*q2
+      A_0_2 = dNdx1*q2
       A_1_0 = dNdy1*sc0
+      A_1_1 = dNdy1*q2
+      A_1_2 = dNdy1*q2
       A_2_0 = dNdx2*sc0
+      A_2_1 = dNdx2*q2
+      A_2_2 = dNdx2*q2
       A_3_0 = dNdy2*sc0
+      A_3_1 = dNdy2*q2
+      A_3_2 = dNdy2*q2
       A_4_0 = dNdx3*sc0
+      A_4_1 = dNdx3*q2
+      A_4_2 = dNdx3*q2
       A_5_0 = dNdy3*sc0
+      A_5_1 = dNdy3*q2
+      A_5_2 = dNdy3*q2
       A_6_0 = dNdx4*sc0
+      A_6_1 = dNdx4*q2
+      A_6_2 = dNdx4*q2
       A_7_0 = dNdy4*sc0
+      A_7_1 = dNdy4*q2
+      A_7_2 = dNdy4*q2
       A_8_0 = dNdx5*sc0
+      A_8_1 = dNdx5*q2
+      A_8_2 = dNdx5*q2
       A_9_0 = dNdy5*sc0
+      A_9_1 = dNdy5*q2
+      A_9_2 = dNdy5*q2
       A_10_0 = dNdx6*sc0
+      A_10_1 = dNdx6*q2
+      A_10_2 = dNdx6*q2
       A_11_0 = dNdy6*sc0
-      H_0_0 = s40
+      A_11_1 = dNdy6*q2
+      A_11_2 = dNdy6*q2
+      H_0_0 = s42
+      H_0_1 = q3
+      H_0_2 = q3
+      H_1_1 = 0.16666666666666666_dp*q3
+      H_1_2 = q4
+      H_2_2 = q4
     end block
     block   ! triangle-d2 point 2 of 3: xi = 2/3, eta = 1/6, weight = 1/6
       real(dp) :: J00, J01, J10, J11, detJ, idet, Ji00, Ji01, Ji10, Ji11, dNdx1, dNdy1, dNdx2, dNdy2
-      real(dp) :: dNdx3, dNdy3, dNdx4, dNdy4, dNdx5, dNdy5, dNdx6, dNdy6, sc0, s40
+      real(dp) :: dNdx3, dNdy3, dNdx4, dNdy4, dNdx5, dNdy5, dNdx6, dNdy6, sc0, T40, T41, s42, T43, T44
       J00 = gx_1_0 + 0.16666666666666666_dp*gx_1_1 + 1.3333333333333333_dp*gx_2_0
       J01 = gy_1_0 + 0.16666666666666666_dp*gy_1_1 + 1.3333333333333333_dp*gy_2_0
       J10 = gx_0_1 + 0.3333333333333333_dp*gx_0_2 + 0.6666666666666666_dp*gx_1_1
@@ -754,24 +914,57 @@ contains
       dNdx6 = -0.6666666666666666_dp*Ji00
       dNdy6 = -0.6666666666666666_dp*Ji10
       sc0 = 0.16666666666666666_dp*detJ*t
-      s40 = m3*sc0
+      T40 = 0.6666666666666666_dp*sc0
+      T41 = 0.16666666666666666_dp*sc0
+      s42 = m3*sc0
+      T43 = 0.6666666666666666_dp*s42
+      T44 = 0.16666666666666666_dp*s42
       A_0_0 = A_0_0 + (dNdx1*sc0)
+      A_0_1 = A_0_1 + (T40*dNdx1)
+      A_0_2 = A_0_2 + (T41*dNdx1)
       A_1_0 = A_1_0 + (dNdy1*sc0)
+      A_1_1 = A_1_1 + (T40*dNdy1)
+      A_1_2 = A_1_2 + (T41*dNdy1)
       A_2_0 = A_2_0 + (dNdx2*sc0)
+      A_2_1 = A_2_1 + (T40*dNdx2)
+      A_2_2 = A_2_2 + (T41*dNdx2)
       A_3_0 = A_3_0 + (dNdy2*sc0)
+      A_3_1 = A_3_1 + (T40*dNdy2)
+      A_3_2 = A_3_2 + (T41*dNdy2)
       A_4_0 = A_4_0 + (dNdx3*sc0)
+      A_4_1 = A_4_1 + (T40*dNdx3)
+      A_4_2 = A_4_2 + (T41*dNdx3)
       A_5_0 = A_5_0 + (dNdy3*sc0)
+      A_5_1 = A_5_1 + (T40*dNdy3)
+      A_5_2 = A_5_2 + (T41*dNdy3)
       A_6_0 = A_6_0 + (dNdx4*sc0)
+      A_6_1 = A_6_1 + (T40*dNdx4)
+      A_6_2 = A_6_2 + (T41*dNdx4)
       A_7_0 = A_7_0 + (dNdy4*sc0)
+      A_7_1 = A_7_1 + (T40*dNdy4)
+      A_7_2 = A_7_2 + (T41*dNdy4)
       A_8_0 = A_8_0 + (dNdx5*sc0)
+      A_8_1 = A_8_1 + (T40*dNdx5)
+      A_8_2 = A_8_2 + (T41*dNdx5)
       A_9_0 = A_9_0 + (dNdy5*sc0)
+      A_9_1 = A_9_1 + (T40*dNdy5)
+      A_9_2 = A_9_2 + (T41*dNdy5)
       A_10_0 = A_10_0 + (dNdx6*sc0)
+      A_10_1 = A_10_1 + (T40*dNdx6)
+      A_10_2 = A_10_2 + (T41*dNdx6)
       A_11_0 = A_11_0 + (dNdy6*sc0)
-      H_0_0 = H_0_0 + (s40)
+      A_11_1 = A_11_1 + (T40*dNdy6)
+      A_11_2 = A_11_2 + (T41*dNdy6)
+      H_0_0 = H_0_0 + (s42)
+      H_0_1 = H_0_1 + (T43)
+      H_0_2 = H_0_2 + (T44)
+      H_1_1 = H_1_1 + (0.6666666666666666_dp*T43)
+      H_1_2 = H_1_2 + (0.6666666666666666_dp*T44)
+      H_2_2 = H_2_2 + (0.16666666666666666_dp*T44)
     end block
     block   ! triangle-d2 point 3 of 3: xi = 1/6, eta = 2/3, weight = 1/6
       real(dp) :: J00, J01, J10, J11, detJ, idet, Ji00, Ji01, Ji10, Ji11, dNdx1, dNdy1, dNdx2, dNdy2
-      real(dp) :: dNdx3, dNdy3, dNdx4, dNdy4, dNdx5, dNdy5, dNdx6, dNdy6, sc0, s40
+      real(dp) :: dNdx3, dNdy3, dNdx4, dNdy4, dNdx5, dNdy5, dNdx6, dNdy6, sc0, T40, T41, s42, T43, T44
       J00 = gx_1_0 + 0.3333333333333333_dp*gx_2_0 + 0.6666666666666666_dp*gx_1_1
       J01 = gy_1_0 + 0.3333333333333333_dp*gy_2_0 + 0.6666666666666666_dp*gy_1_1
       J10 = gx_0_1 + 0.16666666666666666_dp*gx_1_1 + 1.3333333333333333_dp*gx_0_2
@@ -795,29 +988,78 @@ contains
       dNdx6 = -2.0_dp*Ji01 - 2.6666666666666665_dp*Ji00
       dNdy6 = -2.0_dp*Ji11 - 2.6666666666666665_dp*Ji10
       sc0 = 0.16666666666666666_dp*detJ*t
-      s40 = m3*sc0
+      T40 = 0.16666666666666666_dp*sc0
+      T41 = 0.6666666666666666_dp*sc0
+      s42 = m3*sc0
+      T43 = 0.16666666666666666_dp*s42
+      T44 = 0.6666666666666666_dp*s42
       A_0_0 = A_0_0 + (dNdx1*sc0)
+      A_0_1 = A_0_1 + (T40*dNdx1)
+      A_0_2 = A_0_2 + (T41*dNdx1)
       A_1_0 = A_1_0 + (dNdy1*sc0)
+      A_1_1 = A_1_1 + (T40*dNdy1)
+      A_1_2 = A_1_2 + (T41*dNdy1)
       A_2_0 = A_2_0 + (dNdx2*sc0)
+      A_2_1 = A_2_1 + (T40*dNdx2)
+      A_2_2 = A_2_2 + (T41*dNdx2)
       A_3_0 = A_3_0 + (dNdy2*sc0)
+      A_3_1 = A_3_1 + (T40*dNdy2)
+      A_3_2 = A_3_2 + (T41*dNdy2)
       A_4_0 = A_4_0 + (dNdx3*sc0)
+      A_4_1 = A_4_1 + (T40*dNdx3)
+      A_4_2 = A_4_2 + (T41*dNdx3)
       A_5_0 = A_5_0 + (dNdy3*sc0)
+      A_5_1 = A_5_1 + (T40*dNdy3)
+      A_5_2 = A_5_2 + (T41*dNdy3)
       A_6_0 = A_6_0 + (dNdx4*sc0)
+      A_6_1 = A_6_1 + (T40*dNdx4)
+      A_6_2 = A_6_2 + (T41*dNdx4)
       A_7_0 = A_7_0 + (dNdy4*sc0)
+      A_7_1 = A_7_1 + (T40*dNdy4)
+      A_7_2 = A_7_2 + (T41*dNdy4)
       A_8_0 = A_8_0 + (dNdx5*sc0)
+      A_8_1 = A_8_1 + (T40*dNdx5)
+      A_8_2 = A_8_2 + (T41*dNdx5)
       A_9_0 = A_9_0 + (dNdy5*sc0)
+      A_9_1 = A_9_1 + (T40*dNdy5)
+      A_9_2 = A_9_2 + (T41*dNdy5)
       A_10_0 = A_10_0 + (dNdx6*sc0)
+      A_10_1 = A_10_1 + (T40*dNdx6)
+      A_10_2 = A_10_2 + (T41*dNdx6)
       A_11_0 = A_11_0 + (dNdy6*sc0)
-      H_0_0 = H_0_0 + (s40)
+      A_11_1 = A_11_1 + (T40*dNdy6)
+      A_11_2 = A_11_2 + (T41*dNdy6)
+      H_0_0 = H_0_0 + (s42)
+      H_0_1 = H_0_1 + (T43)
+      H_0_2 = H_0_2 + (T44)
+      H_1_1 = H_1_1 + (0.16666666666666666_dp*T43)
+      H_1_2 = H_1_2 + (0.16666666666666666_dp*T44)
+      H_2_2 = H_2_2 + (0.6666666666666666_dp*T44)
     end block
     ! static condensation of the internal unknowns
     cid0 = 1.0_dp/H_0_0
+    cL1_0 = H_0_1*cid0
+    cL2_0 = H_0_2*cid0
+    cd1 = H_1_1 - H_0_0*cL1_0*cL1_0
+    cid1 = 1.0_dp/cd1
+    cL2_1 = cid1*(H_1_2 - H_0_0*cL1_0*cL2_0)
+    cd2 = H_2_2 - H_0_0*cL2_0*cL2_0 - cd1*cL2_1*cL2_1
+    cid2 = 1.0_dp/cd2
     cb0 = -A_0_0*u1 - A_10_0*u11 - A_11_0*u12 - A_1_0*u2 - A_2_0*u3 - A_3_0*u4 - A_4_0*u5 &
         - A_5_0*u6 - A_6_0*u7 - A_7_0*u8 - A_8_0*u9 - A_9_0*u10
-    alpha1 = cb0*cid0
+    cb1 = -A_0_1*u1 - A_10_1*u11 - A_11_1*u12 - A_1_1*u2 - A_2_1*u3 - A_3_1*u4 - A_4_1*u5 &
+        - A_5_1*u6 - A_6_1*u7 - A_7_1*u8 - A_8_1*u9 - A_9_1*u10
+    cb2 = -A_0_2*u1 - A_10_2*u11 - A_11_2*u12 - A_1_2*u2 - A_2_2*u3 - A_3_2*u4 - A_4_2*u5 &
+        - A_5_2*u6 - A_6_2*u7 - A_7_2*u8 - A_8_2*u9 - A_9_2*u10
+    cy1_0 = cb1 - cL1_0*cb0
+    cy2_0 = cb2 - cL2_0*cb0 - cL2_1*cy1_0
+    alpha3 = cid2*cy2_0
+    alpha2 = cid1*cy1_0 - alpha3*cL2_1
+    alpha1 = cb0*cid0 - alpha2*cL1_0 - alpha3*cL2_0
     block   ! triangle-d2 point 1 of 3: xi = 1/6, eta = 1/6, weight = 1/6
       real(dp) :: q0, J00, q1, J01, J10, J11, detJ, idet, Ji00, Ji01, Ji10, Ji11, dNdx1, dNdy1, dNdx2
-      real(dp) :: dNdy2, dNdx3, dNdy3, dNdx4, dNdy4, dNdx5, dNdy5, dNdx6, dNdy6, q2, eps41, eps42, eps43
+      real(dp) :: dNdy2, dNdx3, dNdy3, dNdx4, dNdy4, dNdx5, dNdy5, dNdx6, dNdy6, q2, q3, q4, eps45, eps46
+      real(dp) :: eps47
       q0 = 0.16666666666666666_dp*gx_1_1
       J00 = gx_1_0 + q0 + 0.3333333333333333_dp*gx_2_0
       q1 = 0.16666666666666666_dp*gy_1_1
@@ -843,24 +1085,26 @@ contains
       dNdx6 = 2.0_dp*Ji01 - 0.6666666666666666_dp*Ji00
       dNdy6 = 2.0_dp*Ji11 - 0.6666666666666666_dp*Ji10
       q2 = alpha1*m4
-      eps41 = q2 + 0.5_dp*dNdx1*u1 + 0.5_dp*dNdx2*u3 + 0.5_dp*dNdx3*u5 + 0.5_dp*dNdx4*u7 &
+      q3 = 0.08333333333333333_dp*alpha2*m5
+      q4 = 0.08333333333333333_dp*alpha3*m5
+      eps45 = q2 + q3 + q4 + 0.5_dp*dNdx1*u1 + 0.5_dp*dNdx2*u3 + 0.5_dp*dNdx3*u5 + 0.5_dp*dNdx4*u7 &
           + 0.5_dp*dNdx5*u9 + 0.5_dp*dNdx6*u11 - 0.5_dp*dNdy1*u2 - 0.5_dp*dNdy2*u4 &
           - 0.5_dp*dNdy3*u6 - 0.5_dp*dNdy4*u8 - 0.5_dp*dNdy5*u10 - 0.5_dp*dNdy6*u12
-      eps42 = q2 + 0.5_dp*dNdy1*u2 + 0.5_dp*dNdy2*u4 + 0.5_dp*dNdy3*u6 + 0.5_dp*dNdy4*u8 &
+      eps46 = q2 + q3 + q4 + 0.5_dp*dNdy1*u2 + 0.5_dp*dNdy2*u4 + 0.5_dp*dNdy3*u6 + 0.5_dp*dNdy4*u8 &
           + 0.5_dp*dNdy5*u10 + 0.5_dp*dNdy6*u12 - 0.5_dp*dNdx1*u1 - 0.5_dp*dNdx2*u3 &
           - 0.5_dp*dNdx3*u5 - 0.5_dp*dNdx4*u7 - 0.5_dp*dNdx5*u9 - 0.5_dp*dNdx6*u11
-      eps43 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdy1*u1 &
+      eps47 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdy1*u1 &
           + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
-      strain(1, 1) = eps41
-      strain(2, 1) = eps42
-      strain(3, 1) = eps43
-      stress(1, 1) = eps41*m5 + eps42*m6
-      stress(2, 1) = eps41*m6 + eps42*m5
-      stress(3, 1) = eps43*m7
+      strain(1, 1) = eps45
+      strain(2, 1) = eps46
+      strain(3, 1) = eps47
+      stress(1, 1) = eps45*m6 + eps46*m7
+      stress(2, 1) = eps45*m7 + eps46*m6
+      stress(3, 1) = eps47*m8
     end block
     block   ! triangle-d2 point 2 of 3: xi = 2/3, eta = 1/6, weight = 1/6
       real(dp) :: J00, J01, J10, J11, detJ, idet, Ji00, Ji01, Ji10, Ji11, dNdx1, dNdy1, dNdx2, dNdy2
-      real(dp) :: dNdx3, dNdy3, dNdx4, dNdy4, dNdx5, dNdy5, dNdx6, dNdy6, q0, eps41, eps42, eps43
+      real(dp) :: dNdx3, dNdy3, dNdx4, dNdy4, dNdx5, dNdy5, dNdx6, dNdy6, q0, q1, q2, eps45, eps46, eps47
       J00 = gx_1_0 + 0.16666666666666666_dp*gx_1_1 + 1.3333333333333333_dp*gx_2_0
       J01 = gy_1_0 + 0.16666666666666666_dp*gy_1_1 + 1.3333333333333333_dp*gy_2_0
       J10 = gx_0_1 + 0.3333333333333333_dp*gx_0_2 + 0.6666666666666666_dp*gx_1_1
@@ -884,24 +1128,26 @@ contains
       dNdx6 = -0.6666666666666666_dp*Ji00
       dNdy6 = -0.6666666666666666_dp*Ji10
       q0 = alpha1*m4
-      eps41 = q0 + 0.5_dp*dNdx1*u1 + 0.5_dp*dNdx2*u3 + 0.5_dp*dNdx3*u5 + 0.5_dp*dNdx4*u7 &
+      q1 = 0.3333333333333333_dp*alpha2*m5
+      q2 = 0.08333333333333333_dp*alpha3*m5
+      eps45 = q0 + q1 + q2 + 0.5_dp*dNdx1*u1 + 0.5_dp*dNdx2*u3 + 0.5_dp*dNdx3*u5 + 0.5_dp*dNdx4*u7 &
           + 0.5_dp*dNdx5*u9 + 0.5_dp*dNdx6*u11 - 0.5_dp*dNdy1*u2 - 0.5_dp*dNdy2*u4 &
           - 0.5_dp*dNdy3*u6 - 0.5_dp*dNdy4*u8 - 0.5_dp*dNdy5*u10 - 0.5_dp*dNdy6*u12
-      eps42 = q0 + 0.5_dp*dNdy1*u2 + 0.5_dp*dNdy2*u4 + 0.5_dp*dNdy3*u6 + 0.5_dp*dNdy4*u8 &
+      eps46 = q0 + q1 + q2 + 0.5_dp*dNdy1*u2 + 0.5_dp*dNdy2*u4 + 0.5_dp*dNdy3*u6 + 0.5_dp*dNdy4*u8 &
           + 0.5_dp*dNdy5*u10 + 0.5_dp*dNdy6*u12 - 0.5_dp*dNdx1*u1 - 0.5_dp*dNdx2*u3 &
           - 0.5_dp*dNdx3*u5 - 0.5_dp*dNdx4*u7 - 0.5_dp*dNdx5*u9 - 0.5_dp*dNdx6*u11
-      eps43 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdy1*u1 &
+      eps47 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdy1*u1 &
           + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
-      strain(1, 2) = eps41
-      strain(2, 2) = eps42
-      strain(3, 2) = eps43
-      stress(1, 2) = eps41*m5 + eps42*m6
-      stress(2, 2) = eps41*m6 + eps42*m5
-      stress(3, 2) = eps43*m7
+      strain(1, 2) = eps45
+      strain(2, 2) = eps46
+      strain(3, 2) = eps47
+      stress(1, 2) = eps45*m6 + eps46*m7
+      stress(2, 2) = eps45*m7 + eps46*m6
+      stress(3, 2) = eps47*m8
     end block
     block   ! triangle-d2 point 3 of 3: xi = 1/6, eta = 2/3, weight = 1/6
       real(dp) :: J00, J01, J10, J11, detJ, idet, Ji00, Ji01, Ji10, Ji11, dNdx1, dNdy1, dNdx2, dNdy2
-      real(dp) :: dNdx3, dNdy3, dNdx4, dNdy4, dNdx5, dNdy5, dNdx6, dNdy6, q0, eps41, eps42, eps43
+      real(dp) :: dNdx3, dNdy3, dNdx4, dNdy4, dNdx5, dNdy5, dNdx6, dNdy6, q0, q1, q2, eps45, eps46, eps47
       J00 = gx_1_0 + 0.3333333333333333_dp*gx_2_0 + 0.6666666666666666_dp*gx_1_1
       J01 = gy_1_0 + 0.3333333333333333_dp*gy_2_0 + 0.6666666666666666_dp*gy_1_1
       J10 = gx_0_1 + 0.16666666666666666_dp*gx_1_1 + 1.3333333333333333_dp*gx_0_2
@@ -925,20 +1171,22 @@ contains
       dNdx6 = -2.0_dp*Ji01 - 2.6666666666666665_dp*Ji00
       dNdy6 = -2.0_dp*Ji11 - 2.6666666666666665_dp*Ji10
       q0 = alpha1*m4
-      eps41 = q0 + 0.5_dp*dNdx1*u1 + 0.5_dp*dNdx2*u3 + 0.5_dp*dNdx3*u5 + 0.5_dp*dNdx4*u7 &
+      q1 = 0.3333333333333333_dp*alpha3*m5
+      q2 = 0.08333333333333333_dp*alpha2*m5
+      eps45 = q0 + q1 + q2 + 0.5_dp*dNdx1*u1 + 0.5_dp*dNdx2*u3 + 0.5_dp*dNdx3*u5 + 0.5_dp*dNdx4*u7 &
           + 0.5_dp*dNdx5*u9 + 0.5_dp*dNdx6*u11 - 0.5_dp*dNdy1*u2 - 0.5_dp*dNdy2*u4 &
           - 0.5_dp*dNdy3*u6 - 0.5_dp*dNdy4*u8 - 0.5_dp*dNdy5*u10 - 0.5_dp*dNdy6*u12
-      eps42 = q0 + 0.5_dp*dNdy1*u2 + 0.5_dp*dNdy2*u4 + 0.5_dp*dNdy3*u6 + 0.5_dp*dNdy4*u8 &
+      eps46 = q0 + q1 + q2 + 0.5_dp*dNdy1*u2 + 0.5_dp*dNdy2*u4 + 0.5_dp*dNdy3*u6 + 0.5_dp*dNdy4*u8 &
           + 0.5_dp*dNdy5*u10 + 0.5_dp*dNdy6*u12 - 0.5_dp*dNdx1*u1 - 0.5_dp*dNdx2*u3 &
           - 0.5_dp*dNdx3*u5 - 0.5_dp*dNdx4*u7 - 0.5_dp*dNdx5*u9 - 0.5_dp*dNdx6*u11
-      eps43 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdy1*u1 &
+      eps47 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdy1*u1 &
           + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11
-      strain(1, 3) = eps41
-      strain(2, 3) = eps42
-      strain(3, 3) = eps43
-      stress(1, 3) = eps41*m5 + eps42*m6
-      stress(2, 3) = eps41*m6 + eps42*m5
-      stress(3, 3) = eps43*m7
+      strain(1, 3) = eps45
+      strain(2, 3) = eps46
+      strain(3, 3) = eps47
+      stress(1, 3) = eps45*m6 + eps46*m7
+      stress(2, 3) = eps45*m7 + eps46*m6
+      stress(3, 3) = eps47*m8
     end block
   end subroutine t6_bbar_plane_stress_recovery_one
 

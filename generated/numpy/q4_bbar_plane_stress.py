@@ -2,10 +2,10 @@
 derive generated kernel: Q4 bbar plane-stress
 
 element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
-formulation  mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed)
-             [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
-integration  B^T D_dev B: gauss-2x2 (4 points); B^T m (g): gauss-2x2 (4 points); -1/kappa
-             (-V/kappa): gauss-2x2 (4 points)
+formulation  B-bar, dilatation projected on a constant pressure (mean dilatation): K_dev + kappa
+             g^T M_p^-1 g [Hughes (1980); Nagtegaal, Parks & Rice (1974)]
+integration  B^T D_dev B: gauss-2x2 (4 points); B^T m pi (g): gauss-2x2 (4 points); -pi^T pi /
+             kappa (-M_p / kappa): gauss-2x2 (4 points)
 internal     1 internal unknowns condensed inside the kernel: K = K_uu - K_ua K_aa^-1 K_ua^T
              (unrolled factorisation of K_aa, no pivoting)
 flops        stiffness 1115, validity 89, recovery 793 per element (add, mul, div, sqrt)
