@@ -1,28 +1,31 @@
-"""Mean-dilatation B-bar (Hughes, 1980), written as a one-parameter condensation.
+"""B-bar (Hughes, 1980), written as a condensation of an element pressure field.
 
 With D = D_dev + kappa m m^T (the split of :func:`derive.formulations.selective.split`:
-three-dimensional deviatoric form, D_dev positive definite in the plane states), the mean-dilatation element
-replaces the volumetric strain m^T B u by its element mean theta = g^T u / V,
-g = int m^T B dV, V = int dV:
+three-dimensional deviatoric form, D_dev positive definite in the plane states), B-bar
+replaces the volumetric strain m^T B u by its L2 projection on the element's pressure space
+pi (a row of polynomials in xi, eta):
 
-    K = int B^T D_dev B dV + kappa g g^T / V.
+    theta_bar = pi M_p^-1 g u,   M_p = int pi^T pi dV,   g = int pi^T m^T B dV
+    K = int B^T D_dev B dV + kappa g^T M_p^-1 g.
 
-The same matrix is the condensation of a constant pressure p (one internal unknown):
+The same matrix is the condensation of the pressure parameters (internal unknowns):
 
-    K_uu = int B^T D_dev B dV,   K_ua = int B^T m dV = g,   K_aa = -int dV / kappa = -V / kappa
-    K = K_uu - K_ua K_aa^-1 K_ua^T = K_dev + kappa g g^T / V,
+    K_uu = int B^T D_dev B dV,   K_ua = int B^T m pi dV = g^T,   K_aa = -M_p / kappa
+    K = K_uu - K_ua K_aa^-1 K_ua^T,
 
-which is how it is stated here, so it reaches the exact, point and numeric routes like any
-other formulation (p = kappa theta is recovered as the internal unknown).  All integrals use
-the element's full rule.  kappa per state: lambda + 2 mu / 3 (plane strain, axisymmetric),
-lambda* + 2 mu / 3 with lambda* = E nu / (1 - nu^2) (plane stress).
+which is how it is stated here, so it reaches the exact, point, numeric and kernel routes
+like any other formulation.  Pressure spaces: constant for Q4 (the mean-dilatation element of
+Nagtegaal, Parks & Rice, 1974), linear {1, xi, eta} for Q8, Q9 and T6 (the 3-parameter
+pressure of the quadratic mixed elements; with a constant pressure those elements keep two
+purely dilatational zero-energy modes, u = (x^2 - y^2, 2xy) and (-2xy, x^2 - y^2), and are too
+flexible in bending by 2(1 + nu)).  All integrals use the element's full rule.  kappa per
+state: lambda + 2 mu / 3 (plane strain, axisymmetric), lambda* + 2 mu / 3 with
+lambda* = E nu / (1 - nu^2) (plane stress).
 
-The strain the element works with is eps_bar = (I - m m^T / n) B u + m p / (n kappa),
-n = m^T m (2 in the plane states, 3 axisymmetric).
+The strain the element works with is eps_bar = (I - m m^T / n) B u + m pi alpha / (n kappa),
+n = m^T m (2 in the plane states, 3 axisymmetric), alpha the pressure parameters.
 
-Axisymmetric: Q4 only.  A quadratic axisymmetric element with one constant pressure keeps
-a zero-energy mode (u_r = r (z - z0), u_z = (z^2 - r^2)/2 - z0 z is purely dilatational with a
-dilatation linear in z, whose volume mean can vanish), so that combination is refused.
+Axisymmetric: Q4 only.
 
 Sources: Hughes (1980), Generalization of selective integration procedures to anisotropic
 and nonlinear media, IJNME 15; Nagtegaal, Parks and Rice (1974) for the mean-dilatation idea.
@@ -45,34 +48,48 @@ def one_op(p) -> sp.Matrix:
     return sp.Matrix([[1]])
 
 
+def pressure_basis(info) -> tuple[str, ...]:
+    """The pressure space the dilatation is projected onto: constant for the linear elements
+    (mean dilatation), linear in the reference coordinates for the quadratic ones."""
+    return ("1",) if info.n_nodes <= 4 else ("1", "xi", "eta")
+
+
+def linear_pressure_op(p) -> sp.Matrix:
+    return sp.Matrix([[1, p.p, p.q]])
+
+
 def minus_compliance_op(p) -> sp.Matrix:
     kappa = split(p.state, p.E, p.nu)[2]
     return sp.Matrix([[-1 / kappa]])
 
 
-def _strain(p):
-    m = material.volumetric_vector(p.state)
-    n = (m.T * m)[0, 0]
-    kappa = split(p.state, p.E, p.nu)[2]
-    P = sp.eye(m.rows) - m * m.T / n
-    return P * p.B, m / (n * kappa)
+def _strain_with(pi_op):
+    def strain(p):
+        m = material.volumetric_vector(p.state)
+        n = (m.T * m)[0, 0]
+        kappa = split(p.state, p.E, p.nu)[2]
+        P = sp.eye(m.rows) - m * m.T / n
+        return P * p.B, m * pi_op(p) / (n * kappa)
+    return strain
 
 
 def bbar(info, state: str) -> Formulation:
-    if state == "axisymmetric" and info.n_nodes > 4:
-        raise InputError(f"variant 'bbar' of {info.name} is offered in the plane states only: with one constant "
-                         "pressure the quadratic axisymmetric element keeps a zero-energy mode "
-                         "(u = r z, w = (z^2 - r^2)/2 about the element centre has no deviatoric strain and zero "
-                         "mean dilatation)")
+    linear = len(pressure_basis(info)) > 1
+    if state == "axisymmetric" and linear:
+        raise InputError(f"variant 'bbar' of {info.name} is offered in the plane states only (the axisymmetric "
+                         "quadratic elements are not verified with a projected pressure here)")
+    pi_op = linear_pressure_op if linear else one_op
+    npress = 3 if linear else 1
+    what = "linear pressure {1, xi, eta}" if linear else "constant pressure (mean dilatation)"
     return Formulation(
         variant="bbar",
         terms=(Term("uu", B_op, D_dev_op, B_op, rule="full", symmetric=True, label="B^T D_dev B"),
-               Term("ua", B_op, m_op, one_op, rule="full", label="B^T m (g)"),
-               Term("aa", one_op, minus_compliance_op, one_op, rule="full", symmetric=True,
-                    label="-1/kappa (-V/kappa)")),
-        n_internal=1,
-        description="mean-dilatation B-bar: K_dev + kappa g g^T / V (constant pressure condensed)",
+               Term("ua", B_op, m_op, pi_op, rule="full", label="B^T m pi (g)"),
+               Term("aa", pi_op, minus_compliance_op, pi_op, rule="full", symmetric=True,
+                    label="-pi^T pi / kappa (-M_p / kappa)")),
+        n_internal=npress,
+        description=f"B-bar, dilatation projected on a {what}: K_dev + kappa g^T M_p^-1 g",
         source="Hughes (1980); Nagtegaal, Parks & Rice (1974)",
         notes=("split D = D_dev + kappa m m^T, 3-D deviatoric form (derive.formulations.selective.split)",),
-        strain=_strain,
+        strain=_strain_with(pi_op),
     )
