@@ -153,6 +153,7 @@ def write_atomic(path: str | os.PathLike, data: str | bytes) -> Path:
     try:
         with os.fdopen(fd, mode, **({} if mode == "wb" else {"encoding": "utf-8"})) as fh:
             fh.write(data)
+        os.chmod(tmp, 0o666 & ~_umask())  # mkstemp creates 0600; give the file the usual mode
         os.replace(tmp, path)
     except BaseException:
         try:
@@ -161,6 +162,12 @@ def write_atomic(path: str | os.PathLike, data: str | bytes) -> Path:
             pass
         raise
     return path
+
+
+def _umask() -> int:
+    mask = os.umask(0)
+    os.umask(mask)
+    return mask
 
 
 class Progress:
