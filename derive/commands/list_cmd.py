@@ -19,7 +19,8 @@ def run(args) -> int:
     elements = [{"name": e.name, "description": e.description, "nodes": e.n_nodes, "domain": e.domain,
                  "full_rule": e.full_rule, "reduced_rule": e.reduced_rule, "variants": list(e.variants)}
                 for e in catalog.ELEMENTS.values()]
-    variants = [{"name": v.name, "description": v.description, "source": v.source} for v in catalog.VARIANTS.values()]
+    variants = [{"name": v.name, "description": v.description, "source": v.source,
+                 "states": list(getattr(v, "states", STATES))} for v in catalog.VARIANTS.values()]
     specs = [p.name for p in shipped_specs()]
     if output_format(args) == "json":
         print_json({"elements": elements, "variants": variants, "states": list(STATES), "specs": specs})
