@@ -88,7 +88,7 @@ for _v in (
     VariantInfo("incompatible-centred", "bubble modes through the centre Jacobian, scaled det J0/det J; passes "
                 "the patch test (plane states)", "incompatible:incompatible_centred", "Taylor, Beresford & Wilson (1976)",
                 ("plane-stress", "plane-strain")),
-    VariantInfo("bbar", "mean-dilatation B-bar, constant pressure condensed (plane states; axisymmetric Q4)", "bbar:bbar",
+    VariantInfo("bbar", "B-bar: dilatation projected on a constant (Q4) or linear (Q8, Q9, T6) pressure, condensed (plane states; axisymmetric Q4)", "bbar:bbar",
                 "Hughes (1980)"),
     VariantInfo("eas4", "enhanced assumed strain, 4 modes (plane states)", "eas:eas4", "Simo & Rifai (1990)",
                 ("plane-stress", "plane-strain")),
