@@ -173,7 +173,7 @@ def _lower_group(g, pv: PointValues, mode: str, cse: bool) -> list:
                  else f"{g.rule}: loop over the {g.npoints} points")
         blk = Block(title, list(g.stmts), [(s, e, op, False) for s, e, op in g.accs], list(g.outs),
                     npoints=g.npoints, rolled=True)
-        if cse and mode == "mixed":
+        if cse:
             _cse_block(blk)
         blk._points = (g.points, g.weights)
         blk._pv = pv

@@ -239,42 +239,51 @@ def _stiffness_chunk(X, mat, buf):
     s1 = m0*sc0
     s2 = m1*sc0
     s3 = m2*sc0
-    T4 = dNdx1*s1 + c9*s2/r
-    T6 = dNdx1*s2 + c9*s1/r
+    q0 = 1.0/r
+    q1 = c9*q0*s2
+    T4 = q1 + dNdx1*s1
+    q2 = dNdx1*s2
+    T6 = q2 + c9*q0*s1
     T7 = dNdy1*s3
     T8 = dNdy1*s2
     T9 = dNdy1*s1
     T10 = dNdx1*s3
-    T11 = dNdx2*s1 + c10*s2/r
-    T12 = dNdx2*s2 + c10*s2/r
-    T13 = dNdx2*s2 + c10*s1/r
+    q3 = c10*q0*s2
+    T11 = q3 + dNdx2*s1
+    q4 = dNdx2*s2
+    T12 = q3 + q4
+    T13 = q4 + c10*q0*s1
     T14 = dNdy2*s3
     T15 = dNdy2*s2
     T16 = dNdy2*s1
     T17 = dNdx2*s3
-    T18 = dNdx3*s1 + c11*s2/r
-    T19 = dNdx3*s2 + c11*s2/r
-    T20 = dNdx3*s2 + c11*s1/r
+    q5 = c11*q0*s2
+    T18 = q5 + dNdx3*s1
+    q6 = dNdx3*s2
+    T19 = q5 + q6
+    T20 = q6 + c11*q0*s1
     T21 = dNdy3*s3
     T22 = dNdy3*s2
     T23 = dNdy3*s1
     T24 = dNdx3*s3
-    T25 = dNdx4*s1 + c12*s2/r
-    T26 = dNdx4*s2 + c12*s2/r
-    T27 = dNdx4*s2 + c12*s1/r
+    q7 = c12*q0*s2
+    T25 = q7 + dNdx4*s1
+    q8 = dNdx4*s2
+    T26 = q7 + q8
+    T27 = q8 + c12*q0*s1
     T28 = dNdy4*s3
     T29 = dNdy4*s2
     T30 = dNdy4*s1
     T31 = dNdx4*s3
     s32 = m3*sc0
-    K_0_0 = _psum(T4*dNdx1 + T7*dNdy1 + T6*c9/r, 4)
-    K_0_1 = _psum(T10*dNdy1 + T8*dNdx1 + T8*c9/r, 4)
-    K_0_2 = _psum(T11*dNdx1 + T14*dNdy1 + T13*c9/r, 4)
-    K_0_3 = _psum(T15*dNdx1 + T17*dNdy1 + T15*c9/r, 4)
-    K_0_4 = _psum(T18*dNdx1 + T21*dNdy1 + T20*c9/r, 4)
-    K_0_5 = _psum(T22*dNdx1 + T24*dNdy1 + T22*c9/r, 4)
-    K_0_6 = _psum(T25*dNdx1 + T28*dNdy1 + T27*c9/r, 4)
-    K_0_7 = _psum(T29*dNdx1 + T31*dNdy1 + T29*c9/r, 4)
+    K_0_0 = _psum(T4*dNdx1 + T7*dNdy1 + T6*c9*q0, 4)
+    K_0_1 = _psum(T10*dNdy1 + T8*dNdx1 + T8*c9*q0, 4)
+    K_0_2 = _psum(T11*dNdx1 + T14*dNdy1 + T13*c9*q0, 4)
+    K_0_3 = _psum(T15*dNdx1 + T17*dNdy1 + T15*c9*q0, 4)
+    K_0_4 = _psum(T18*dNdx1 + T21*dNdy1 + T20*c9*q0, 4)
+    K_0_5 = _psum(T22*dNdx1 + T24*dNdy1 + T22*c9*q0, 4)
+    K_0_6 = _psum(T25*dNdx1 + T28*dNdy1 + T27*c9*q0, 4)
+    K_0_7 = _psum(T29*dNdx1 + T31*dNdy1 + T29*c9*q0, 4)
     K_1_1 = _psum(T10*dNdx1 + T9*dNdy1, 4)
     K_1_2 = _psum(T12*dNdy1 + T14*dNdx1, 4)
     K_1_3 = _psum(T16*dNdy1 + T17*dNdx1, 4)
@@ -282,34 +291,34 @@ def _stiffness_chunk(X, mat, buf):
     K_1_5 = _psum(T23*dNdy1 + T24*dNdx1, 4)
     K_1_6 = _psum(T26*dNdy1 + T28*dNdx1, 4)
     K_1_7 = _psum(T30*dNdy1 + T31*dNdx1, 4)
-    K_2_2 = _psum(T11*dNdx2 + T14*dNdy2 + T13*c10/r, 4)
-    K_2_3 = _psum(T15*dNdx2 + T17*dNdy2 + T15*c10/r, 4)
-    K_2_4 = _psum(T18*dNdx2 + T21*dNdy2 + T20*c10/r, 4)
-    K_2_5 = _psum(T22*dNdx2 + T24*dNdy2 + T22*c10/r, 4)
-    K_2_6 = _psum(T25*dNdx2 + T28*dNdy2 + T27*c10/r, 4)
-    K_2_7 = _psum(T29*dNdx2 + T31*dNdy2 + T29*c10/r, 4)
+    K_2_2 = _psum(T11*dNdx2 + T14*dNdy2 + T13*c10*q0, 4)
+    K_2_3 = _psum(T15*dNdx2 + T17*dNdy2 + T15*c10*q0, 4)
+    K_2_4 = _psum(T18*dNdx2 + T21*dNdy2 + T20*c10*q0, 4)
+    K_2_5 = _psum(T22*dNdx2 + T24*dNdy2 + T22*c10*q0, 4)
+    K_2_6 = _psum(T25*dNdx2 + T28*dNdy2 + T27*c10*q0, 4)
+    K_2_7 = _psum(T29*dNdx2 + T31*dNdy2 + T29*c10*q0, 4)
     K_3_3 = _psum(T16*dNdy2 + T17*dNdx2, 4)
     K_3_4 = _psum(T19*dNdy2 + T21*dNdx2, 4)
     K_3_5 = _psum(T23*dNdy2 + T24*dNdx2, 4)
     K_3_6 = _psum(T26*dNdy2 + T28*dNdx2, 4)
     K_3_7 = _psum(T30*dNdy2 + T31*dNdx2, 4)
-    K_4_4 = _psum(T18*dNdx3 + T21*dNdy3 + T20*c11/r, 4)
-    K_4_5 = _psum(T22*dNdx3 + T24*dNdy3 + T22*c11/r, 4)
-    K_4_6 = _psum(T25*dNdx3 + T28*dNdy3 + T27*c11/r, 4)
-    K_4_7 = _psum(T29*dNdx3 + T31*dNdy3 + T29*c11/r, 4)
+    K_4_4 = _psum(T18*dNdx3 + T21*dNdy3 + T20*c11*q0, 4)
+    K_4_5 = _psum(T22*dNdx3 + T24*dNdy3 + T22*c11*q0, 4)
+    K_4_6 = _psum(T25*dNdx3 + T28*dNdy3 + T27*c11*q0, 4)
+    K_4_7 = _psum(T29*dNdx3 + T31*dNdy3 + T29*c11*q0, 4)
     K_5_5 = _psum(T23*dNdy3 + T24*dNdx3, 4)
     K_5_6 = _psum(T26*dNdy3 + T28*dNdx3, 4)
     K_5_7 = _psum(T30*dNdy3 + T31*dNdx3, 4)
-    K_6_6 = _psum(T25*dNdx4 + T28*dNdy4 + T27*c12/r, 4)
-    K_6_7 = _psum(T29*dNdx4 + T31*dNdy4 + T29*c12/r, 4)
+    K_6_6 = _psum(T25*dNdx4 + T28*dNdy4 + T27*c12*q0, 4)
+    K_6_7 = _psum(T29*dNdx4 + T31*dNdy4 + T29*c12*q0, 4)
     K_7_7 = _psum(T30*dNdy4 + T31*dNdx4, 4)
-    A_0_0 = _psum(dNdx1*sc0 + c9*sc0/r, 4)
+    A_0_0 = _psum(dNdx1*sc0 + c9*q0*sc0, 4)
     A_1_0 = _psum(dNdy1*sc0, 4)
-    A_2_0 = _psum(dNdx2*sc0 + c10*sc0/r, 4)
+    A_2_0 = _psum(dNdx2*sc0 + c10*q0*sc0, 4)
     A_3_0 = _psum(dNdy2*sc0, 4)
-    A_4_0 = _psum(dNdx3*sc0 + c11*sc0/r, 4)
+    A_4_0 = _psum(dNdx3*sc0 + c11*q0*sc0, 4)
     A_5_0 = _psum(dNdy3*sc0, 4)
-    A_6_0 = _psum(dNdx4*sc0 + c12*sc0/r, 4)
+    A_6_0 = _psum(dNdx4*sc0 + c12*q0*sc0, 4)
     A_7_0 = _psum(dNdy4*sc0, 4)
     H_0_0 = _psum(s32, 4)
     # static condensation of the internal unknowns
@@ -482,14 +491,15 @@ def _recovery_chunk(X, U, mat, strain, stress):
     dNdy4 = Ji10*c6 + Ji11*c7
     r = gx_0_0 + c8*gx_1_1 + eta*gx_0_1 + gx_1_0*xi
     sc0 = c13*detJ*r
+    q0 = 1.0/r
     s32 = m3*sc0
-    A_0_0 = _psum(dNdx1*sc0 + c9*sc0/r, 4)
+    A_0_0 = _psum(dNdx1*sc0 + c9*q0*sc0, 4)
     A_1_0 = _psum(dNdy1*sc0, 4)
-    A_2_0 = _psum(dNdx2*sc0 + c10*sc0/r, 4)
+    A_2_0 = _psum(dNdx2*sc0 + c10*q0*sc0, 4)
     A_3_0 = _psum(dNdy2*sc0, 4)
-    A_4_0 = _psum(dNdx3*sc0 + c11*sc0/r, 4)
+    A_4_0 = _psum(dNdx3*sc0 + c11*q0*sc0, 4)
     A_5_0 = _psum(dNdy3*sc0, 4)
-    A_6_0 = _psum(dNdx4*sc0 + c12*sc0/r, 4)
+    A_6_0 = _psum(dNdx4*sc0 + c12*q0*sc0, 4)
     A_7_0 = _psum(dNdy4*sc0, 4)
     H_0_0 = _psum(s32, 4)
     # static condensation of the internal unknowns
@@ -535,26 +545,37 @@ def _recovery_chunk(X, U, mat, strain, stress):
     dNdx4 = Ji00*c6 + Ji01*c7
     dNdy4 = Ji10*c6 + Ji11*c7
     r = gx_0_0 + c8*gx_1_1 + eta*gx_0_1 + gx_1_0*xi
-    eps33 = (alpha1*m4 + u1*(0.6666666666666666*dNdx1 + c14/r) + u3*(0.6666666666666666*dNdx2 + c15/r)
-        + u5*(0.6666666666666666*dNdx3 + c16/r) + u7*(0.6666666666666666*dNdx4 + c17/r)
-        - 0.3333333333333333*dNdy1*u2 - 0.3333333333333333*dNdy2*u4 - 0.3333333333333333*dNdy3*u6
-        - 0.3333333333333333*dNdy4*u8)
-    eps34 = (alpha1*m4 + u1*(-0.3333333333333333*dNdx1 + c14/r) + u3*(-0.3333333333333333*dNdx2 + c15/r)
-        + u5*(-0.3333333333333333*dNdx3 + c16/r) + u7*(-0.3333333333333333*dNdx4 + c17/r)
-        + 0.6666666666666666*dNdy1*u2 + 0.6666666666666666*dNdy2*u4 + 0.6666666666666666*dNdy3*u6
-        + 0.6666666666666666*dNdy4*u8)
-    eps35 = (alpha1*m4 + u1*(-0.3333333333333333*dNdx1 + c18/r) + u3*(-0.3333333333333333*dNdx2 + c19/r)
-        + u5*(-0.3333333333333333*dNdx3 + c20/r) + u7*(-0.3333333333333333*dNdx4 + c21/r)
-        - 0.3333333333333333*dNdy1*u2 - 0.3333333333333333*dNdy2*u4 - 0.3333333333333333*dNdy3*u6
-        - 0.3333333333333333*dNdy4*u8)
+    q0 = alpha1*m4
+    q1 = 1.0/r
+    q2 = c14*q1
+    q3 = c15*q1
+    q4 = c16*q1
+    q5 = c17*q1
+    q6 = -0.3333333333333333*dNdy1*u2
+    q7 = -0.3333333333333333*dNdy2*u4
+    q8 = -0.3333333333333333*dNdy3*u6
+    q9 = -0.3333333333333333*dNdy4*u8
+    eps33 = (q0 + q6 + q7 + q8 + q9 + u1*(q2 + 0.6666666666666666*dNdx1) + u3*(q3 + 0.6666666666666666*dNdx2)
+        + u5*(q4 + 0.6666666666666666*dNdx3) + u7*(q5 + 0.6666666666666666*dNdx4))
+    q10 = -0.3333333333333333*dNdx1
+    q11 = -0.3333333333333333*dNdx2
+    q12 = -0.3333333333333333*dNdx3
+    q13 = -0.3333333333333333*dNdx4
+    eps34 = (q0 + u1*(q10 + q2) + u3*(q11 + q3) + u5*(q12 + q4) + u7*(q13 + q5) + 0.6666666666666666*dNdy1*u2
+        + 0.6666666666666666*dNdy2*u4 + 0.6666666666666666*dNdy3*u6 + 0.6666666666666666*dNdy4*u8)
+    eps35 = (q0 + q6 + q7 + q8 + q9 + u1*(q10 + c18*q1) + u3*(q11 + c19*q1) + u5*(q12 + c20*q1) + u7*(q13
+        + c21*q1))
     eps36 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7
+    q14 = eps34*m6
+    q15 = eps35*m6
+    q16 = eps33*m6
     strain[0] = eps33
     strain[1] = eps34
     strain[2] = eps35
     strain[3] = eps36
-    stress[0] = eps33*m5 + eps34*m6 + eps35*m6
-    stress[1] = eps33*m6 + eps34*m5 + eps35*m6
-    stress[2] = eps33*m6 + eps34*m6 + eps35*m5
+    stress[0] = q14 + q15 + eps33*m5
+    stress[1] = q15 + q16 + eps34*m5
+    stress[2] = q14 + q16 + eps35*m5
     stress[3] = eps36*m7
 
 

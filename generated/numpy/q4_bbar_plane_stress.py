@@ -470,10 +470,11 @@ def _recovery_chunk(X, U, mat, strain, stress):
     dNdy3 = Ji10*c4 + Ji11*c5
     dNdx4 = Ji00*c6 + Ji01*c7
     dNdy4 = Ji10*c6 + Ji11*c7
-    eps29 = (alpha1*m4 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 - 0.5*dNdy1*u2
-        - 0.5*dNdy2*u4 - 0.5*dNdy3*u6 - 0.5*dNdy4*u8)
-    eps30 = (alpha1*m4 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 - 0.5*dNdx1*u1
-        - 0.5*dNdx2*u3 - 0.5*dNdx3*u5 - 0.5*dNdx4*u7)
+    q0 = alpha1*m4
+    eps29 = (q0 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
+        - 0.5*dNdy3*u6 - 0.5*dNdy4*u8)
+    eps30 = (q0 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
+        - 0.5*dNdx3*u5 - 0.5*dNdx4*u7)
     eps31 = dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7
     strain[0] = eps29
     strain[1] = eps30

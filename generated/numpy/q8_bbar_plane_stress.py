@@ -1199,14 +1199,15 @@ def _recovery_chunk(X, U, mat, strain, stress):
     dNdy7 = Ji10*c17 + Ji11*c18
     dNdx8 = Ji00*c19 + Ji01*c20
     dNdy8 = Ji10*c19 + Ji11*c20
-    eps57 = (alpha1*m4 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
+    q0 = alpha1*m4
+    q1 = alpha2*c24*m5
+    q2 = alpha3*c25*m5
+    eps57 = (q0 + q1 + q2 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
         + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4 - 0.5*dNdy3*u6
-        - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16 + alpha2*c24*m5
-        + alpha3*c25*m5)
-    eps58 = (alpha1*m4 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
+        - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16)
+    eps58 = (q0 + q1 + q2 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
         + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3 - 0.5*dNdx3*u5
-        - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15 + alpha2*c24*m5
-        + alpha3*c25*m5)
+        - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15)
     eps59 = (dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14 + dNdx8*u16
         + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13 + dNdy8*u15)
     strain[0] = eps57

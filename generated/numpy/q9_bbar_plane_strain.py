@@ -1393,14 +1393,17 @@ def _recovery_chunk(X, U, mat, strain, stress):
     dNdy8 = Ji10*c21 + Ji11*c22
     dNdx9 = Ji00*c23 + Ji01*c24
     dNdy9 = Ji10*c23 + Ji11*c24
-    eps63 = (alpha1*m4 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
+    q0 = alpha1*m4
+    q1 = alpha2*c29*m3
+    q2 = alpha3*c30*m3
+    eps63 = (q0 + q1 + q2 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
         + 0.5*dNdx6*u11 + 0.5*dNdx7*u13 + 0.5*dNdx8*u15 + 0.5*dNdx9*u17 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4
         - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10 - 0.5*dNdy6*u12 - 0.5*dNdy7*u14 - 0.5*dNdy8*u16
-        - 0.5*dNdy9*u18 + alpha2*c29*m3 + alpha3*c30*m3)
-    eps64 = (alpha1*m4 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
+        - 0.5*dNdy9*u18)
+    eps64 = (q0 + q1 + q2 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
         + 0.5*dNdy6*u12 + 0.5*dNdy7*u14 + 0.5*dNdy8*u16 + 0.5*dNdy9*u18 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3
         - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9 - 0.5*dNdx6*u11 - 0.5*dNdx7*u13 - 0.5*dNdx8*u15
-        - 0.5*dNdx9*u17 + alpha2*c29*m3 + alpha3*c30*m3)
+        - 0.5*dNdx9*u17)
     eps65 = (dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdx7*u14 + dNdx8*u16
         + dNdx9*u18 + dNdy1*u1 + dNdy2*u3 + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11 + dNdy7*u13 + dNdy8*u15
         + dNdy9*u17)

@@ -834,12 +834,15 @@ def _recovery_chunk(X, U, mat, strain, stress):
     dNdy5 = Ji10*c7 + Ji11*c8
     dNdx6 = Ji00*c9 + Ji01*c10
     dNdy6 = Ji10*c9 + Ji11*c10
-    eps45 = (alpha1*m4 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
+    q0 = alpha1*m4
+    q1 = alpha2*c14*m5
+    q2 = alpha3*c15*m5
+    eps45 = (q0 + q1 + q2 + 0.5*dNdx1*u1 + 0.5*dNdx2*u3 + 0.5*dNdx3*u5 + 0.5*dNdx4*u7 + 0.5*dNdx5*u9
         + 0.5*dNdx6*u11 - 0.5*dNdy1*u2 - 0.5*dNdy2*u4 - 0.5*dNdy3*u6 - 0.5*dNdy4*u8 - 0.5*dNdy5*u10
-        - 0.5*dNdy6*u12 + alpha2*c14*m5 + alpha3*c15*m5)
-    eps46 = (alpha1*m4 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
+        - 0.5*dNdy6*u12)
+    eps46 = (q0 + q1 + q2 + 0.5*dNdy1*u2 + 0.5*dNdy2*u4 + 0.5*dNdy3*u6 + 0.5*dNdy4*u8 + 0.5*dNdy5*u10
         + 0.5*dNdy6*u12 - 0.5*dNdx1*u1 - 0.5*dNdx2*u3 - 0.5*dNdx3*u5 - 0.5*dNdx4*u7 - 0.5*dNdx5*u9
-        - 0.5*dNdx6*u11 + alpha2*c14*m5 + alpha3*c15*m5)
+        - 0.5*dNdx6*u11)
     eps47 = (dNdx1*u2 + dNdx2*u4 + dNdx3*u6 + dNdx4*u8 + dNdx5*u10 + dNdx6*u12 + dNdy1*u1 + dNdy2*u3
         + dNdy3*u5 + dNdy4*u7 + dNdy5*u9 + dNdy6*u11)
     strain[0] = eps45
