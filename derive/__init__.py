@@ -11,4 +11,6 @@ from .codegen import kernel
 from .element import Element, element
 from .locking import locking_ratio
 
+__all__ = ["Element", "element", "kernel", "locking_ratio"]
+
 __version__ = "0.1.0"

@@ -10,10 +10,9 @@ import time
 
 import sympy as sp
 
-from .catalog import shape_set
 from .element import Element, element
 from .formulations.base import Point
-from .symbols import E, eta, nu, t, xi
+from .symbols import eta, t, xi
 
 
 def naive_stiffness(name: str) -> sp.Matrix:

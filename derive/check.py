@@ -30,7 +30,6 @@ import dataclasses
 import itertools
 import random
 from dataclasses import dataclass, field
-from fractions import Fraction
 
 import numpy as np
 import sympy as sp
@@ -39,11 +38,6 @@ from . import quadrature
 from .element import Element, element
 from .errors import InputError
 from .formulations.base import D_op, Formulation
-from .geometry import IsoMap
-from .stiffness import NotPolynomial, condense_exact, condense_symbolic, exact_blocks, point_blocks
-from .symbols import E as E_sym
-from .symbols import nu as nu_sym
-from .symbols import t as t_sym
 
 CODES = ("node-order", "transposed", "thickness", "shear-convention", "plane-state", "sign", "scale",
          "quadrature", "dof-order")
@@ -164,16 +158,7 @@ def _with_rule(form: Formulation, rule: str) -> Formulation:
 
 
 def _stiffness(el: Element, form: Formulation, geometry, material: dict) -> sp.Matrix:
-    imap = el.map(geometry)
-    rule_for = lambda term: el.info.rule_name(term.rule)
-    if imap.is_affine and el.state != "axisymmetric":
-        try:
-            blocks = exact_blocks(form, imap, el.state, material, rule_for)
-            return condense_exact(blocks, el.ndof, form.n_internal)
-        except NotPolynomial:
-            pass
-    blocks = point_blocks(form, imap, el.state, material, rule_for)
-    return condense_symbolic(blocks, el.ndof, form.n_internal)
+    return el.stiffness(geometry, E=material["E"], nu=material["nu"], t=material["t"], formulation=form)
 
 
 def _shear_scaled(D: sp.Matrix, s) -> sp.Matrix:
@@ -201,9 +186,7 @@ class Target:
 
     def _mat(self) -> dict:
         m = self.material
-        return {"E": E_sym if m["E"] is None else sp.nsimplify(m["E"], rational=True),
-                "nu": nu_sym if m["nu"] is None else sp.nsimplify(m["nu"], rational=True),
-                "t": t_sym if m["t"] is None else sp.nsimplify(m["t"], rational=True)}
+        return self.el.material(m["E"], m["nu"], m["t"])
 
     def candidates(self, K: sp.Matrix):
         """(code, detail, matrix) for each single mistake applied to the expected K."""
@@ -282,7 +265,7 @@ def _matches(candidate, given, numeric_given: np.ndarray | None, rtol: float, en
 
 def _scale_factor(K: sp.Matrix, given, numeric_given, entries) -> sp.Expr | None:
     """The constant c with given = c K, if one exists (c free of the coordinates xi, eta)."""
-    pairs = []
+
     if numeric_given is not None:
         A = _as_numeric(K)
         if A is None or A.shape != numeric_given.shape:

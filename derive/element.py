@@ -11,7 +11,7 @@ from . import catalog, quadrature
 from .catalog import ElementInfo
 from .errors import InputError
 from .formulations.base import Formulation, Point
-from .geometry import Geometry, IsoMap, make_geometry, validity_report
+from .geometry import IsoMap, make_geometry, validity_report
 from .material import check_material
 from .shapes import ShapeSet
 from .stiffness import (NotPolynomial, condense_exact, condense_symbolic, exact_blocks, numeric_stiffness,
@@ -63,6 +63,13 @@ class Element:
         imap = self.map(nodes)
         return validity_report(imap, quadrature.rule(self.info.full_rule).points)
 
+    def material(self, E=None, nu=None, t=None) -> dict:
+        """Checked material values as exact sympy numbers; the symbols E, nu, t where not given."""
+        check_material(self.state, E, nu)
+        return {"E": E_sym if E is None else sp.nsimplify(E, rational=True),
+                "nu": nu_sym if nu is None else sp.nsimplify(nu, rational=True),
+                "t": t_sym if t is None else sp.nsimplify(t, rational=True)}
+
     def _rule_for(self, rule: str):
         if rule == "exact":
             return lambda term: None
@@ -71,24 +78,23 @@ class Element:
         quadrature.rule(rule)  # validates the name
         return lambda term: rule
 
-    def stiffness(self, geometry="rectangle", rule: str = "element", E=None, nu=None, t=None) -> sp.Matrix:
+    def stiffness(self, geometry="rectangle", rule: str = "element", E=None, nu=None, t=None,
+                  formulation: Formulation | None = None) -> sp.Matrix:
         """Element stiffness as a sympy Matrix.
 
         ``rule``: "element" (each term with the formulation's own rule, the default),
         "exact" (every integral exact over the reference domain: affine geometry only), or
         a rule name such as "gauss-3x3" that replaces every term's rule.  Material values
         default to the symbols E, nu, t.  Numeric nodes on non-affine shapes are evaluated
-        at 30-digit Float rule points.
+        at 30-digit Float rule points.  ``formulation`` replaces the variant's own (the
+        checker uses it to recompute the element with one deliberate mistake).
         """
-        check_material(self.state, E, nu)
-        material = {"E": E_sym if E is None else sp.nsimplify(E, rational=True),
-                    "nu": nu_sym if nu is None else sp.nsimplify(nu, rational=True),
-                    "t": t_sym if t is None else sp.nsimplify(t, rational=True)}
+        material = self.material(E, nu, t)
         imap = self.map(geometry)
         if imap.geometry.numeric:
             validity_report(imap, quadrature.rule(self.info.full_rule).points)
         rule_for = self._rule_for(rule)
-        form = self.formulation
+        form = self.formulation if formulation is None else formulation
         if imap.is_affine and self.state != "axisymmetric":
             try:
                 blocks = exact_blocks(form, imap, self.state, material, rule_for)
@@ -101,8 +107,6 @@ class Element:
         if imap.geometry.kind == "general" and form.n_internal:
             raise InputError(f"{self.name} {self.variant} on general symbolic geometry needs a symbolic condensation "
                              "that is too large to be useful; give numeric nodes or use the generated kernel")
-        if imap.geometry.numeric:
-            imap = _float_points_map(imap)
         blocks = point_blocks(form, imap, self.state, material, lambda term: rule_for(term))
         K = condense_symbolic(blocks, self.ndof, form.n_internal)
         return K
@@ -112,10 +116,6 @@ class Element:
         if self.info.name not in catalog.ELEMENTS:
             raise InputError("numeric batches are available for catalogue elements only")
         return numeric_stiffness(self.info.name, self.variant, self.state, xy, E, nu, t)
-
-
-def _float_points_map(imap: IsoMap) -> IsoMap:
-    return imap  # numeric exact coordinates stay exact; points route handles radicals lazily
 
 
 @lru_cache(maxsize=None)

@@ -26,8 +26,7 @@ from sympy.polys.matrices import DomainMatrix
 from sympy.polys.rings import ring
 
 from . import quadrature, reference
-from .errors import InputError
-from .formulations.base import Formulation, Point, Term
+from .formulations.base import Formulation, Point
 from .geometry import IsoMap
 from .symbols import eta, xi
 

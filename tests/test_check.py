@@ -10,7 +10,7 @@ import fem_reference as ref
 from derive.check import Target, _shear_scaled, _stiffness, _with_middle, check
 from derive.cli import main
 from derive.element import element
-from derive.symbols import E, a, b, nu, t
+from derive.symbols import E, nu, t
 
 EMPTY = {"E": None, "nu": None, "t": None}
 

@@ -1,5 +1,4 @@
 """Isoparametric map, Jacobian, validity checks and material checks."""
-import numpy as np
 import pytest
 import sympy as sp
 

@@ -9,7 +9,7 @@ from ..errors import InputError
 from ..output import display, parse_set
 from ..symbols import E, nu, t
 from ..userinput import load_matrix_file
-from .common import caution_line, output_format, print_json, resolve_element
+from .common import caution_line, print_json, resolve_element
 from .stiffness_cmd import parse_nodes
 
 NAME = "check"

@@ -4,7 +4,6 @@ from __future__ import annotations
 import sympy as sp
 
 from ..output import display, matrix_latex
-from ..symbols import eta, xi
 from .common import add_element_args, add_output_args, output_format, print_json, resolve_element
 
 NAME = "shapes"

@@ -1,12 +1,11 @@
 """`derive stiffness ELEMENT`: closed-form or rule-evaluated stiffness, B and D matrices."""
 from __future__ import annotations
 
-import numpy as np
 import sympy as sp
 
 from ..errors import InputError
 from ..material import D as D_matrix
-from ..output import (check_unknown, display, matrix_latex, matrix_text, numeric_text, parse_number, parse_set,
+from ..output import (check_unknown, matrix_latex, matrix_text, numeric_text, parse_number, parse_set,
                       to_float_matrix)
 from ..symbols import E, nu, t
 from .common import add_element_args, add_output_args, caution_line, output_format, print_json, resolve_element
