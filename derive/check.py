@@ -332,6 +332,25 @@ def node_permutation(K: np.ndarray, G: np.ndarray, rtol: float) -> list[int] | N
     return None
 
 
+def column_group_permutation(K: np.ndarray | None, G: np.ndarray | None, size: int) -> list[int] | None:
+    """Permutation p with G's column group i equal to K's column group p[i] (groups of
+    ``size`` columns: 1 per node for shape functions, 2 per node for B); None if none or identity."""
+    if K is None or G is None or K.shape != G.shape or K.shape[1] % size:
+        return None
+    n = K.shape[1] // size
+    tol = 1e-9 * max(np.abs(K).max(), 1e-300)
+    perm, used = [], set()
+    for i in range(n):
+        gi = G[:, size * i:size * i + size]
+        hit = next((j for j in range(n) if j not in used
+                    and np.abs(gi - K[:, size * j:size * j + size]).max() <= tol), None)
+        if hit is None:
+            return None
+        used.add(hit)
+        perm.append(hit)
+    return None if perm == list(range(n)) else perm
+
+
 def _probe_numeric(M: sp.Matrix, seed: int = 7) -> np.ndarray:
     pt = _points(M.free_symbols, 1, seed)[0]
     return np.array(M.subs(pt).evalf(20).tolist(), dtype=float)
@@ -366,6 +385,16 @@ def check(target: Target, given=None, given_numeric: np.ndarray | None = None, r
                                   "your node i is derive's node perm[i] (1-based: " +
                                   ", ".join(f"{i + 1}->{p + 1}" for i, p in enumerate(perm)) + ")",
                                   "permutation": [p + 1 for p in perm]})
+    elif entries is None and given_numeric is None and target.what in ("shape", "B") and given.shape == K.shape:
+        size = 1 if target.what == "shape" else 2
+        perm = column_group_permutation(_probe_numeric(K), _probe_numeric_given(given, K), size)
+        if perm is not None:
+            cols = [size * p + k for p in perm for k in range(size)]
+            if _matches(K.extract(list(range(K.rows)), cols), given, None, rtol, None):
+                found.append({"code": "node-order", "explanation":
+                              "your node i is derive's node perm[i] (1-based: " +
+                              ", ".join(f"{i + 1}->{p + 1}" for i, p in enumerate(perm)) + ")",
+                              "permutation": [p + 1 for p in perm]})
     if K.rows != K.cols or target.what != "stiffness":
         KT = K.T
         if given_numeric is not None:

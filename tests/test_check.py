@@ -199,3 +199,18 @@ def test_binary_and_missing_files(tmp_path, capsys):
     code, _, err = run_check(tmp_path, "bin.txt", bytes(range(256)), ["--element", "Q4"], capsys)
     assert code == 2
     assert main(["check", str(tmp_path / "nope.txt"), "--element", "Q4"]) == 2
+
+
+def test_shape_functions_in_another_node_order():
+    T = Target(element("Q4"), "rectangle", dict(EMPTY), what="shape")
+    N = T.expected()
+    res = check(T, N.extract([0], [0, 1, 3, 2]))  # corners 3 and 4 swapped (a Z-numbering)
+    assert res.codes == ["node-order"] and res.diagnosis[0]["permutation"] == [1, 2, 4, 3]  # common practice
+
+
+def test_b_matrix_in_another_node_order():
+    T = Target(element("Q4"), "rectangle", dict(EMPTY), what="B")
+    B = T.expected()
+    cols = [2 * p + k for p in (1, 2, 3, 0) for k in (0, 1)]
+    res = check(T, B.extract([0, 1, 2], cols))
+    assert res.codes == ["node-order"] and res.diagnosis[0]["permutation"] == [2, 3, 4, 1]  # common practice
