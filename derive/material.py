@@ -74,21 +74,26 @@ def volumetric_vector(state: str) -> sp.Matrix:
 def split(state: str = "plane-stress", E=E_sym, nu=nu_sym) -> tuple[sp.Matrix, sp.Matrix, sp.Expr]:
     """Split D = D_dev + D_vol with D_vol = kappa m m^T, returning (D_dev, D_vol, kappa).
 
-    kappa is the bulk modulus that goes with the state's volumetric strain m^T eps:
-    plane strain and axisymmetric: kappa = lambda + 2 mu / d (d = 2 in plane strain,
-    where m^T eps = eps_xx + eps_yy, and d = 3 axisymmetric); plane stress: the in-plane
-    bulk modulus E / (2 (1 - nu)).  D_dev = D - kappa m m^T is then purely deviatoric
-    (D_dev m = 0).
+    The three-dimensional deviatoric/volumetric split of the state's isotropic material, with
+    m the state's volumetric vector (:func:`volumetric_vector`):
+
+    * plane strain and axisymmetric: kappa = lambda + 2 mu / 3 (the 3-D bulk modulus; in plane
+      strain m^T eps is the 3-D volume change because eps_zz = 0);
+    * plane stress: the same form with lambda replaced by lambda* = 2 lambda mu / (lambda + 2 mu)
+      = E nu / (1 - nu^2), so kappa = lambda* + 2 mu / 3.
+
+    D_dev is then positive definite in the plane states.  The two-dimensional alternative
+    (kappa = lambda + mu, D_dev m = 0) leaves D_dev singular on every conformal field
+    (eps_xx = eps_yy, gamma_xy = 0, e.g. u = x^2 - y^2, v = 2xy), which gives the quadratic
+    elements zero-energy modes under selective integration and B-bar; it is not used.
+    Selective integration and B-bar (``derive.formulations``) use this split.
     """
     Dm = D(state, E, nu)
-    m = volumetric_vector(state)
     lam, mu = lame(E, nu)
     if state == "plane-stress":
-        kappa = E / (2 * (1 - nu))
-    elif state == "plane-strain":
-        kappa = lam + mu
-    else:
-        kappa = lam + sp.Rational(2, 3) * mu
+        lam = 2 * lam * mu / (lam + 2 * mu)
+    kappa = sp.cancel(lam + sp.Rational(2, 3) * mu)
+    m = volumetric_vector(state)
     Dvol = kappa * m * m.T
     Ddev = (Dm - Dvol).applyfunc(sp.cancel)
-    return Ddev, Dvol, sp.cancel(kappa)
+    return Ddev, Dvol, kappa

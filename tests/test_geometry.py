@@ -1,4 +1,5 @@
 """Isoparametric map, Jacobian, validity checks and material checks."""
+import numpy as np
 import pytest
 import sympy as sp
 
@@ -74,7 +75,17 @@ def test_split_is_deviatoric_plus_volumetric(state):
     Ddev, Dvol, kappa = split(state)
     m = volumetric_vector(state)
     assert (D(state) - Ddev - Dvol).applyfunc(sp.cancel) == sp.zeros(*Ddev.shape)
-    assert (Ddev * m).applyfunc(sp.cancel) == sp.zeros(m.rows, 1)  # deviatoric part carries no volume change
+    assert (Dvol - kappa * m * m.T).applyfunc(sp.cancel) == sp.zeros(*Ddev.shape)
+    lam, mu = E * nu / ((1 + nu) * (1 - 2 * nu)), E / (2 * (1 + nu))
+    if state == "plane-stress":
+        lam = E * nu / (1 - nu ** 2)  # plane-stress lambda* (Hughes, The Finite Element Method, 1987, from memory)
+    # kappa = lambda + 2 mu / 3, the 3-D bulk modulus (Timoshenko & Goodier, from memory)
+    assert sp.cancel(kappa - (lam + 2 * mu / 3)) == 0
+    w = np.linalg.eigvalsh(np.array(Ddev.subs({E: 1, nu: sp.Rational(3, 10)}).evalf().tolist(), dtype=float))
+    if state == "axisymmetric":
+        assert abs(w).min() < 1e-12 < w.max()  # 2 mu (I - m m^T / 3): m itself is its null vector (common practice)
+    else:
+        assert w.min() > 0  # positive definite deviatoric part in the plane states (common practice)
 
 
 def test_plane_strain_d_entries():

@@ -9,11 +9,11 @@ deviatoric/volumetric split of the state's isotropic material:
 * plane stress:  the same form with lambda replaced by the plane-stress value
   lambda* = 2 lambda mu / (lambda + 2 mu) = E nu / (1 - nu^2): kappa = lambda* + 2 mu / 3;
 * axisymmetric:  kappa = lambda + 2 mu / 3, D_dev = 2 mu (I - m m^T / 3) on the normal
-  strains and mu on the shear (``derive.material.split``).
+  strains and mu on the shear.
+The split itself is :func:`derive.material.split`.
 
 In the plane states this D_dev is positive definite.  The alternative two-dimensional split
-(kappa = lambda + mu, D_dev = mu [[1, -1, 0], [-1, 1, 0], [0, 0, 1]], ``material.split`` in the
-plane states) leaves D_dev singular: every conformal field (eps_xx = eps_yy, gamma_xy = 0, such
+(kappa = lambda + mu, D_dev = mu [[1, -1, 0], [-1, 1, 0], [0, 0, 1]]) leaves D_dev singular: every conformal field (eps_xx = eps_yy, gamma_xy = 0, such
 as u = x^2 - y^2, v = 2 x y) has zero deviatoric energy, and the quadratic elements then get
 zero-energy modes under selective integration and mean dilatation, so it is not used.
 
@@ -45,18 +45,8 @@ STATES = material.STATES
 
 @lru_cache(maxsize=None)
 def split(state, E, nu):
-    """(D_dev, D_vol, kappa) with the three-dimensional split described in the module text."""
-    if state == "axisymmetric":
-        return material.split(state, E, nu)
-    Dm = material.D(state, E, nu)
-    lam, mu = material.lame(E, nu)
-    if state == "plane-stress":
-        lam = 2 * lam * mu / (lam + 2 * mu)
-    kappa = sp.cancel(lam + sp.Rational(2, 3) * mu)
-    m = material.volumetric_vector(state)
-    Dvol = kappa * m * m.T
-    Ddev = (Dm - Dvol).applyfunc(sp.cancel)
-    return Ddev, Dvol, kappa
+    """(D_dev, D_vol, kappa): :func:`derive.material.split`, cached per (state, E, nu)."""
+    return material.split(state, E, nu)
 
 
 def D_dev_op(p):
