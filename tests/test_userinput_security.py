@@ -252,3 +252,35 @@ def test_parsing_never_reaches_sympy_string_parsing(monkeypatch):
     parse_latex_expression(r"\frac{Et}{1-\nu^{2}}\left(\frac{b}{3a}+\sqrt[3]{x_1}\right)")
     parse_matrix_text("K[1,1] = 0.25*E\nK[2,2] = sqrt(2)\n")
     parse_matrix_text(r"\frac{E}{2}\begin{pmatrix} 1 & \nu \\ \nu & 1 \end{pmatrix}")
+
+
+# --------------------------------------------------------------------------- sympy evaluation cost
+@pytest.mark.parametrize("text", [
+    "sqrt(sin(x))",              # root of an expression with a function
+    "sin(log(2))",               # function of a transcendental constant
+    "log(log(log(log(1/3))))",   # would grow exponentially as complex logs
+    "atan(tan(2))",
+    "acos(3)",                   # outside the real domain
+    "sqrt(1 - sqrt(2))",
+    "tan(pi/2)",
+    "sin(sin(sin(sin(sin(x)))))",  # deeper than MAX_FUNCTION_DEPTH
+    "x^64*x",                    # resulting power beyond the exponent limit
+    "exp(100*log(x))",
+])
+def test_evaluation_traps_are_refused(text):
+    refused(parse_expression, text)
+
+
+@pytest.mark.parametrize("func, text", [
+    # these took from seconds to minutes when sympy evaluated them eagerly
+    (parse_expression, "asin(sinh(((a+1*cos(exp(((pi/6/-2)/sinh(a+1)))))*(cos(sqrt(((a+1)^2)^-1)))"
+                       "^(1/2))))"),
+    (parse_latex_expression, r"\frac{\left|\tanh\left({{({(\pi\cdot \frac{\pi}{6})}^{2}-({(a+1)}^{3}"
+                             r"\cdot \left|1\right|))}^{-1}}^{3}\right)\right|}{\log\left(\pi\right)}"),
+    (parse_expression, "abs(((tanh(sqrt((1*1/2)))-sqrt(atan(tan(2)))))^(1/2))"),
+    (parse_matrix_text, "\n".join("asin(" * 3 + f"1/{k + 2}" + ")" * 3 for k in range(200))),
+], ids=["asin-sinh", "latex-abs-tanh", "abs-root", "matrix-of-asin"])
+def test_known_slow_evaluations_stay_fast(func, text):
+    start = time.perf_counter()
+    outcome(func, text)
+    assert time.perf_counter() - start < FAST  # common practice, no source

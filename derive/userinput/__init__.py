@@ -48,6 +48,13 @@ Plain math grammar
   functions take parentheses), a number after a number or ``)``, and an implicit product
   right after ``/`` (``1/2a`` is ambiguous: write ``1/(2*a)`` or ``a/2``).
 * ``x_1`` is accepted as the nodal name ``x1``.
+* Functions of constants are evaluated (``sin(pi/6)`` -> 1/2, ``atan(1)`` -> pi/4);
+  functions of expressions with symbols are built unevaluated (``sin(-x)`` stays as
+  written), because sympy's automatic simplification asks its assumption system
+  questions whose cost is unbounded for nested arguments.  For the same reason roots of
+  expressions that contain a function (``sqrt(sin(x))``) and functions of constants that
+  contain a function (``sin(log(2))``) are rejected, and calls nest at most
+  ``MAX_FUNCTION_DEPTH`` deep.
 * Unicode minus, ``·`` ``×`` and the letters ν ξ η ζ π are accepted as ``-``, ``*`` and names.
 
 LaTeX subset
@@ -124,15 +131,22 @@ MAX_EXPONENT                 64   |numerator| and denominator of any exponent (a
 MAX_RESULT_DIGITS           200   digits of any number produced by folding (powers,
                                   products); power growth is estimated before computing
 MAX_MATRIX_DIM              200   rows and columns
+MAX_FUNCTION_DEPTH            4   nesting of function calls (sqrt, abs and \\sqrt count)
+MAX_SECONDS                 5.0   wall-clock budget of one public call, checked between
+                                  building steps (a safety net; the limits above keep
+                                  ordinary and hostile inputs far below it)
 ======================  ========  ==================================================
 
-Results that are infinite, undefined (``1/0``, ``log(0)``) or complex are rejected.
+Results that are infinite, undefined (``1/0``, ``log(0)``) or complex (``sqrt(-1)``,
+``acos(3)``) are rejected.  Resulting powers obey the exponent limit too: ``(x^64)^64``
+would be ``x^4096`` and is rejected, as is ``x*x*...*x`` beyond 64 factors.
 """
 from __future__ import annotations
 
 from ._core import (MAX_DEPTH, MAX_EXPONENT, MAX_EXPRESSION_CHARS, MAX_FILE_BYTES,
-                    MAX_INTEGER_DIGITS, MAX_MATRIX_DIM, MAX_NPY_BYTES, MAX_RESULT_DIGITS,
-                    MAX_TEXT_CHARS, MAX_TOKENS, MAX_TOTAL_TOKENS, guarded)
+                    MAX_FUNCTION_DEPTH, MAX_INTEGER_DIGITS, MAX_MATRIX_DIM, MAX_NPY_BYTES,
+                    MAX_RESULT_DIGITS, MAX_SECONDS, MAX_TEXT_CHARS, MAX_TOKENS, MAX_TOTAL_TOKENS,
+                    guarded)
 from .latex import parse_latex_expression as _parse_latex_expression
 from .mathexpr import parse_expression as _parse_expression
 from .matrix import MatrixInput, load_matrix_file, parse_matrix_text
@@ -144,5 +158,5 @@ __all__ = [
     "parse_expression", "parse_latex_expression", "parse_matrix_text", "load_matrix_file",
     "MatrixInput", "MAX_TEXT_CHARS", "MAX_FILE_BYTES", "MAX_NPY_BYTES", "MAX_EXPRESSION_CHARS",
     "MAX_TOKENS", "MAX_TOTAL_TOKENS", "MAX_DEPTH", "MAX_INTEGER_DIGITS", "MAX_EXPONENT",
-    "MAX_RESULT_DIGITS", "MAX_MATRIX_DIM",
+    "MAX_RESULT_DIGITS", "MAX_MATRIX_DIM", "MAX_FUNCTION_DEPTH", "MAX_SECONDS",
 ]

@@ -40,9 +40,9 @@ MAX_RESULT_DIGITS = 200
 #: most rows and most columns of a matrix
 MAX_MATRIX_DIM = 200
 #: deepest nesting of function calls (sympy evaluates functions of constants eagerly)
-MAX_FUNCTION_DEPTH = 3
+MAX_FUNCTION_DEPTH = 4
 #: wall-clock budget of one public call (a parse of one expression or one matrix)
-MAX_SECONDS = 10.0
+MAX_SECONDS = 5.0
 
 _MAX_RESULT_BITS = int(MAX_RESULT_DIGITS * 3.3219280948873626) + 1
 
@@ -245,6 +245,13 @@ class Builder:
         self._check_power_growth(base, p, tok)
         if q != 1:
             self._check_constant_argument(base, f"a root ({exponent})", tok)
+        if q != 1 and base.free_symbols and base.atoms(sp.Function):
+            # sympy evaluates roots by asking the assumption system (is sin(...)^2
+            # nonnegative?), at a cost that is unbounded for nested functions, and it does
+            # so again whenever the power enters a product, so such roots are refused
+            raise fail(f"a root ({exponent}) of an expression that contains a function (such "
+                       "as sqrt(sin(x))) is not supported; roots of polynomials, rational "
+                       "expressions and constants are", tok)
         value = self.check_size(sp.Pow(base, exponent), tok)
         if q != 1:
             self._check_real_constant(value, tok)
@@ -265,6 +272,8 @@ class Builder:
     def _check_real_constant(value: sp.Expr, tok: Token | None) -> None:
         if value.free_symbols or value.is_Rational:
             return
+        if value.has(sp.zoo, sp.nan, sp.oo, -sp.oo):
+            raise fail("expression is undefined or infinite (tan(pi/2), log(0)?)", tok)
         number = value.evalf(15)
         if number.has(sp.I, sp.nan, sp.zoo, sp.oo, -sp.oo):
             raise fail("expression is not real (root, log, asin or acos of a number outside its "
@@ -288,7 +297,7 @@ class Builder:
         return self.check_size(sp.Mul(*factors), tok)
 
     def reciprocal(self, expr: sp.Expr, tok: Token | None) -> sp.Expr:
-        if expr.is_zero is True and expr.is_Number:
+        if expr.is_Number and expr.is_zero:
             raise fail("division by zero", tok)
         return sp.Pow(expr, -1)
 
@@ -318,6 +327,12 @@ class Builder:
         self._check_constant_argument(arg, f"{fname}()", tok)
         if fname == "log" and arg.is_Number and arg.is_zero:
             raise fail("log(0) is undefined", tok)
+        if arg.free_symbols:
+            # sympy's automatic evaluation of functions of symbolic arguments asks the
+            # assumption system questions (is tanh(...) real?) whose cost is unbounded for
+            # nested arguments; build the function unevaluated (same object sympy returns
+            # when there is nothing to simplify)
+            return func(arg, evaluate=False)
         value = self.check_size(func(arg), tok)
         self._check_real_constant(value, tok)
         return value

@@ -118,8 +118,7 @@ def tokenize(text: str, line: int = 1, col: int = 1, *, extra_names: Iterable[st
                                    + ", ".join(_MATRIX_ENVS + _WRAPPER_ENVS), line=line, col=col,
                                    token=text[i:m + 1])
                     j = m + 1
-                    spec = None
-                    if cmd == "begin" and env == "array":
+                    if cmd == "begin" and env == "array":    # skip the column specification
                         k = skip_space(j)
                         if k < n and text[k] == "{":
                             m = k + 1
@@ -128,7 +127,6 @@ def tokenize(text: str, line: int = 1, col: int = 1, *, extra_names: Iterable[st
                             if m >= n or text[m] != "}":
                                 raise fail("malformed array column specification; use e.g. {ccc}",
                                            line=line, col=col, token=text[i:m])
-                            spec = text[k + 1:m]
                             j = m + 1
                     add("BEGIN" if cmd == "begin" else "END", text[i:j], env)
                 elif cmd in ("left", "right"):

@@ -137,7 +137,7 @@ def _all_numeric(values: Iterable[sp.Expr]) -> bool:
     return all(v.is_Rational for v in values)
 
 
-def _normalise_entries(raw, declared: int | None, name_kind: str):
+def _normalise_entries(raw, declared: int | None):
     """raw: list of (i, j, expr, tok). Returns (entries, base, rows, cols)."""
     smallest = min(min(i, j) for i, j, _, _ in raw)
     if declared is not None:
@@ -285,7 +285,7 @@ def _parse_math_entries(content, declared, builder, budget) -> MatrixInput:
             raise ParseError("missing expression after '='", lineno, m.end(), "=")
         _check_entry(toks, budget)
         raw.append((i, j, mathexpr.parse_tokens(toks, builder, end), head))
-    entries, base, rows, cols = _normalise_entries(raw, declared, "math")
+    entries, base, rows, cols = _normalise_entries(raw, declared)
     syntax = "numeric" if _all_numeric(entries.values()) else "math"
     return MatrixInput("entries", rows, cols, None, entries, base, syntax, name=name,
                        index_base_declared=declared is not None)
@@ -386,8 +386,8 @@ def _latex_lhs_at(tokens: list[Token], k: int):
         return None
     m = k + 2
     if tokens[m].kind == "NUM":
-        parts, m = [tokens[m]], m + 1
-        inside = [tokens[m - 1]]
+        inside = [tokens[m]]
+        m += 1
     elif tokens[m].kind == "LBRACE":
         close = next((q for q in range(m + 1, min(n, m + 6)) if tokens[q].kind == "RBRACE"), None)
         if close is None:
@@ -444,7 +444,7 @@ def _parse_latex_entries(tokens, declared, builder, end) -> MatrixInput:
         if not rhs:
             raise fail("missing expression after '='", tokens[rhs_start - 1])
         raw.append((i, j, _latex_entry(rhs, builder, _end_of(rhs), budget), head))
-    entries, base, rows, cols = _normalise_entries(raw, declared, "latex")
+    entries, base, rows, cols = _normalise_entries(raw, declared)
     return MatrixInput("entries", rows, cols, None, entries, base, "latex", name=name,
                        index_base_declared=declared is not None)
 
