@@ -88,7 +88,9 @@ def describe(ir: KernelIR, lows: dict) -> dict:
             "xy": f"nodal coordinates, shape (n, {nodes}, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of "
                   f"node i+1 (counter-clockwise corners first, then mid-side, then interior)"
                   + ("; x is the radius r > 0" if st == "axisymmetric" else ""),
-            "E": "Young's modulus (> 0), scalar", "nu": "Poisson's ratio (-1 < nu < 0.5), scalar",
+            "E": "Young's modulus (> 0), scalar",
+            "nu": ("Poisson's ratio (-1 < nu <= 0.5), scalar" if st == "plane-stress"
+                   else "Poisson's ratio (-1 < nu < 0.5), scalar"),
             "t": thick,
             "u": f"nodal displacements for recovery, shape (n, {ndof}), interleaved u1, v1, u2, v2, ...",
         },

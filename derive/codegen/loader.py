@@ -7,7 +7,8 @@
   line, the flags and the machine; loaded with ctypes.  Fortran likewise with ``$FC`` or
   ``gfortran``.  Without a compiler the NumPy kernel is used and a one-line warning says so.
 * Every call checks its inputs before any native code runs: array shapes, finite
-  coordinates, E > 0 and -1 < nu < 0.5 (:func:`derive.material.check_material`), t > 0.
+  coordinates, E > 0 and -1 < nu < 0.5, nu = 0.5 allowed in plane stress
+  (:func:`derive.material.check_material`), t > 0.
 """
 from __future__ import annotations
 
@@ -191,9 +192,9 @@ class Kernel:
             except (TypeError, ValueError):
                 raise InputError(f"{name} must be a number, got {v!r}") from None
         E, nu = float(E), float(nu)
+        # exactly derive.material.check_material's rule: -1 < nu <= 0.5 in plane stress
+        # (D = E / (1 - nu^2) [...] is finite at nu = 1/2), nu < 0.5 in the other states
         check_material(self.state, E, nu)
-        if not nu < 0.5:
-            raise InputError(f"Poisson's ratio nu = {nu} is not allowed in a kernel; -1 < nu < 0.5")
         if t is not None:
             t = float(t)
             if not np.isfinite(t) or t <= 0:

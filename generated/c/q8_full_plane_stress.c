@@ -10,7 +10,7 @@
  *   xy      nodal coordinates, shape (n, 8, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
  *           node i+1 (counter-clockwise corners first, then mid-side, then interior)
  *   E       Young's modulus (> 0), scalar
- *   nu      Poisson's ratio (-1 < nu < 0.5), scalar
+ *   nu      Poisson's ratio (-1 < nu <= 0.5), scalar
  *   t       thickness t (the out-of-plane thickness)
  *   u       nodal displacements for recovery, shape (n, 16), interleaved u1, v1, u2, v2, ...
  *   K       stiffness, shape (n, 16, 16), DOFs interleaved u1, v1, u2, v2, ...; symmetric

@@ -14,7 +14,7 @@ arguments (units-agnostic; any consistent set of units):
   xy      nodal coordinates, shape (n, 4, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
           node i+1 (counter-clockwise corners first, then mid-side, then interior)
   E       Young's modulus (> 0), scalar
-  nu      Poisson's ratio (-1 < nu < 0.5), scalar
+  nu      Poisson's ratio (-1 < nu <= 0.5), scalar
   t       thickness t (the out-of-plane thickness)
   u       nodal displacements for recovery, shape (n, 8), interleaved u1, v1, u2, v2, ...
   K       stiffness, shape (n, 8, 8), DOFs interleaved u1, v1, u2, v2, ...; symmetric; the 4

@@ -5,7 +5,7 @@ element      Q9, 9 nodes, 18 DOFs interleaved u1, v1, u2, v2, ...
 formulation  selective integration: volumetric part of D with the reduced rule [Doherty, Wilson
              & Taylor (1969); Hughes (1987) Sec. 4.4]
 integration  B^T D_dev B: gauss-3x3 (9 points); B^T D_vol B (reduced rule): gauss-2x2 (4 points)
-flops        stiffness 14051, validity 366, recovery 1669 per element (add, mul, div, sqrt)
+flops        stiffness 14042, validity 366, recovery 1669 per element (add, mul, div, sqrt)
 
 arguments (units-agnostic; any consistent set of units):
   xy      nodal coordinates, shape (n, 9, 2), C order: xy[e, i, 0] = x and xy[e, i, 1] = y of
@@ -323,7 +323,7 @@ def _material(E, nu, t):
     m0 = 2.0*E/(3.0 + 3.0*nu)
     m1 = -E/(3.0 + 3.0*nu)
     m2 = E/(2.0 + 2.0*nu)
-    m3 = 0.6666666666666666*E/(2.0 + 2.0*nu) + E*nu/((1.0 + nu)*(1.0 - 2.0*nu))
+    m3 = -E/(-3.0 + 6.0*nu)
     m4 = E*(1.0 - nu)/((1.0 + nu)*(1.0 - 2.0*nu))
     m5 = E*nu/((1.0 + nu)*(1.0 - 2.0*nu))
     m6 = E*(0.5 - nu)/((1.0 + nu)*(1.0 - 2.0*nu))
