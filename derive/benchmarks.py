@@ -167,15 +167,51 @@ def _element(element: str, variant: str, state: str):
 
 
 def _warn(sol) -> dict:
-    return {"warnings": list(sol.warnings)} if sol.warnings else {}
+    """Row fields from a solution's checks: ``reliable`` (False when the mesh solve found a
+    (near-)mechanism, see ``mesh.mechanism_check``) and its warnings."""
+    out = {"reliable": bool(sol.reliable)}
+    if sol.warnings:
+        out["warnings"] = list(sol.warnings)
+    return out
+
+
+def _row_label(r) -> str:
+    extra = f", {r['load']}" if "load" in r else ""
+    extra += f", nu {r['nu']}" if "nu" in r else ""
+    return f"{r['mesh']}{extra}"
 
 
 def _warning_lines(rows) -> list[str]:
-    out = []
+    """One line per distinct warning; a warning shared by every row that solved is printed once
+    without labels."""
+    seen: dict[str, list[str]] = {}
     for r in rows:
         for w in r.get("warnings", []):
-            out.append(f"warning ({r['mesh']}{', nu ' + str(r['nu']) if 'nu' in r else ''}): {w}")
+            seen.setdefault(w, []).append(_row_label(r))
+    solved = sum(1 for r in rows if r.get("value") is not None)
+    out = []
+    for w, labels in seen.items():
+        out.append(f"warning: {w}" if len(labels) == solved and solved > 1 else
+                   f"warning ({'; '.join(labels)}): {w}")
     return out
+
+
+def study_warnings(rows) -> list[str]:
+    """Distinct warnings of a study's rows, in order (the JSON field ``warnings``)."""
+    return list(dict.fromkeys(w for r in rows for w in r.get("warnings", [])))
+
+
+UNRELIABLE = "UNRELIABLE (mechanism)"
+
+
+def _marked(r: dict, key: str, fmt: str) -> str:
+    """A row's number for text output; flagged rows say so instead of a plain number."""
+    v = r.get(key)
+    if v is None:
+        return MECHANISM
+    if r.get("reliable") is False:
+        return f"{format(v, fmt)} {UNRELIABLE}"
+    return format(v, fmt)
 
 
 def run_cantilever(element: str, variant: str = "full", kind: str = "rectangular", load: str = "shear",
@@ -266,22 +302,24 @@ def cantilever_study(element: str, variant: str = "full", meshes=CANTILEVER_MESH
             if r is None:
                 r = {"problem": "cantilever", "element": element, "variant": variant, "mesh": kind, "load": load,
                      "refine": refine, "value": None, "reference": CANTILEVER["reference"][load], "normalized": None,
-                     "note": MECHANISM}
+                     "reliable": False, "note": MECHANISM}
             last = sol or last
             rows.append(r)
     pr.close()
     lines = [f"cantilever (MacNeal & Harder 1985): {element} {variant}, 6 x 1 cells x refine {refine}; "
              "value = mean tip displacement along the load"]
     for r in rows:
-        lines.append(f"{r['mesh']:<13} {r['load']:<9} value {_num(r['value'], '.6g')}  reference {r['reference']:.6g}  "
-                     f"normalized {_num(r['normalized'], '.4f')}")
+        lines.append(f"{r['mesh']:<13} {r['load']:<9} value {_marked(r, 'value', '.6g')}  reference "
+                     f"{r['reference']:.6g}  normalized {_marked(r, 'normalized', '.4f')}")
     lines += _warning_lines(rows)
     return {"problem": "cantilever", "element": element, "variant": variant, "results": rows, "lines": lines,
-            **_headline(rows[0]), "_solution": last}
+            "warnings": study_warnings(rows), **_headline(rows[0]), "_solution": last}
 
 
 def _headline(row: dict) -> dict:
-    return {k: row[k] for k in ("mesh", "value", "reference", "normalized")}
+    out = {k: row[k] for k in ("mesh", "value", "reference", "normalized")}
+    out["reliable"] = row.get("reliable", row.get("value") is not None)
+    return out
 
 
 def membrane_study(element: str, variant: str = "full", levels=(2, 4, 8, 16, 32), show_progress=False) -> dict:
@@ -294,12 +332,12 @@ def membrane_study(element: str, variant: str = "full", levels=(2, 4, 8, 16, 32)
         if r is None:
             r = {"problem": "membrane", "element": element, "variant": variant, "mesh": f"{n} x {n}", "n": n,
                  "value": None, "corner": None, "mid": None, "reference": COOK_CONVERGED["mid"] or COOK["quoted_mid"],
-                 "normalized": None, "note": MECHANISM}
+                 "normalized": None, "reliable": False, "note": MECHANISM}
         last = sol or last
         rows.append(r)
     pr.close()
     out = {"problem": "membrane", "element": element, "variant": variant, "results": rows}
-    ok = [r for r in rows if r["mid"] is not None]
+    ok = [r for r in rows if r["mid"] is not None and r.get("reliable") is not False]
     geometric = all(b == 2 * a for a, b in zip(levels, levels[1:]))
     extrap = {}
     if len(ok) == len(rows) and len(rows) >= 3 and geometric:
@@ -322,7 +360,8 @@ def membrane_study(element: str, variant: str = "full", levels=(2, 4, 8, 16, 32)
         if r["mid"] is None:
             lines.append(f"{r['mesh']:>9} {MECHANISM}")
         else:
-            lines.append(f"{r['mesh']:>9} {r['corner']:11.5f} {r['mid']:11.5f}")
+            lines.append(f"{r['mesh']:>9} {r['corner']:11.5f} {r['mid']:11.5f}"
+                         + (f"  {UNRELIABLE}" if r.get("reliable") is False else ""))
     for key, e in extrap.items():
         if e["order"] is not None:
             lines.append(f"Richardson ({key}, last three levels): {e['value']:.4f}, observed order {e['order']:.2f}")
@@ -334,6 +373,7 @@ def membrane_study(element: str, variant: str = "full", levels=(2, 4, 8, 16, 32)
     lines.append(f"often-quoted converged value (mid-edge, from memory): {COOK['quoted_mid']}")
     lines += _warning_lines(rows)
     out["lines"] = lines
+    out["warnings"] = study_warnings(rows)
     out.update(_headline(rows[-1]))
     out["_solution"] = last
     return out
@@ -352,13 +392,13 @@ def cylinder_study(element: str, variant: str = "full", levels=(2, 4, 8, 16), nu
                 r = {"problem": "cylinder", "element": element, "variant": variant, "mesh": f"{n} x {n}", "n": n,
                      "nu": nu, "value": None,
                      "reference": lame_bore(CYLINDER["p"], CYLINDER["inner"], CYLINDER["outer"], CYLINDER["E"], nu),
-                     "normalized": None, "error": None, "note": MECHANISM}
+                     "normalized": None, "error": None, "reliable": False, "note": MECHANISM}
             last = sol or last
             rows.append(r)
     pr.close()
     rates = {}
     for nu in nus:
-        sub = [r for r in rows if r["nu"] == nu and r["error"] is not None]
+        sub = [r for r in rows if r["nu"] == nu and r["error"] is not None and r.get("reliable") is not False]
         rates[str(nu)] = slope([1.0 / r["n"] for r in sub], [r["error"] for r in sub])
     lines = [f"cylinder (Lame, plane strain, inner {CYLINDER['inner']:g}, outer {CYLINDER['outer']:g}, "
              f"E {CYLINDER['E']:g}, p {CYLINDER['p']:g}): {element} {variant}; radial displacement at the bore / Lame",
@@ -366,12 +406,24 @@ def cylinder_study(element: str, variant: str = "full", levels=(2, 4, 8, 16), nu
     for nu in nus:
         sub = [r for r in rows if r["nu"] == nu]
         rate = rates[str(nu)]
-        lines.append(f"{nu:>7} " + " ".join(f"{r['normalized']:10.4f}" if r["normalized"] is not None
-                                            else f"{'mechanism':>10}" for r in sub) +
+        lines.append(f"{nu:>7} " + " ".join(_cyl_cell(r) for r in sub) +
                      (f"   h^{rate:.2f}" if rate is not None else ""))
+    flagged = [r for r in rows if r.get("reliable") is False and r["normalized"] is not None]
+    if flagged:
+        vals = ", ".join(f"{r['mesh']} nu {r['nu']}: {r['normalized']:.4g}" for r in flagged)
+        lines.append(f"unreliable: the mesh solve found a spurious mode or near-mechanism; the values ({vals}) "
+                     "are not results")
     lines += _warning_lines(rows)
     return {"problem": "cylinder", "element": element, "variant": variant, "results": rows, "rates": rates,
-            "lines": lines, **_headline(rows[-1]), "_solution": last}
+            "lines": lines, "warnings": study_warnings(rows), **_headline(rows[-1]), "_solution": last}
+
+
+def _cyl_cell(r: dict) -> str:
+    if r["normalized"] is None:
+        return f"{'mechanism':>10}"
+    if r.get("reliable") is False:
+        return f"{'unreliable':>10}"
+    return f"{r['normalized']:10.4f}"
 
 
 LOCKING_ASPECTS = (1, 2, 3, 5, 10, 15, 30)
@@ -402,27 +454,35 @@ def locking_mesh_study(element: str, variant: str = "full", depths=(1, 2, 4), as
             r, sol = _attempt(run_cantilever, element, variant, "rectangular", "shear", 1, nx=nx, ny=ny)
             last = sol or last
             value = r["value"] if r else None
-            rows.append({"problem": "locking-mesh", "element": element, "variant": variant,
-                         "mesh": f"{nx} x {ny}", "depth_elements": ny, "aspect": ar, "value": value,
-                         "reference": ref, "normalized": value / ref if value is not None else None})
+            row = {"problem": "locking-mesh", "element": element, "variant": variant,
+                   "mesh": f"{nx} x {ny}", "depth_elements": ny, "aspect": ar, "value": value,
+                   "reference": ref, "normalized": value / ref if value is not None else None,
+                   "reliable": bool(r and r.get("reliable", True))}
+            if r and r.get("warnings"):
+                row["warnings"] = r["warnings"]
+            rows.append(row)
     pr.close()
     needed = {}
     for ny in depths:
         ok = [r["aspect"] for r in rows if r["depth_elements"] == ny and r["normalized"] is not None
-              and r["normalized"] >= accuracy]
+              and r["reliable"] and r["normalized"] >= accuracy]
         needed[str(ny)] = max(ok) if ok else None
     lines = [f"locking-mesh: cantilever L {c['length']:g}, depth {c['depth']:g}, {element} {variant}; "
              f"tip deflection / Timoshenko beam theory ({ref:.6g})",
              f"{'aspect':>7} " + " ".join(f"{str(ny) + ' deep':>9}" for ny in depths)]
     for ar in aspects:
-        vals = [next(r for r in rows if r["depth_elements"] == ny and r["aspect"] == ar)["normalized"] for ny in depths]
-        lines.append(f"{ar:>7} " + " ".join(f"{v:9.4f}" if v is not None else f"{'mechanism':>9}" for v in vals))
+        cells = [next(r for r in rows if r["depth_elements"] == ny and r["aspect"] == ar) for ny in depths]
+        lines.append(f"{ar:>7} " + " ".join(f"{'mechanism':>9}" if c["normalized"] is None else
+                                            f"{'unreliable':>9}" if not c["reliable"] else
+                                            f"{c['normalized']:9.4f}" for c in cells))
     for ny in depths:
         a_ = needed[str(ny)]
         lines.append(f"{ny} through the depth: largest aspect ratio reaching {accuracy:g} of beam theory: "
                      + (f"{a_}" if a_ is not None else "none of those tried"))
+    lines += _warning_lines(rows)
     return {"problem": "locking-mesh", "element": element, "variant": variant, "results": rows, "accuracy": accuracy,
-            "largest_aspect_for_accuracy": needed, "lines": lines, **_headline(rows[-1]), "_solution": last}
+            "largest_aspect_for_accuracy": needed, "lines": lines, "warnings": study_warnings(rows),
+            **_headline(rows[-1]), "_solution": last}
 
 
 # ---------------------------------------------------------------------------------------------

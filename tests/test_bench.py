@@ -240,3 +240,31 @@ def test_cantilever_matches_each_variants_locking_ratio(variant):
         pytest.fail("derive.locking is missing: no closed-form ratio for this variant")
     got = B.cantilever_study("Q4", variant, meshes=("rectangular",), loads=("shear",))["results"][0]["normalized"]
     assert math.isclose(got, expected, rel_tol=0.03), (variant, got, expected)
+
+
+def test_q9_reduced_cylinder_is_marked_unreliable(capsys):
+    # Q9 reduced: 3 spurious element modes (Cook, Malkus & Plesha (1989), textbook fact, from
+    # memory) that survive the symmetry rollers of the coarse cylinder (measured: 97x Lame on 2 x 2)
+    code = main(["bench", "cylinder", "--element", "Q9", "--variant", "reduced", "--mesh", "2", "--nu", "0.3",
+                 "--json"])
+    data = json.loads(capsys.readouterr().out)
+    assert code == 0 and data["reliable"] is False and data["results"][0]["reliable"] is False
+    assert any("spurious zero-energy element modes" in w for w in data["warnings"])
+    assert any("survives the supports" in w for w in data["warnings"])
+    assert main(["bench", "cylinder", "--element", "Q9", "--variant", "reduced", "--mesh", "4", "--nu", "0.3"]) == 0
+    out = capsys.readouterr().out
+    assert "unreliable" in out and "warning" in out
+    # Q9 full on the same meshes: clean (Lame within 1%, common practice, no source)
+    res = B.cylinder_study("Q9", "full", levels=(2, 4), nus=(0.3,))
+    assert res["warnings"] == [] and all(r["reliable"] for r in res["results"])
+    assert all(abs(r["normalized"] - 1) < 0.01 for r in res["results"])
+
+
+def test_element_mode_warning_on_clean_cantilever():
+    # Q9 reduced on the clamped cantilever: the spurious modes are suppressed by the clamp, the
+    # value stays a result (0.9998 of the reference) but carries the element-mode warning
+    res = B.cantilever_study("Q9", "reduced", meshes=("rectangular",), loads=("shear",))
+    row = res["results"][0]
+    assert row["reliable"] and abs(row["normalized"] - 1) < 0.01
+    assert len(res["warnings"]) == 1 and "3 spurious" in res["warnings"][0]
+    assert any(line.startswith("warning") for line in res["lines"])

@@ -107,6 +107,7 @@ def run(args) -> int:
                                for st in studies],
                    "results": [r for st in studies for r in st["results"]],
                    "lines": [line for st in studies for line in st["lines"]], "_solution": studies[-1]["_solution"],
+                   "warnings": list(dict.fromkeys(w for st in studies for w in st.get("warnings", []))),
                    "_studies": studies, **{k: studies[-1][k] for k in ("mesh", "value", "reference", "normalized")}}
     files = {}
     if args.plot:
@@ -122,6 +123,9 @@ def run(args) -> int:
             raise InputError("--vtu: no run produced a solution (every mesh was a mechanism)")
         files["vtu"] = str(write_vtu(args.vtu, sol, scale))
     out = {k: v for k, v in res.items() if not k.startswith("_") and k != "lines"}
+    out.setdefault("warnings", [])
+    # results flagged by the mesh solve's mechanism check are marked, never plain numbers
+    out["reliable"] = all(r.get("reliable") is not False for r in out.get("results", []))
     out["files"] = files
     if quiet:
         print_json({**out, "caution": CAUTION})
