@@ -348,3 +348,19 @@ def test_cli_all_and_check_exit_status(tmp_path, monkeypatch, capsys):
     assert main(["kernel", "--check", "-o", str(dest), "--json"]) == 1      # a check ran and failed
     out = json.loads(capsys.readouterr().out)
     assert out["up_to_date"] is False and out["differences"] == ["differs: c/x.c"]
+
+
+@pytest.mark.parametrize("lang", ["c", "fortran"])
+def test_batch_blocks_with_a_short_last_block(lang):
+    # the native batch routines work on blocks of 8 elements (lanes); batches that are not a
+    # multiple of 8, and a single element, must match the independent quadrature element by element
+    _need(lang)
+    for name, variant in (("Q4", "full"), ("Q8", "full"), ("Q4", "eas4")):
+        k = derive.kernel(name, variant, lang=lang)
+        X = ref.random_elements(name, 21, np.random.default_rng(11))
+        Kref = ref.stiffness(name, variant, "plane-stress", X, 7.5, 0.31, 0.4)
+        for n in (1, 5, 8, 13, 21):
+            K = k(X[:n], 7.5, 0.31, 0.4)
+            err = np.max(np.abs(K - Kref[:n]), axis=(1, 2)) / np.max(np.abs(Kref[:n]), axis=(1, 2))
+            assert err.max() <= 1e-12     # independent numeric quadrature (leggauss), as above
+        assert k(X[:0], 7.5, 0.31, 0.4).shape == (0, k.ndof, k.ndof)

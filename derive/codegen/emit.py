@@ -23,6 +23,8 @@ LANGS = ("numpy", "c", "fortran")
 #: C batch kernels process this many elements at a time, transposed so that the element
 #: index is the innermost (unit-stride, vectorisable) dimension.
 C_LANES = 8
+#: Fortran batch kernels likewise (lane index first in the scratch arrays)
+F_LANES = 8
 NUMPY_CHUNK = 2048
 #: C/Fortran lowering: points unrolled with constants folded for small rules, a loop over
 #: point tables for larger ones (see lower.UNROLL_MAX)
@@ -368,22 +370,33 @@ def _f_stmt(indent, lhs, rhs) -> list[str]:
     return wrap_fortran(f"{indent}{lhs} = {f_expr(rhs)}", indent)
 
 
-def _f_body(low: Lowered, ir: KernelIR, out_fmt, point_fmt=None, tag: str = "T", indent="    "):
+def _f_body(low: Lowered, ir: KernelIR, out_fmt, point_fmt=None, tag: str = "T", indent="    ",
+            in_fmt=None, mat=None):
+    """Declarations and statements of one Fortran kernel body.
+
+    in_fmt(k, i): accessor of coordinate k of node i (0-based; default xy(k, i)).  mat: a list
+    that receives (declaration names, statements) of the material constants instead of the
+    body (the lane-blocked batch routine computes them once per call).
+    """
     decl, lines, tables = [], [], []
     used = low.used_inputs
     names = []
+    in_fmt = in_fmt or (lambda k, i: f"xy({k + 1}, {i + 1})")
     for i in range(ir.n_nodes):
         for k, c in enumerate(("x", "y")):
             nm = f"{c}{i + 1}"
             if nm in used:
                 names.append(nm)
-                lines.append(f"{indent}{nm} = xy({k + 1}, {i + 1})")
+                lines.append(f"{indent}{nm} = {in_fmt(k, i)}")
     for j in range(ir.ndof):
         if f"u{j + 1}" in used:
             names.append(f"u{j + 1}")
             lines.append(f"{indent}u{j + 1} = u({j + 1})")
     for s, e in low.mat:
         if s.name in used:
+            if mat is not None:
+                mat.append((s.name, e))
+                continue
             names.append(s.name)
             lines += _f_stmt(indent, s, e)
     for s, e in low.elem:
@@ -446,7 +459,8 @@ def _f_body(low: Lowered, ir: KernelIR, out_fmt, point_fmt=None, tag: str = "T",
     if rolled_any:
         decl.append(f"{indent}integer :: p")
     _check_case(names + local_names + [t.split("::")[1].split("(")[0].strip() for t in tables if "::" in t] +
-                ["xy", "u", "E", "nu", "t", "K", "detJ_min", "strain", "stress", "mat", "n", "iel", "p"])
+                ["xy", "u", "E", "nu", "t", "K", "detJ_min", "strain", "stress", "mat", "n", "iel", "p",
+                 "lanes", "lane", "mlan", "ib", "xl", "kl"])
     return decl, lines
 
 
@@ -476,6 +490,13 @@ def _check_case(names):
 def render_fortran(ir: KernelIR, lows: dict, meta: dict, name: str) -> list[Source]:
     K, V, R = lows["stiffness"], lows["validity"], lows["recovery"]
     sd, sl = _f_body(K, ir, lambda nm, idx: f"K({idx[0] + 1}, {idx[1] + 1})", tag="KS")
+    # batch: the same body inside a loop over F_LANES lanes (one element each, lane index
+    # first in the scratch arrays), so that gfortran vectorises across elements
+    bmat = []
+    bd, bl = _f_body(K, ir, lambda nm, idx: f"kl(lane, {idx[0] + 1}, {idx[1] + 1})", tag="KS",
+                     indent="          ", in_fmt=lambda k, i: f"xl(lane, {k + 1}, {i + 1})", mat=bmat)
+    bmat_decl = _f_decl([nm for nm, _ in bmat], "    ")
+    bmat_lines = [line for nm, e in bmat for line in _f_stmt("    ", nm, e)]
     vd, vl = _f_body(V, ir, lambda nm, idx: "detJ_min", tag="KV")
 
     def point_out(nm, idx):
@@ -486,7 +507,8 @@ def render_fortran(ir: KernelIR, lows: dict, meta: dict, name: str) -> list[Sour
     rd, rl = _f_body(R, ir, None, point_out, tag="KR")
     ctx = {"header": header_lines(ir, meta, "fortran"), "module": f"derive_{name}", "name": name,
            "nodes": ir.n_nodes, "ndof": ir.ndof, "nstrain": ir.nstrain, "npoints": meta["recovery_points"],
-           "stiff_decl": sd, "stiff_lines": sl, "valid_decl": vd, "valid_lines": vl,
+           "stiff_decl": sd, "stiff_lines": sl, "lanes": F_LANES, "batch_decl": bd, "batch_lines": bl,
+           "batch_mat_decl": bmat_decl, "batch_mat_lines": bmat_lines, "valid_decl": vd, "valid_lines": vl,
            "rec_decl": rd, "rec_lines": rl, "version": GENERATOR_VERSION}
     text = _env().get_template("kernel.f90.j2").render(**ctx)
     return [Source(f"fortran/{name}.f90", text)]

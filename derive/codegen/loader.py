@@ -34,11 +34,13 @@ from .emit import LANGS, generate
 
 #: GNU compilers: -fno-tree-slp-vectorize avoids a pathological compile time in the RTL
 #: combiner on long straight-line bodies (the lane loop is still loop-vectorised; measured
-#: no loss); -mprefer-vector-width=512 lets the lane loop use AVX-512 where present.
+#: no loss); -mprefer-vector-width=512 lets the lane loops (C and Fortran batch routines)
+#: use AVX-512 where present.
 C_FLAGS = ("-O3", "-march=native", "-fno-tree-slp-vectorize", "-std=c99", "-fPIC", "-shared")
 F_FLAGS = ("-O3", "-march=native", "-fno-tree-slp-vectorize", "-fPIC", "-shared")
 if platform.machine().lower() in ("x86_64", "amd64"):
     C_FLAGS = C_FLAGS[:2] + ("-mprefer-vector-width=512",) + C_FLAGS[2:]
+    F_FLAGS = F_FLAGS[:2] + ("-mprefer-vector-width=512",) + F_FLAGS[2:]
 PORTABLE_FLAGS = ("-O3", "-fPIC", "-shared")
 
 

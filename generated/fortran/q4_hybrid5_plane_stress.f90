@@ -29,6 +29,8 @@
 !              derive kernel Q4 --variant hybrid5 --state plane-stress --lang fortran
 !
 ! Fortran 2008.  Compile e.g. with: gfortran -O3 -march=native -c q4_hybrid5_plane_stress.f90
+! (on x86 add -mprefer-vector-width=512 for the batch routine's lane loop, and
+! -fno-tree-slp-vectorize: same speed, much shorter compile times).
 ! Every procedure is bind(C) (callable from C or Python through ctypes/cffi); the link
 ! names end in _f so they never clash with the C kernels of the same element.
 ! Array layout: Fortran column-major xy(2, 4, n) is the same memory as C xy[n][4][2];
@@ -410,9 +412,381 @@ contains
     real(dp), intent(in) :: xy(2, 4, n)
     real(dp), value, intent(in) :: E, nu, t
     real(dp), intent(out) :: K(8, 8, n)
-    integer(c_long) :: iel
-    do iel = 1, n
-      call q4_hybrid5_plane_stress_stiffness(xy(:, :, iel), E, nu, t, K(:, :, iel))
+    ! blocks of 8 elements: copied into lane-first scratch (xl(lane, :, :)), the body
+    ! runs in a loop over the lanes that gfortran vectorises (one SIMD lane per element),
+    ! then K is copied back; a short last block repeats its first element in the spare lanes
+    integer, parameter :: lanes = 8
+    real(dp) :: xl(lanes, 2, 4), kl(lanes, 8, 8)
+    integer(c_long) :: ib, iel
+    integer :: lane, mlan
+    real(dp) :: m0, m1, m2
+    m0 = -1.0_dp/E
+    m1 = nu/E
+    m2 = -(2.0_dp + 2.0_dp*nu)/E
+    do ib = 1, n, lanes
+      mlan = int(min(int(lanes, c_long), n - ib + 1))
+      do lane = 1, lanes
+        iel = ib + merge(lane - 1, 0, lane <= mlan)
+        xl(lane, :, :) = xy(:, :, iel)
+      end do
+      do lane = 1, lanes
+        block
+          ! c0 = eta/4 - 1/4 at the points of gauss-2x2
+          real(dp), parameter :: KS0_c0(4) = [-0.39433756729740643_dp, -0.39433756729740643_dp, &
+              -0.10566243270259355_dp, -0.10566243270259355_dp]
+          ! c1 = xi/4 - 1/4 at the points of gauss-2x2
+          real(dp), parameter :: KS0_c1(4) = [-0.39433756729740643_dp, -0.10566243270259355_dp, &
+              -0.39433756729740643_dp, -0.10566243270259355_dp]
+          ! c2 = 1/4 - eta/4 at the points of gauss-2x2
+          real(dp), parameter :: KS0_c2(4) = [0.39433756729740643_dp, 0.39433756729740643_dp, &
+              0.10566243270259355_dp, 0.10566243270259355_dp]
+          ! c3 = -xi/4 - 1/4 at the points of gauss-2x2
+          real(dp), parameter :: KS0_c3(4) = [-0.10566243270259355_dp, -0.39433756729740643_dp, &
+              -0.10566243270259355_dp, -0.39433756729740643_dp]
+          ! c4 = eta/4 + 1/4 at the points of gauss-2x2
+          real(dp), parameter :: KS0_c4(4) = [0.10566243270259355_dp, 0.10566243270259355_dp, &
+              0.39433756729740643_dp, 0.39433756729740643_dp]
+          ! c5 = xi/4 + 1/4 at the points of gauss-2x2
+          real(dp), parameter :: KS0_c5(4) = [0.10566243270259355_dp, 0.39433756729740643_dp, &
+              0.10566243270259355_dp, 0.39433756729740643_dp]
+          ! c6 = -eta/4 - 1/4 at the points of gauss-2x2
+          real(dp), parameter :: KS0_c6(4) = [-0.10566243270259355_dp, -0.10566243270259355_dp, &
+              -0.39433756729740643_dp, -0.39433756729740643_dp]
+          ! c7 = 1/4 - xi/4 at the points of gauss-2x2
+          real(dp), parameter :: KS0_c7(4) = [0.39433756729740643_dp, 0.10566243270259355_dp, &
+              0.39433756729740643_dp, 0.10566243270259355_dp]
+          ! eta = eta at the points of gauss-2x2
+          real(dp), parameter :: KS0_eta(4) = [-0.5773502691896257_dp, -0.5773502691896257_dp, &
+              0.5773502691896257_dp, 0.5773502691896257_dp]
+          ! w = the point weight at the points of gauss-2x2
+          real(dp), parameter :: KS0_w(4) = [1.0_dp, 1.0_dp, 1.0_dp, 1.0_dp]
+          ! xi = xi at the points of gauss-2x2
+          real(dp), parameter :: KS0_xi(4) = [-0.5773502691896257_dp, 0.5773502691896257_dp, &
+              -0.5773502691896257_dp, 0.5773502691896257_dp]
+          real(dp) :: x1, y1, x2, y2, x3, y3, x4, y4, gx_0_1, gx_1_0, gx_1_1, gy_0_1, gy_1_0, gy_1_1, e0
+          real(dp) :: e1, e2, e3, e4, e5, A_0_0, A_0_2, A_0_3, A_0_4, A_1_1, A_1_2, A_1_3, A_1_4, A_2_0
+          real(dp) :: A_2_2, A_2_3, A_2_4, A_3_1, A_3_2, A_3_3, A_3_4, A_4_0, A_4_2, A_4_3, A_4_4, A_5_1
+          real(dp) :: A_5_2, A_5_3, A_5_4, A_6_0, A_6_2, A_6_3, A_6_4, A_7_1, A_7_2, A_7_3, A_7_4, H_0_0
+          real(dp) :: H_0_1, H_0_3, H_0_4, H_1_1, H_1_3, H_1_4, H_2_2, H_2_3, H_2_4, H_3_3, H_3_4, H_4_4
+          real(dp) :: cid0, cL1_0, cL3_0, cL4_0, cd1, cid1, cL3_1, cL4_1, cid2, cL3_2, cL4_2, cd3, cid3
+          real(dp) :: cL4_3, cd4, cid4, cy1_0, cy3_0, cy4_0, cy3_1, cy4_1, cy1_2, cy3_2, cy4_2, cy3_3, cy4_3
+          real(dp) :: cy1_4, cy3_4, cy4_4, cy3_5, cy4_5, cy1_6, cy3_6, cy4_6, cy3_7, cy4_7, cz0_0, cz1_0
+          real(dp) :: cz2_0, cz3_0, cz4_0, cz1_1, cz2_1, cz3_1, cz4_1, cz0_2, cz1_2, cz2_2, cz3_2, cz4_2
+          real(dp) :: cz1_3, cz2_3, cz3_3, cz4_3, cz0_4, cz1_4, cz2_4, cz3_4, cz4_4, cz1_5, cz2_5, cz3_5
+          real(dp) :: cz4_5, cz0_6, cz1_6, cz2_6, cz3_6, cz4_6, cz1_7, cz2_7, cz3_7, cz4_7
+          integer :: p
+          x1 = xl(lane, 1, 1)
+          y1 = xl(lane, 2, 1)
+          x2 = xl(lane, 1, 2)
+          y2 = xl(lane, 2, 2)
+          x3 = xl(lane, 1, 3)
+          y3 = xl(lane, 2, 3)
+          x4 = xl(lane, 1, 4)
+          y4 = xl(lane, 2, 4)
+          gx_0_1 = -0.25_dp*x1 - 0.25_dp*x2 + 0.25_dp*x3 + 0.25_dp*x4
+          gx_1_0 = -0.25_dp*x1 - 0.25_dp*x4 + 0.25_dp*x2 + 0.25_dp*x3
+          gx_1_1 = -0.25_dp*x2 - 0.25_dp*x4 + 0.25_dp*x1 + 0.25_dp*x3
+          gy_0_1 = -0.25_dp*y1 - 0.25_dp*y2 + 0.25_dp*y3 + 0.25_dp*y4
+          gy_1_0 = -0.25_dp*y1 - 0.25_dp*y4 + 0.25_dp*y2 + 0.25_dp*y3
+          gy_1_1 = -0.25_dp*y2 - 0.25_dp*y4 + 0.25_dp*y1 + 0.25_dp*y3
+          e0 = gx_1_0*gx_1_0
+          e1 = gx_0_1*gx_0_1
+          e2 = gy_1_0*gy_1_0
+          e3 = gy_0_1*gy_0_1
+          e4 = gx_1_0*gy_1_0
+          e5 = gx_0_1*gy_0_1
+          A_0_0 = 0.0_dp
+          A_0_2 = 0.0_dp
+          A_0_3 = 0.0_dp
+          A_0_4 = 0.0_dp
+          A_1_1 = 0.0_dp
+          A_1_2 = 0.0_dp
+          A_1_3 = 0.0_dp
+          A_1_4 = 0.0_dp
+          A_2_0 = 0.0_dp
+          A_2_2 = 0.0_dp
+          A_2_3 = 0.0_dp
+          A_2_4 = 0.0_dp
+          A_3_1 = 0.0_dp
+          A_3_2 = 0.0_dp
+          A_3_3 = 0.0_dp
+          A_3_4 = 0.0_dp
+          A_4_0 = 0.0_dp
+          A_4_2 = 0.0_dp
+          A_4_3 = 0.0_dp
+          A_4_4 = 0.0_dp
+          A_5_1 = 0.0_dp
+          A_5_2 = 0.0_dp
+          A_5_3 = 0.0_dp
+          A_5_4 = 0.0_dp
+          A_6_0 = 0.0_dp
+          A_6_2 = 0.0_dp
+          A_6_3 = 0.0_dp
+          A_6_4 = 0.0_dp
+          A_7_1 = 0.0_dp
+          A_7_2 = 0.0_dp
+          A_7_3 = 0.0_dp
+          A_7_4 = 0.0_dp
+          H_0_0 = 0.0_dp
+          H_0_1 = 0.0_dp
+          H_0_3 = 0.0_dp
+          H_0_4 = 0.0_dp
+          H_1_1 = 0.0_dp
+          H_1_3 = 0.0_dp
+          H_1_4 = 0.0_dp
+          H_2_2 = 0.0_dp
+          H_2_3 = 0.0_dp
+          H_2_4 = 0.0_dp
+          H_3_3 = 0.0_dp
+          H_3_4 = 0.0_dp
+          H_4_4 = 0.0_dp
+          do p = 1, 4   ! gauss-2x2: loop over the 4 points
+            block
+              real(dp) :: c0, c1, c2, c3, c4, c5, c6, c7, eta, w, xi, J00, J01, J10, J11, detJ, idet, Ji00, Ji01
+              real(dp) :: Ji10, Ji11, dNdx1, dNdy1, dNdx2, dNdy2, dNdx3, dNdy3, dNdx4, dNdy4, sc0, T1, T2, T3
+              real(dp) :: T4, T5, T6, s7, s8, s9, T10, T11, T12, T13, T14, T15, q0, q1, q2, q3, q4, q5, q6, q7
+              c0 = KS0_c0(p)
+              c1 = KS0_c1(p)
+              c2 = KS0_c2(p)
+              c3 = KS0_c3(p)
+              c4 = KS0_c4(p)
+              c5 = KS0_c5(p)
+              c6 = KS0_c6(p)
+              c7 = KS0_c7(p)
+              eta = KS0_eta(p)
+              w = KS0_w(p)
+              xi = KS0_xi(p)
+              J00 = gx_1_0 + eta*gx_1_1
+              J01 = gy_1_0 + eta*gy_1_1
+              J10 = gx_0_1 + gx_1_1*xi
+              J11 = gy_0_1 + gy_1_1*xi
+              detJ = J00*J11 - J01*J10
+              idet = 1.0_dp/detJ
+              Ji00 = J11*idet
+              Ji01 = -J01*idet
+              Ji10 = -J10*idet
+              Ji11 = J00*idet
+              dNdx1 = Ji00*c0 + Ji01*c1
+              dNdy1 = Ji10*c0 + Ji11*c1
+              dNdx2 = Ji00*c2 + Ji01*c3
+              dNdy2 = Ji10*c2 + Ji11*c3
+              dNdx3 = Ji00*c4 + Ji01*c5
+              dNdy3 = Ji10*c4 + Ji11*c5
+              dNdx4 = Ji00*c6 + Ji01*c7
+              dNdy4 = Ji10*c6 + Ji11*c7
+              sc0 = detJ*t*w
+              T1 = e0*eta*sc0
+              T2 = e2*eta*sc0
+              T3 = e4*eta*sc0
+              T4 = e1*sc0*xi
+              T5 = e3*sc0*xi
+              T6 = e5*sc0*xi
+              s7 = m0*sc0
+              s8 = m1*sc0
+              s9 = m2*sc0
+              T10 = e0*eta*s7 + e2*eta*s8
+              T11 = e0*eta*s8 + e2*eta*s7
+              T12 = e4*eta*s9
+              T13 = e1*s7*xi + e3*s8*xi
+              T14 = e1*s8*xi + e3*s7*xi
+              T15 = e5*s9*xi
+              q0 = dNdx1*sc0
+              q1 = dNdy1*sc0
+              q2 = dNdx2*sc0
+              q3 = dNdy2*sc0
+              q4 = dNdx3*sc0
+              q5 = dNdy3*sc0
+              q6 = dNdx4*sc0
+              q7 = dNdy4*sc0
+              A_0_0 = A_0_0 + (q0)
+              A_0_2 = A_0_2 + (q1)
+              A_0_3 = A_0_3 + (T1*dNdx1 + T3*dNdy1)
+              A_0_4 = A_0_4 + (T4*dNdx1 + T6*dNdy1)
+              A_1_1 = A_1_1 + (q1)
+              A_1_2 = A_1_2 + (q0)
+              A_1_3 = A_1_3 + (T2*dNdy1 + T3*dNdx1)
+              A_1_4 = A_1_4 + (T5*dNdy1 + T6*dNdx1)
+              A_2_0 = A_2_0 + (q2)
+              A_2_2 = A_2_2 + (q3)
+              A_2_3 = A_2_3 + (T1*dNdx2 + T3*dNdy2)
+              A_2_4 = A_2_4 + (T4*dNdx2 + T6*dNdy2)
+              A_3_1 = A_3_1 + (q3)
+              A_3_2 = A_3_2 + (q2)
+              A_3_3 = A_3_3 + (T2*dNdy2 + T3*dNdx2)
+              A_3_4 = A_3_4 + (T5*dNdy2 + T6*dNdx2)
+              A_4_0 = A_4_0 + (q4)
+              A_4_2 = A_4_2 + (q5)
+              A_4_3 = A_4_3 + (T1*dNdx3 + T3*dNdy3)
+              A_4_4 = A_4_4 + (T4*dNdx3 + T6*dNdy3)
+              A_5_1 = A_5_1 + (q5)
+              A_5_2 = A_5_2 + (q4)
+              A_5_3 = A_5_3 + (T2*dNdy3 + T3*dNdx3)
+              A_5_4 = A_5_4 + (T5*dNdy3 + T6*dNdx3)
+              A_6_0 = A_6_0 + (q6)
+              A_6_2 = A_6_2 + (q7)
+              A_6_3 = A_6_3 + (T1*dNdx4 + T3*dNdy4)
+              A_6_4 = A_6_4 + (T4*dNdx4 + T6*dNdy4)
+              A_7_1 = A_7_1 + (q7)
+              A_7_2 = A_7_2 + (q6)
+              A_7_3 = A_7_3 + (T2*dNdy4 + T3*dNdx4)
+              A_7_4 = A_7_4 + (T5*dNdy4 + T6*dNdx4)
+              H_0_0 = H_0_0 + (s7)
+              H_0_1 = H_0_1 + (s8)
+              H_0_3 = H_0_3 + (T10)
+              H_0_4 = H_0_4 + (T13)
+              H_1_1 = H_1_1 + (s7)
+              H_1_3 = H_1_3 + (T11)
+              H_1_4 = H_1_4 + (T14)
+              H_2_2 = H_2_2 + (s9)
+              H_2_3 = H_2_3 + (T12)
+              H_2_4 = H_2_4 + (T15)
+              H_3_3 = H_3_3 + (T10*e0*eta + T11*e2*eta + T12*e4*eta)
+              H_3_4 = H_3_4 + (T13*e0*eta + T14*e2*eta + T15*e4*eta)
+              H_4_4 = H_4_4 + (T13*e1*xi + T14*e3*xi + T15*e5*xi)
+            end block
+          end do
+          ! static condensation of the internal unknowns
+          cid0 = 1.0_dp/H_0_0
+          cL1_0 = H_0_1*cid0
+          cL3_0 = H_0_3*cid0
+          cL4_0 = H_0_4*cid0
+          cd1 = H_1_1 - H_0_0*cL1_0*cL1_0
+          cid1 = 1.0_dp/cd1
+          cL3_1 = cid1*(H_1_3 - H_0_0*cL1_0*cL3_0)
+          cL4_1 = cid1*(H_1_4 - H_0_0*cL1_0*cL4_0)
+          cid2 = 1.0_dp/H_2_2
+          cL3_2 = H_2_3*cid2
+          cL4_2 = H_2_4*cid2
+          cd3 = H_3_3 - H_0_0*cL3_0*cL3_0 - H_2_2*cL3_2*cL3_2 - cd1*cL3_1*cL3_1
+          cid3 = 1.0_dp/cd3
+          cL4_3 = cid3*(H_3_4 - H_0_0*cL3_0*cL4_0 - H_2_2*cL3_2*cL4_2 - cL3_1*cL4_1*cd1)
+          cd4 = H_4_4 - H_0_0*cL4_0*cL4_0 - H_2_2*cL4_2*cL4_2 - cd1*cL4_1*cL4_1 - cd3*cL4_3*cL4_3
+          cid4 = 1.0_dp/cd4
+          cy1_0 = -A_0_0*cL1_0
+          cy3_0 = A_0_3 - A_0_0*cL3_0 - A_0_2*cL3_2 - cL3_1*cy1_0
+          cy4_0 = A_0_4 - A_0_0*cL4_0 - A_0_2*cL4_2 - cL4_1*cy1_0 - cL4_3*cy3_0
+          cy3_1 = A_1_3 - A_1_1*cL3_1 - A_1_2*cL3_2
+          cy4_1 = A_1_4 - A_1_1*cL4_1 - A_1_2*cL4_2 - cL4_3*cy3_1
+          cy1_2 = -A_2_0*cL1_0
+          cy3_2 = A_2_3 - A_2_0*cL3_0 - A_2_2*cL3_2 - cL3_1*cy1_2
+          cy4_2 = A_2_4 - A_2_0*cL4_0 - A_2_2*cL4_2 - cL4_1*cy1_2 - cL4_3*cy3_2
+          cy3_3 = A_3_3 - A_3_1*cL3_1 - A_3_2*cL3_2
+          cy4_3 = A_3_4 - A_3_1*cL4_1 - A_3_2*cL4_2 - cL4_3*cy3_3
+          cy1_4 = -A_4_0*cL1_0
+          cy3_4 = A_4_3 - A_4_0*cL3_0 - A_4_2*cL3_2 - cL3_1*cy1_4
+          cy4_4 = A_4_4 - A_4_0*cL4_0 - A_4_2*cL4_2 - cL4_1*cy1_4 - cL4_3*cy3_4
+          cy3_5 = A_5_3 - A_5_1*cL3_1 - A_5_2*cL3_2
+          cy4_5 = A_5_4 - A_5_1*cL4_1 - A_5_2*cL4_2 - cL4_3*cy3_5
+          cy1_6 = -A_6_0*cL1_0
+          cy3_6 = A_6_3 - A_6_0*cL3_0 - A_6_2*cL3_2 - cL3_1*cy1_6
+          cy4_6 = A_6_4 - A_6_0*cL4_0 - A_6_2*cL4_2 - cL4_1*cy1_6 - cL4_3*cy3_6
+          cy3_7 = A_7_3 - A_7_1*cL3_1 - A_7_2*cL3_2
+          cy4_7 = A_7_4 - A_7_1*cL4_1 - A_7_2*cL4_2 - cL4_3*cy3_7
+          cz0_0 = A_0_0*cid0
+          cz1_0 = cid1*cy1_0
+          cz2_0 = A_0_2*cid2
+          cz3_0 = cid3*cy3_0
+          cz4_0 = cid4*cy4_0
+          cz1_1 = A_1_1*cid1
+          cz2_1 = A_1_2*cid2
+          cz3_1 = cid3*cy3_1
+          cz4_1 = cid4*cy4_1
+          cz0_2 = A_2_0*cid0
+          cz1_2 = cid1*cy1_2
+          cz2_2 = A_2_2*cid2
+          cz3_2 = cid3*cy3_2
+          cz4_2 = cid4*cy4_2
+          cz1_3 = A_3_1*cid1
+          cz2_3 = A_3_2*cid2
+          cz3_3 = cid3*cy3_3
+          cz4_3 = cid4*cy4_3
+          cz0_4 = A_4_0*cid0
+          cz1_4 = cid1*cy1_4
+          cz2_4 = A_4_2*cid2
+          cz3_4 = cid3*cy3_4
+          cz4_4 = cid4*cy4_4
+          cz1_5 = A_5_1*cid1
+          cz2_5 = A_5_2*cid2
+          cz3_5 = cid3*cy3_5
+          cz4_5 = cid4*cy4_5
+          cz0_6 = A_6_0*cid0
+          cz1_6 = cid1*cy1_6
+          cz2_6 = A_6_2*cid2
+          cz3_6 = cid3*cy3_6
+          cz4_6 = cid4*cy4_6
+          cz1_7 = A_7_1*cid1
+          cz2_7 = A_7_2*cid2
+          cz3_7 = cid3*cy3_7
+          cz4_7 = cid4*cy4_7
+          kl(lane, 1, 1) = -A_0_0*cz0_0 - A_0_2*cz2_0 - cy1_0*cz1_0 - cy3_0*cz3_0 - cy4_0*cz4_0
+          kl(lane, 1, 2) = -A_1_1*cz1_0 - A_1_2*cz2_0 - cy3_1*cz3_0 - cy4_1*cz4_0
+          kl(lane, 1, 3) = -A_2_0*cz0_0 - A_2_2*cz2_0 - cy1_2*cz1_0 - cy3_2*cz3_0 - cy4_2*cz4_0
+          kl(lane, 1, 4) = -A_3_1*cz1_0 - A_3_2*cz2_0 - cy3_3*cz3_0 - cy4_3*cz4_0
+          kl(lane, 1, 5) = -A_4_0*cz0_0 - A_4_2*cz2_0 - cy1_4*cz1_0 - cy3_4*cz3_0 - cy4_4*cz4_0
+          kl(lane, 1, 6) = -A_5_1*cz1_0 - A_5_2*cz2_0 - cy3_5*cz3_0 - cy4_5*cz4_0
+          kl(lane, 1, 7) = -A_6_0*cz0_0 - A_6_2*cz2_0 - cy1_6*cz1_0 - cy3_6*cz3_0 - cy4_6*cz4_0
+          kl(lane, 1, 8) = -A_7_1*cz1_0 - A_7_2*cz2_0 - cy3_7*cz3_0 - cy4_7*cz4_0
+          kl(lane, 2, 1) = -A_1_1*cz1_0 - A_1_2*cz2_0 - cy3_1*cz3_0 - cy4_1*cz4_0
+          kl(lane, 2, 2) = -A_1_1*cz1_1 - A_1_2*cz2_1 - cy3_1*cz3_1 - cy4_1*cz4_1
+          kl(lane, 2, 3) = -A_2_2*cz2_1 - cy1_2*cz1_1 - cy3_2*cz3_1 - cy4_2*cz4_1
+          kl(lane, 2, 4) = -A_3_1*cz1_1 - A_3_2*cz2_1 - cy3_3*cz3_1 - cy4_3*cz4_1
+          kl(lane, 2, 5) = -A_4_2*cz2_1 - cy1_4*cz1_1 - cy3_4*cz3_1 - cy4_4*cz4_1
+          kl(lane, 2, 6) = -A_5_1*cz1_1 - A_5_2*cz2_1 - cy3_5*cz3_1 - cy4_5*cz4_1
+          kl(lane, 2, 7) = -A_6_2*cz2_1 - cy1_6*cz1_1 - cy3_6*cz3_1 - cy4_6*cz4_1
+          kl(lane, 2, 8) = -A_7_1*cz1_1 - A_7_2*cz2_1 - cy3_7*cz3_1 - cy4_7*cz4_1
+          kl(lane, 3, 1) = -A_2_0*cz0_0 - A_2_2*cz2_0 - cy1_2*cz1_0 - cy3_2*cz3_0 - cy4_2*cz4_0
+          kl(lane, 3, 2) = -A_2_2*cz2_1 - cy1_2*cz1_1 - cy3_2*cz3_1 - cy4_2*cz4_1
+          kl(lane, 3, 3) = -A_2_0*cz0_2 - A_2_2*cz2_2 - cy1_2*cz1_2 - cy3_2*cz3_2 - cy4_2*cz4_2
+          kl(lane, 3, 4) = -A_3_1*cz1_2 - A_3_2*cz2_2 - cy3_3*cz3_2 - cy4_3*cz4_2
+          kl(lane, 3, 5) = -A_4_0*cz0_2 - A_4_2*cz2_2 - cy1_4*cz1_2 - cy3_4*cz3_2 - cy4_4*cz4_2
+          kl(lane, 3, 6) = -A_5_1*cz1_2 - A_5_2*cz2_2 - cy3_5*cz3_2 - cy4_5*cz4_2
+          kl(lane, 3, 7) = -A_6_0*cz0_2 - A_6_2*cz2_2 - cy1_6*cz1_2 - cy3_6*cz3_2 - cy4_6*cz4_2
+          kl(lane, 3, 8) = -A_7_1*cz1_2 - A_7_2*cz2_2 - cy3_7*cz3_2 - cy4_7*cz4_2
+          kl(lane, 4, 1) = -A_3_1*cz1_0 - A_3_2*cz2_0 - cy3_3*cz3_0 - cy4_3*cz4_0
+          kl(lane, 4, 2) = -A_3_1*cz1_1 - A_3_2*cz2_1 - cy3_3*cz3_1 - cy4_3*cz4_1
+          kl(lane, 4, 3) = -A_3_1*cz1_2 - A_3_2*cz2_2 - cy3_3*cz3_2 - cy4_3*cz4_2
+          kl(lane, 4, 4) = -A_3_1*cz1_3 - A_3_2*cz2_3 - cy3_3*cz3_3 - cy4_3*cz4_3
+          kl(lane, 4, 5) = -A_4_2*cz2_3 - cy1_4*cz1_3 - cy3_4*cz3_3 - cy4_4*cz4_3
+          kl(lane, 4, 6) = -A_5_1*cz1_3 - A_5_2*cz2_3 - cy3_5*cz3_3 - cy4_5*cz4_3
+          kl(lane, 4, 7) = -A_6_2*cz2_3 - cy1_6*cz1_3 - cy3_6*cz3_3 - cy4_6*cz4_3
+          kl(lane, 4, 8) = -A_7_1*cz1_3 - A_7_2*cz2_3 - cy3_7*cz3_3 - cy4_7*cz4_3
+          kl(lane, 5, 1) = -A_4_0*cz0_0 - A_4_2*cz2_0 - cy1_4*cz1_0 - cy3_4*cz3_0 - cy4_4*cz4_0
+          kl(lane, 5, 2) = -A_4_2*cz2_1 - cy1_4*cz1_1 - cy3_4*cz3_1 - cy4_4*cz4_1
+          kl(lane, 5, 3) = -A_4_0*cz0_2 - A_4_2*cz2_2 - cy1_4*cz1_2 - cy3_4*cz3_2 - cy4_4*cz4_2
+          kl(lane, 5, 4) = -A_4_2*cz2_3 - cy1_4*cz1_3 - cy3_4*cz3_3 - cy4_4*cz4_3
+          kl(lane, 5, 5) = -A_4_0*cz0_4 - A_4_2*cz2_4 - cy1_4*cz1_4 - cy3_4*cz3_4 - cy4_4*cz4_4
+          kl(lane, 5, 6) = -A_5_1*cz1_4 - A_5_2*cz2_4 - cy3_5*cz3_4 - cy4_5*cz4_4
+          kl(lane, 5, 7) = -A_6_0*cz0_4 - A_6_2*cz2_4 - cy1_6*cz1_4 - cy3_6*cz3_4 - cy4_6*cz4_4
+          kl(lane, 5, 8) = -A_7_1*cz1_4 - A_7_2*cz2_4 - cy3_7*cz3_4 - cy4_7*cz4_4
+          kl(lane, 6, 1) = -A_5_1*cz1_0 - A_5_2*cz2_0 - cy3_5*cz3_0 - cy4_5*cz4_0
+          kl(lane, 6, 2) = -A_5_1*cz1_1 - A_5_2*cz2_1 - cy3_5*cz3_1 - cy4_5*cz4_1
+          kl(lane, 6, 3) = -A_5_1*cz1_2 - A_5_2*cz2_2 - cy3_5*cz3_2 - cy4_5*cz4_2
+          kl(lane, 6, 4) = -A_5_1*cz1_3 - A_5_2*cz2_3 - cy3_5*cz3_3 - cy4_5*cz4_3
+          kl(lane, 6, 5) = -A_5_1*cz1_4 - A_5_2*cz2_4 - cy3_5*cz3_4 - cy4_5*cz4_4
+          kl(lane, 6, 6) = -A_5_1*cz1_5 - A_5_2*cz2_5 - cy3_5*cz3_5 - cy4_5*cz4_5
+          kl(lane, 6, 7) = -A_6_2*cz2_5 - cy1_6*cz1_5 - cy3_6*cz3_5 - cy4_6*cz4_5
+          kl(lane, 6, 8) = -A_7_1*cz1_5 - A_7_2*cz2_5 - cy3_7*cz3_5 - cy4_7*cz4_5
+          kl(lane, 7, 1) = -A_6_0*cz0_0 - A_6_2*cz2_0 - cy1_6*cz1_0 - cy3_6*cz3_0 - cy4_6*cz4_0
+          kl(lane, 7, 2) = -A_6_2*cz2_1 - cy1_6*cz1_1 - cy3_6*cz3_1 - cy4_6*cz4_1
+          kl(lane, 7, 3) = -A_6_0*cz0_2 - A_6_2*cz2_2 - cy1_6*cz1_2 - cy3_6*cz3_2 - cy4_6*cz4_2
+          kl(lane, 7, 4) = -A_6_2*cz2_3 - cy1_6*cz1_3 - cy3_6*cz3_3 - cy4_6*cz4_3
+          kl(lane, 7, 5) = -A_6_0*cz0_4 - A_6_2*cz2_4 - cy1_6*cz1_4 - cy3_6*cz3_4 - cy4_6*cz4_4
+          kl(lane, 7, 6) = -A_6_2*cz2_5 - cy1_6*cz1_5 - cy3_6*cz3_5 - cy4_6*cz4_5
+          kl(lane, 7, 7) = -A_6_0*cz0_6 - A_6_2*cz2_6 - cy1_6*cz1_6 - cy3_6*cz3_6 - cy4_6*cz4_6
+          kl(lane, 7, 8) = -A_7_1*cz1_6 - A_7_2*cz2_6 - cy3_7*cz3_6 - cy4_7*cz4_6
+          kl(lane, 8, 1) = -A_7_1*cz1_0 - A_7_2*cz2_0 - cy3_7*cz3_0 - cy4_7*cz4_0
+          kl(lane, 8, 2) = -A_7_1*cz1_1 - A_7_2*cz2_1 - cy3_7*cz3_1 - cy4_7*cz4_1
+          kl(lane, 8, 3) = -A_7_1*cz1_2 - A_7_2*cz2_2 - cy3_7*cz3_2 - cy4_7*cz4_2
+          kl(lane, 8, 4) = -A_7_1*cz1_3 - A_7_2*cz2_3 - cy3_7*cz3_3 - cy4_7*cz4_3
+          kl(lane, 8, 5) = -A_7_1*cz1_4 - A_7_2*cz2_4 - cy3_7*cz3_4 - cy4_7*cz4_4
+          kl(lane, 8, 6) = -A_7_1*cz1_5 - A_7_2*cz2_5 - cy3_7*cz3_5 - cy4_7*cz4_5
+          kl(lane, 8, 7) = -A_7_1*cz1_6 - A_7_2*cz2_6 - cy3_7*cz3_6 - cy4_7*cz4_6
+          kl(lane, 8, 8) = -A_7_1*cz1_7 - A_7_2*cz2_7 - cy3_7*cz3_7 - cy4_7*cz4_7
+        end block
+      end do
+      do lane = 1, mlan
+        K(:, :, ib + lane - 1) = kl(lane, :, :)
+      end do
     end do
   end subroutine q4_hybrid5_plane_stress_stiffness_batch
 

@@ -27,6 +27,8 @@
 !              derive kernel Q8 --variant selective --state plane-stress --lang fortran
 !
 ! Fortran 2008.  Compile e.g. with: gfortran -O3 -march=native -c q8_selective_plane_stress.f90
+! (on x86 add -mprefer-vector-width=512 for the batch routine's lane loop, and
+! -fno-tree-slp-vectorize: same speed, much shorter compile times).
 ! Every procedure is bind(C) (callable from C or Python through ctypes/cffi); the link
 ! names end in _f so they never clash with the C kernels of the same element.
 ! Array layout: Fortran column-major xy(2, 8, n) is the same memory as C xy[n][8][2];
@@ -1118,9 +1120,1091 @@ contains
     real(dp), intent(in) :: xy(2, 8, n)
     real(dp), value, intent(in) :: E, nu, t
     real(dp), intent(out) :: K(16, 16, n)
-    integer(c_long) :: iel
-    do iel = 1, n
-      call q8_selective_plane_stress_stiffness(xy(:, :, iel), E, nu, t, K(:, :, iel))
+    ! blocks of 8 elements: copied into lane-first scratch (xl(lane, :, :)), the body
+    ! runs in a loop over the lanes that gfortran vectorises (one SIMD lane per element),
+    ! then K is copied back; a short last block repeats its first element in the spare lanes
+    integer, parameter :: lanes = 8
+    real(dp) :: xl(lanes, 2, 8), kl(lanes, 16, 16)
+    integer(c_long) :: ib, iel
+    integer :: lane, mlan
+    real(dp) :: m0, m1, m2, m3
+    m0 = 2.0_dp*E/(3.0_dp + 3.0_dp*nu)
+    m1 = -E/(3.0_dp + 3.0_dp*nu)
+    m2 = E/(2.0_dp + 2.0_dp*nu)
+    m3 = (-E - 2.0_dp*E*nu)/(-3.0_dp + 3.0_dp*nu*nu)
+    do ib = 1, n, lanes
+      mlan = int(min(int(lanes, c_long), n - ib + 1))
+      do lane = 1, lanes
+        iel = ib + merge(lane - 1, 0, lane <= mlan)
+        xl(lane, :, :) = xy(:, :, iel)
+      end do
+      do lane = 1, lanes
+        block
+          ! c0 = eta^2 at the points of gauss-3x3
+          real(dp), parameter :: KS0_c0(9) = [0.6_dp, 0.6_dp, 0.6_dp, 0.0_dp, 0.0_dp, 0.0_dp, &
+              0.6_dp, 0.6_dp, 0.6_dp]
+          ! c1 = 2*xi at the points of gauss-3x3
+          real(dp), parameter :: KS0_c1(9) = [-1.5491933384829668_dp, 0.0_dp, &
+              1.5491933384829668_dp, -1.5491933384829668_dp, 0.0_dp, 1.5491933384829668_dp, &
+              -1.5491933384829668_dp, 0.0_dp, 1.5491933384829668_dp]
+          ! c2 = 2*eta*xi at the points of gauss-3x3
+          real(dp), parameter :: KS0_c2(9) = [1.2_dp, 0.0_dp, -1.2_dp, 0.0_dp, 0.0_dp, 0.0_dp, &
+              -1.2_dp, 0.0_dp, 1.2_dp]
+          ! c3 = 2*eta at the points of gauss-3x3
+          real(dp), parameter :: KS0_c3(9) = [-1.5491933384829668_dp, -1.5491933384829668_dp, &
+              -1.5491933384829668_dp, 0.0_dp, 0.0_dp, 0.0_dp, 1.5491933384829668_dp, &
+              1.5491933384829668_dp, 1.5491933384829668_dp]
+          ! c4 = xi^2 at the points of gauss-3x3
+          real(dp), parameter :: KS0_c4(9) = [0.6_dp, 0.0_dp, 0.6_dp, 0.6_dp, 0.0_dp, 0.6_dp, &
+              0.6_dp, 0.0_dp, 0.6_dp]
+          ! c5 = -eta^2/4 - eta*xi/2 + eta/4 + xi/2 at the points of gauss-3x3
+          real(dp), parameter :: KS0_c5(9) = [-1.0309475019311125_dp, -0.3436491673103708_dp, &
+              0.3436491673103708_dp, -0.3872983346207417_dp, 0.0_dp, 0.3872983346207417_dp, &
+              -0.04364916731037084_dp, 0.04364916731037084_dp, 0.13094750193111254_dp]
+          ! c6 = -eta*xi/2 + eta/2 - xi^2/4 + xi/4 at the points of gauss-3x3
+          real(dp), parameter :: KS0_c6(9) = [-1.0309475019311125_dp, -0.3872983346207417_dp, &
+              -0.04364916731037084_dp, -0.3436491673103708_dp, 0.0_dp, 0.04364916731037084_dp, &
+              0.3436491673103708_dp, 0.3872983346207417_dp, 0.13094750193111254_dp]
+          ! c7 = eta^2/4 - eta*xi/2 - eta/4 + xi/2 at the points of gauss-3x3
+          real(dp), parameter :: KS0_c7(9) = [-0.3436491673103708_dp, 0.3436491673103708_dp, &
+              1.0309475019311125_dp, -0.3872983346207417_dp, 0.0_dp, 0.3872983346207417_dp, &
+              -0.13094750193111254_dp, -0.04364916731037084_dp, 0.04364916731037084_dp]
+          ! c8 = eta*xi/2 + eta/2 - xi^2/4 - xi/4 at the points of gauss-3x3
+          real(dp), parameter :: KS0_c8(9) = [-0.04364916731037084_dp, -0.3872983346207417_dp, &
+              -1.0309475019311125_dp, 0.04364916731037084_dp, 0.0_dp, -0.3436491673103708_dp, &
+              0.13094750193111254_dp, 0.3872983346207417_dp, 0.3436491673103708_dp]
+          ! c9 = eta^2/4 + eta*xi/2 + eta/4 + xi/2 at the points of gauss-3x3
+          real(dp), parameter :: KS0_c9(9) = [-0.13094750193111254_dp, -0.04364916731037084_dp, &
+              0.04364916731037084_dp, -0.3872983346207417_dp, 0.0_dp, 0.3872983346207417_dp, &
+              -0.3436491673103708_dp, 0.3436491673103708_dp, 1.0309475019311125_dp]
+          ! c10 = eta*xi/2 + eta/2 + xi^2/4 + xi/4 at the points of gauss-3x3
+          real(dp), parameter :: KS0_c10(9) = [-0.13094750193111254_dp, -0.3872983346207417_dp, &
+              -0.3436491673103708_dp, -0.04364916731037084_dp, 0.0_dp, 0.3436491673103708_dp, &
+              0.04364916731037084_dp, 0.3872983346207417_dp, 1.0309475019311125_dp]
+          ! c11 = -eta^2/4 + eta*xi/2 - eta/4 + xi/2 at the points of gauss-3x3
+          real(dp), parameter :: KS0_c11(9) = [-0.04364916731037084_dp, 0.04364916731037084_dp, &
+              0.13094750193111254_dp, -0.3872983346207417_dp, 0.0_dp, 0.3872983346207417_dp, &
+              -1.0309475019311125_dp, -0.3436491673103708_dp, 0.3436491673103708_dp]
+          ! c12 = -eta*xi/2 + eta/2 + xi^2/4 - xi/4 at the points of gauss-3x3
+          real(dp), parameter :: KS0_c12(9) = [-0.3436491673103708_dp, -0.3872983346207417_dp, &
+              -0.13094750193111254_dp, 0.3436491673103708_dp, 0.0_dp, -0.04364916731037084_dp, &
+              1.0309475019311125_dp, 0.3872983346207417_dp, 0.04364916731037084_dp]
+          ! c13 = eta*xi - xi at the points of gauss-3x3
+          real(dp), parameter :: KS0_c13(9) = [1.3745966692414833_dp, 0.0_dp, &
+              -1.3745966692414833_dp, 0.7745966692414834_dp, 0.0_dp, -0.7745966692414834_dp, &
+              0.17459666924148337_dp, 0.0_dp, -0.17459666924148337_dp]
+          ! c14 = xi^2/2 - 1/2 at the points of gauss-3x3
+          real(dp), parameter :: KS0_c14(9) = [-0.2_dp, -0.5_dp, -0.2_dp, -0.2_dp, -0.5_dp, &
+              -0.2_dp, -0.2_dp, -0.5_dp, -0.2_dp]
+          ! c15 = 1/2 - eta^2/2 at the points of gauss-3x3
+          real(dp), parameter :: KS0_c15(9) = [0.2_dp, 0.2_dp, 0.2_dp, 0.5_dp, 0.5_dp, 0.5_dp, &
+              0.2_dp, 0.2_dp, 0.2_dp]
+          ! c16 = -eta*xi - eta at the points of gauss-3x3
+          real(dp), parameter :: KS0_c16(9) = [0.17459666924148337_dp, 0.7745966692414834_dp, &
+              1.3745966692414833_dp, 0.0_dp, 0.0_dp, 0.0_dp, -0.17459666924148337_dp, &
+              -0.7745966692414834_dp, -1.3745966692414833_dp]
+          ! c17 = -eta*xi - xi at the points of gauss-3x3
+          real(dp), parameter :: KS0_c17(9) = [0.17459666924148337_dp, 0.0_dp, &
+              -0.17459666924148337_dp, 0.7745966692414834_dp, 0.0_dp, -0.7745966692414834_dp, &
+              1.3745966692414833_dp, 0.0_dp, -1.3745966692414833_dp]
+          ! c18 = 1/2 - xi^2/2 at the points of gauss-3x3
+          real(dp), parameter :: KS0_c18(9) = [0.2_dp, 0.5_dp, 0.2_dp, 0.2_dp, 0.5_dp, 0.2_dp, &
+              0.2_dp, 0.5_dp, 0.2_dp]
+          ! c19 = eta^2/2 - 1/2 at the points of gauss-3x3
+          real(dp), parameter :: KS0_c19(9) = [-0.2_dp, -0.2_dp, -0.2_dp, -0.5_dp, -0.5_dp, &
+              -0.5_dp, -0.2_dp, -0.2_dp, -0.2_dp]
+          ! c20 = eta*xi - eta at the points of gauss-3x3
+          real(dp), parameter :: KS0_c20(9) = [1.3745966692414833_dp, 0.7745966692414834_dp, &
+              0.17459666924148337_dp, 0.0_dp, 0.0_dp, 0.0_dp, -1.3745966692414833_dp, &
+              -0.7745966692414834_dp, -0.17459666924148337_dp]
+          ! eta = eta at the points of gauss-3x3
+          real(dp), parameter :: KS0_eta(9) = [-0.7745966692414834_dp, -0.7745966692414834_dp, &
+              -0.7745966692414834_dp, 0.0_dp, 0.0_dp, 0.0_dp, 0.7745966692414834_dp, &
+              0.7745966692414834_dp, 0.7745966692414834_dp]
+          ! w = the point weight at the points of gauss-3x3
+          real(dp), parameter :: KS0_w(9) = [0.30864197530864196_dp, 0.49382716049382713_dp, &
+              0.30864197530864196_dp, 0.49382716049382713_dp, 0.7901234567901234_dp, &
+              0.49382716049382713_dp, 0.30864197530864196_dp, 0.49382716049382713_dp, &
+              0.30864197530864196_dp]
+          ! xi = xi at the points of gauss-3x3
+          real(dp), parameter :: KS0_xi(9) = [-0.7745966692414834_dp, 0.0_dp, &
+              0.7745966692414834_dp, -0.7745966692414834_dp, 0.0_dp, 0.7745966692414834_dp, &
+              -0.7745966692414834_dp, 0.0_dp, 0.7745966692414834_dp]
+          ! c0 = eta^2 at the points of gauss-2x2
+          real(dp), parameter :: KS1_c0(4) = [0.3333333333333333_dp, 0.3333333333333333_dp, &
+              0.3333333333333333_dp, 0.3333333333333333_dp]
+          ! c1 = 2*xi at the points of gauss-2x2
+          real(dp), parameter :: KS1_c1(4) = [-1.1547005383792515_dp, 1.1547005383792515_dp, &
+              -1.1547005383792515_dp, 1.1547005383792515_dp]
+          ! c2 = 2*eta*xi at the points of gauss-2x2
+          real(dp), parameter :: KS1_c2(4) = [0.6666666666666666_dp, -0.6666666666666666_dp, &
+              -0.6666666666666666_dp, 0.6666666666666666_dp]
+          ! c3 = 2*eta at the points of gauss-2x2
+          real(dp), parameter :: KS1_c3(4) = [-1.1547005383792515_dp, -1.1547005383792515_dp, &
+              1.1547005383792515_dp, 1.1547005383792515_dp]
+          ! c4 = xi^2 at the points of gauss-2x2
+          real(dp), parameter :: KS1_c4(4) = [0.3333333333333333_dp, 0.3333333333333333_dp, &
+              0.3333333333333333_dp, 0.3333333333333333_dp]
+          ! c5 = -eta^2/4 - eta*xi/2 + eta/4 + xi/2 at the points of gauss-2x2
+          real(dp), parameter :: KS1_c5(4) = [-0.6830127018922193_dp, 0.22767090063073978_dp, &
+              -0.06100423396407311_dp, 0.18301270189221933_dp]
+          ! c6 = -eta*xi/2 + eta/2 - xi^2/4 + xi/4 at the points of gauss-2x2
+          real(dp), parameter :: KS1_c6(4) = [-0.6830127018922193_dp, -0.06100423396407311_dp, &
+              0.22767090063073978_dp, 0.18301270189221933_dp]
+          ! c7 = eta^2/4 - eta*xi/2 - eta/4 + xi/2 at the points of gauss-2x2
+          real(dp), parameter :: KS1_c7(4) = [-0.22767090063073978_dp, 0.6830127018922193_dp, &
+              -0.18301270189221933_dp, 0.06100423396407311_dp]
+          ! c8 = eta*xi/2 + eta/2 - xi^2/4 - xi/4 at the points of gauss-2x2
+          real(dp), parameter :: KS1_c8(4) = [-0.06100423396407311_dp, -0.6830127018922193_dp, &
+              0.18301270189221933_dp, 0.22767090063073978_dp]
+          ! c9 = eta^2/4 + eta*xi/2 + eta/4 + xi/2 at the points of gauss-2x2
+          real(dp), parameter :: KS1_c9(4) = [-0.18301270189221933_dp, 0.06100423396407311_dp, &
+              -0.22767090063073978_dp, 0.6830127018922193_dp]
+          ! c10 = eta*xi/2 + eta/2 + xi^2/4 + xi/4 at the points of gauss-2x2
+          real(dp), parameter :: KS1_c10(4) = [-0.18301270189221933_dp, -0.22767090063073978_dp, &
+              0.06100423396407311_dp, 0.6830127018922193_dp]
+          ! c11 = -eta^2/4 + eta*xi/2 - eta/4 + xi/2 at the points of gauss-2x2
+          real(dp), parameter :: KS1_c11(4) = [-0.06100423396407311_dp, 0.18301270189221933_dp, &
+              -0.6830127018922193_dp, 0.22767090063073978_dp]
+          ! c12 = -eta*xi/2 + eta/2 + xi^2/4 - xi/4 at the points of gauss-2x2
+          real(dp), parameter :: KS1_c12(4) = [-0.22767090063073978_dp, -0.18301270189221933_dp, &
+              0.6830127018922193_dp, 0.06100423396407311_dp]
+          ! c13 = eta*xi - xi at the points of gauss-2x2
+          real(dp), parameter :: KS1_c13(4) = [0.9106836025229591_dp, -0.9106836025229591_dp, &
+              0.24401693585629244_dp, -0.24401693585629244_dp]
+          ! c14 = xi^2/2 - 1/2 at the points of gauss-2x2
+          real(dp), parameter :: KS1_c14(4) = [-0.3333333333333333_dp, -0.3333333333333333_dp, &
+              -0.3333333333333333_dp, -0.3333333333333333_dp]
+          ! c15 = 1/2 - eta^2/2 at the points of gauss-2x2
+          real(dp), parameter :: KS1_c15(4) = [0.3333333333333333_dp, 0.3333333333333333_dp, &
+              0.3333333333333333_dp, 0.3333333333333333_dp]
+          ! c16 = -eta*xi - eta at the points of gauss-2x2
+          real(dp), parameter :: KS1_c16(4) = [0.24401693585629244_dp, 0.9106836025229591_dp, &
+              -0.24401693585629244_dp, -0.9106836025229591_dp]
+          ! c17 = -eta*xi - xi at the points of gauss-2x2
+          real(dp), parameter :: KS1_c17(4) = [0.24401693585629244_dp, -0.24401693585629244_dp, &
+              0.9106836025229591_dp, -0.9106836025229591_dp]
+          ! c18 = 1/2 - xi^2/2 at the points of gauss-2x2
+          real(dp), parameter :: KS1_c18(4) = [0.3333333333333333_dp, 0.3333333333333333_dp, &
+              0.3333333333333333_dp, 0.3333333333333333_dp]
+          ! c19 = eta^2/2 - 1/2 at the points of gauss-2x2
+          real(dp), parameter :: KS1_c19(4) = [-0.3333333333333333_dp, -0.3333333333333333_dp, &
+              -0.3333333333333333_dp, -0.3333333333333333_dp]
+          ! c20 = eta*xi - eta at the points of gauss-2x2
+          real(dp), parameter :: KS1_c20(4) = [0.9106836025229591_dp, 0.24401693585629244_dp, &
+              -0.9106836025229591_dp, -0.24401693585629244_dp]
+          ! eta = eta at the points of gauss-2x2
+          real(dp), parameter :: KS1_eta(4) = [-0.5773502691896257_dp, -0.5773502691896257_dp, &
+              0.5773502691896257_dp, 0.5773502691896257_dp]
+          ! w = the point weight at the points of gauss-2x2
+          real(dp), parameter :: KS1_w(4) = [1.0_dp, 1.0_dp, 1.0_dp, 1.0_dp]
+          ! xi = xi at the points of gauss-2x2
+          real(dp), parameter :: KS1_xi(4) = [-0.5773502691896257_dp, 0.5773502691896257_dp, &
+              -0.5773502691896257_dp, 0.5773502691896257_dp]
+          real(dp) :: x1, y1, x2, y2, x3, y3, x4, y4, x5, y5, x6, y6, x7, y7, x8, y8, gx_0_1, gx_0_2, gx_1_0
+          real(dp) :: gx_1_1, gx_1_2, gx_2_0, gx_2_1, gy_0_1, gy_0_2, gy_1_0, gy_1_1, gy_1_2, gy_2_0, gy_2_1
+          real(dp) :: K_0_0, K_0_1, K_0_2, K_0_3, K_0_4, K_0_5, K_0_6, K_0_7, K_0_8, K_0_9, K_0_10, K_0_11
+          real(dp) :: K_0_12, K_0_13, K_0_14, K_0_15, K_1_1, K_1_2, K_1_3, K_1_4, K_1_5, K_1_6, K_1_7, K_1_8
+          real(dp) :: K_1_9, K_1_10, K_1_11, K_1_12, K_1_13, K_1_14, K_1_15, K_2_2, K_2_3, K_2_4, K_2_5
+          real(dp) :: K_2_6, K_2_7, K_2_8, K_2_9, K_2_10, K_2_11, K_2_12, K_2_13, K_2_14, K_2_15, K_3_3
+          real(dp) :: K_3_4, K_3_5, K_3_6, K_3_7, K_3_8, K_3_9, K_3_10, K_3_11, K_3_12, K_3_13, K_3_14, K_3_15
+          real(dp) :: K_4_4, K_4_5, K_4_6, K_4_7, K_4_8, K_4_9, K_4_10, K_4_11, K_4_12, K_4_13, K_4_14, K_4_15
+          real(dp) :: K_5_5, K_5_6, K_5_7, K_5_8, K_5_9, K_5_10, K_5_11, K_5_12, K_5_13, K_5_14, K_5_15
+          real(dp) :: K_6_6, K_6_7, K_6_8, K_6_9, K_6_10, K_6_11, K_6_12, K_6_13, K_6_14, K_6_15, K_7_7
+          real(dp) :: K_7_8, K_7_9, K_7_10, K_7_11, K_7_12, K_7_13, K_7_14, K_7_15, K_8_8, K_8_9, K_8_10
+          real(dp) :: K_8_11, K_8_12, K_8_13, K_8_14, K_8_15, K_9_9, K_9_10, K_9_11, K_9_12, K_9_13, K_9_14
+          real(dp) :: K_9_15, K_10_10, K_10_11, K_10_12, K_10_13, K_10_14, K_10_15, K_11_11, K_11_12, K_11_13
+          real(dp) :: K_11_14, K_11_15, K_12_12, K_12_13, K_12_14, K_12_15, K_13_13, K_13_14, K_13_15, K_14_14
+          real(dp) :: K_14_15, K_15_15
+          integer :: p
+          x1 = xl(lane, 1, 1)
+          y1 = xl(lane, 2, 1)
+          x2 = xl(lane, 1, 2)
+          y2 = xl(lane, 2, 2)
+          x3 = xl(lane, 1, 3)
+          y3 = xl(lane, 2, 3)
+          x4 = xl(lane, 1, 4)
+          y4 = xl(lane, 2, 4)
+          x5 = xl(lane, 1, 5)
+          y5 = xl(lane, 2, 5)
+          x6 = xl(lane, 1, 6)
+          y6 = xl(lane, 2, 6)
+          x7 = xl(lane, 1, 7)
+          y7 = xl(lane, 2, 7)
+          x8 = xl(lane, 1, 8)
+          y8 = xl(lane, 2, 8)
+          gx_0_1 = 0.5_dp*x7 - 0.5_dp*x5
+          gx_0_2 = -0.5_dp*x6 - 0.5_dp*x8 + 0.25_dp*x1 + 0.25_dp*x2 + 0.25_dp*x3 + 0.25_dp*x4
+          gx_1_0 = 0.5_dp*x6 - 0.5_dp*x8
+          gx_1_1 = -0.25_dp*x2 - 0.25_dp*x4 + 0.25_dp*x1 + 0.25_dp*x3
+          gx_1_2 = 0.5_dp*x8 - 0.5_dp*x6 - 0.25_dp*x1 - 0.25_dp*x4 + 0.25_dp*x2 + 0.25_dp*x3
+          gx_2_0 = -0.5_dp*x5 - 0.5_dp*x7 + 0.25_dp*x1 + 0.25_dp*x2 + 0.25_dp*x3 + 0.25_dp*x4
+          gx_2_1 = 0.5_dp*x5 - 0.5_dp*x7 - 0.25_dp*x1 - 0.25_dp*x2 + 0.25_dp*x3 + 0.25_dp*x4
+          gy_0_1 = 0.5_dp*y7 - 0.5_dp*y5
+          gy_0_2 = -0.5_dp*y6 - 0.5_dp*y8 + 0.25_dp*y1 + 0.25_dp*y2 + 0.25_dp*y3 + 0.25_dp*y4
+          gy_1_0 = 0.5_dp*y6 - 0.5_dp*y8
+          gy_1_1 = -0.25_dp*y2 - 0.25_dp*y4 + 0.25_dp*y1 + 0.25_dp*y3
+          gy_1_2 = 0.5_dp*y8 - 0.5_dp*y6 - 0.25_dp*y1 - 0.25_dp*y4 + 0.25_dp*y2 + 0.25_dp*y3
+          gy_2_0 = -0.5_dp*y5 - 0.5_dp*y7 + 0.25_dp*y1 + 0.25_dp*y2 + 0.25_dp*y3 + 0.25_dp*y4
+          gy_2_1 = 0.5_dp*y5 - 0.5_dp*y7 - 0.25_dp*y1 - 0.25_dp*y2 + 0.25_dp*y3 + 0.25_dp*y4
+          K_0_0 = 0.0_dp
+          K_0_1 = 0.0_dp
+          K_0_2 = 0.0_dp
+          K_0_3 = 0.0_dp
+          K_0_4 = 0.0_dp
+          K_0_5 = 0.0_dp
+          K_0_6 = 0.0_dp
+          K_0_7 = 0.0_dp
+          K_0_8 = 0.0_dp
+          K_0_9 = 0.0_dp
+          K_0_10 = 0.0_dp
+          K_0_11 = 0.0_dp
+          K_0_12 = 0.0_dp
+          K_0_13 = 0.0_dp
+          K_0_14 = 0.0_dp
+          K_0_15 = 0.0_dp
+          K_1_1 = 0.0_dp
+          K_1_2 = 0.0_dp
+          K_1_3 = 0.0_dp
+          K_1_4 = 0.0_dp
+          K_1_5 = 0.0_dp
+          K_1_6 = 0.0_dp
+          K_1_7 = 0.0_dp
+          K_1_8 = 0.0_dp
+          K_1_9 = 0.0_dp
+          K_1_10 = 0.0_dp
+          K_1_11 = 0.0_dp
+          K_1_12 = 0.0_dp
+          K_1_13 = 0.0_dp
+          K_1_14 = 0.0_dp
+          K_1_15 = 0.0_dp
+          K_2_2 = 0.0_dp
+          K_2_3 = 0.0_dp
+          K_2_4 = 0.0_dp
+          K_2_5 = 0.0_dp
+          K_2_6 = 0.0_dp
+          K_2_7 = 0.0_dp
+          K_2_8 = 0.0_dp
+          K_2_9 = 0.0_dp
+          K_2_10 = 0.0_dp
+          K_2_11 = 0.0_dp
+          K_2_12 = 0.0_dp
+          K_2_13 = 0.0_dp
+          K_2_14 = 0.0_dp
+          K_2_15 = 0.0_dp
+          K_3_3 = 0.0_dp
+          K_3_4 = 0.0_dp
+          K_3_5 = 0.0_dp
+          K_3_6 = 0.0_dp
+          K_3_7 = 0.0_dp
+          K_3_8 = 0.0_dp
+          K_3_9 = 0.0_dp
+          K_3_10 = 0.0_dp
+          K_3_11 = 0.0_dp
+          K_3_12 = 0.0_dp
+          K_3_13 = 0.0_dp
+          K_3_14 = 0.0_dp
+          K_3_15 = 0.0_dp
+          K_4_4 = 0.0_dp
+          K_4_5 = 0.0_dp
+          K_4_6 = 0.0_dp
+          K_4_7 = 0.0_dp
+          K_4_8 = 0.0_dp
+          K_4_9 = 0.0_dp
+          K_4_10 = 0.0_dp
+          K_4_11 = 0.0_dp
+          K_4_12 = 0.0_dp
+          K_4_13 = 0.0_dp
+          K_4_14 = 0.0_dp
+          K_4_15 = 0.0_dp
+          K_5_5 = 0.0_dp
+          K_5_6 = 0.0_dp
+          K_5_7 = 0.0_dp
+          K_5_8 = 0.0_dp
+          K_5_9 = 0.0_dp
+          K_5_10 = 0.0_dp
+          K_5_11 = 0.0_dp
+          K_5_12 = 0.0_dp
+          K_5_13 = 0.0_dp
+          K_5_14 = 0.0_dp
+          K_5_15 = 0.0_dp
+          K_6_6 = 0.0_dp
+          K_6_7 = 0.0_dp
+          K_6_8 = 0.0_dp
+          K_6_9 = 0.0_dp
+          K_6_10 = 0.0_dp
+          K_6_11 = 0.0_dp
+          K_6_12 = 0.0_dp
+          K_6_13 = 0.0_dp
+          K_6_14 = 0.0_dp
+          K_6_15 = 0.0_dp
+          K_7_7 = 0.0_dp
+          K_7_8 = 0.0_dp
+          K_7_9 = 0.0_dp
+          K_7_10 = 0.0_dp
+          K_7_11 = 0.0_dp
+          K_7_12 = 0.0_dp
+          K_7_13 = 0.0_dp
+          K_7_14 = 0.0_dp
+          K_7_15 = 0.0_dp
+          K_8_8 = 0.0_dp
+          K_8_9 = 0.0_dp
+          K_8_10 = 0.0_dp
+          K_8_11 = 0.0_dp
+          K_8_12 = 0.0_dp
+          K_8_13 = 0.0_dp
+          K_8_14 = 0.0_dp
+          K_8_15 = 0.0_dp
+          K_9_9 = 0.0_dp
+          K_9_10 = 0.0_dp
+          K_9_11 = 0.0_dp
+          K_9_12 = 0.0_dp
+          K_9_13 = 0.0_dp
+          K_9_14 = 0.0_dp
+          K_9_15 = 0.0_dp
+          K_10_10 = 0.0_dp
+          K_10_11 = 0.0_dp
+          K_10_12 = 0.0_dp
+          K_10_13 = 0.0_dp
+          K_10_14 = 0.0_dp
+          K_10_15 = 0.0_dp
+          K_11_11 = 0.0_dp
+          K_11_12 = 0.0_dp
+          K_11_13 = 0.0_dp
+          K_11_14 = 0.0_dp
+          K_11_15 = 0.0_dp
+          K_12_12 = 0.0_dp
+          K_12_13 = 0.0_dp
+          K_12_14 = 0.0_dp
+          K_12_15 = 0.0_dp
+          K_13_13 = 0.0_dp
+          K_13_14 = 0.0_dp
+          K_13_15 = 0.0_dp
+          K_14_14 = 0.0_dp
+          K_14_15 = 0.0_dp
+          K_15_15 = 0.0_dp
+          do p = 1, 9   ! gauss-3x3: loop over the 9 points
+            block
+              real(dp) :: c0, c1, c2, c3, c4, c5, c6, c7, c8, c9, c10, c11, c12, c13, c14, c15, c16, c17, c18
+              real(dp) :: c19, c20, eta, w, xi, J00, J01, J10, J11, detJ, idet, Ji00, Ji01, Ji10, Ji11, dNdx1
+              real(dp) :: dNdy1, dNdx2, dNdy2, dNdx3, dNdy3, dNdx4, dNdy4, dNdx5, dNdy5, dNdx6, dNdy6, dNdx7
+              real(dp) :: dNdy7, dNdx8, dNdy8, sc0, s1, s2, s3, T4, T6, T7, T8, T9, T10, T11, T12, T13, T14
+              real(dp) :: T15, T16, T17, T18, T19, T20, T21, T22, T23, T24, T25, T26, T27, T28, T29, T30, T31
+              real(dp) :: T32, T33, T34, T35, T36, T37, T38, T39, T40, T41, T42, T43, T44, T45, T46, T47, T48
+              real(dp) :: T49, T50, T51
+              c0 = KS0_c0(p)
+              c1 = KS0_c1(p)
+              c2 = KS0_c2(p)
+              c3 = KS0_c3(p)
+              c4 = KS0_c4(p)
+              c5 = KS0_c5(p)
+              c6 = KS0_c6(p)
+              c7 = KS0_c7(p)
+              c8 = KS0_c8(p)
+              c9 = KS0_c9(p)
+              c10 = KS0_c10(p)
+              c11 = KS0_c11(p)
+              c12 = KS0_c12(p)
+              c13 = KS0_c13(p)
+              c14 = KS0_c14(p)
+              c15 = KS0_c15(p)
+              c16 = KS0_c16(p)
+              c17 = KS0_c17(p)
+              c18 = KS0_c18(p)
+              c19 = KS0_c19(p)
+              c20 = KS0_c20(p)
+              eta = KS0_eta(p)
+              w = KS0_w(p)
+              xi = KS0_xi(p)
+              J00 = gx_1_0 + c0*gx_1_2 + c1*gx_2_0 + c2*gx_2_1 + eta*gx_1_1
+              J01 = gy_1_0 + c0*gy_1_2 + c1*gy_2_0 + c2*gy_2_1 + eta*gy_1_1
+              J10 = gx_0_1 + c2*gx_1_2 + c3*gx_0_2 + c4*gx_2_1 + gx_1_1*xi
+              J11 = gy_0_1 + c2*gy_1_2 + c3*gy_0_2 + c4*gy_2_1 + gy_1_1*xi
+              detJ = J00*J11 - J01*J10
+              idet = 1.0_dp/detJ
+              Ji00 = J11*idet
+              Ji01 = -J01*idet
+              Ji10 = -J10*idet
+              Ji11 = J00*idet
+              dNdx1 = Ji00*c5 + Ji01*c6
+              dNdy1 = Ji10*c5 + Ji11*c6
+              dNdx2 = Ji00*c7 + Ji01*c8
+              dNdy2 = Ji10*c7 + Ji11*c8
+              dNdx3 = Ji00*c9 + Ji01*c10
+              dNdy3 = Ji10*c9 + Ji11*c10
+              dNdx4 = Ji00*c11 + Ji01*c12
+              dNdy4 = Ji10*c11 + Ji11*c12
+              dNdx5 = Ji00*c13 + Ji01*c14
+              dNdy5 = Ji10*c13 + Ji11*c14
+              dNdx6 = Ji00*c15 + Ji01*c16
+              dNdy6 = Ji10*c15 + Ji11*c16
+              dNdx7 = Ji00*c17 + Ji01*c18
+              dNdy7 = Ji10*c17 + Ji11*c18
+              dNdx8 = Ji00*c19 + Ji01*c20
+              dNdy8 = Ji10*c19 + Ji11*c20
+              sc0 = detJ*t*w
+              s1 = m0*sc0
+              s2 = m1*sc0
+              s3 = m2*sc0
+              T4 = dNdx1*s1
+              T6 = dNdy1*s3
+              T7 = dNdy1*s2
+              T8 = dNdy1*s1
+              T9 = dNdx1*s3
+              T10 = dNdx2*s1
+              T11 = dNdx2*s2
+              T12 = dNdy2*s3
+              T13 = dNdy2*s2
+              T14 = dNdy2*s1
+              T15 = dNdx2*s3
+              T16 = dNdx3*s1
+              T17 = dNdx3*s2
+              T18 = dNdy3*s3
+              T19 = dNdy3*s2
+              T20 = dNdy3*s1
+              T21 = dNdx3*s3
+              T22 = dNdx4*s1
+              T23 = dNdx4*s2
+              T24 = dNdy4*s3
+              T25 = dNdy4*s2
+              T26 = dNdy4*s1
+              T27 = dNdx4*s3
+              T28 = dNdx5*s1
+              T29 = dNdx5*s2
+              T30 = dNdy5*s3
+              T31 = dNdy5*s2
+              T32 = dNdy5*s1
+              T33 = dNdx5*s3
+              T34 = dNdx6*s1
+              T35 = dNdx6*s2
+              T36 = dNdy6*s3
+              T37 = dNdy6*s2
+              T38 = dNdy6*s1
+              T39 = dNdx6*s3
+              T40 = dNdx7*s1
+              T41 = dNdx7*s2
+              T42 = dNdy7*s3
+              T43 = dNdy7*s2
+              T44 = dNdy7*s1
+              T45 = dNdx7*s3
+              T46 = dNdx8*s1
+              T47 = dNdx8*s2
+              T48 = dNdy8*s3
+              T49 = dNdy8*s2
+              T50 = dNdy8*s1
+              T51 = dNdx8*s3
+              K_0_0 = K_0_0 + (T4*dNdx1 + T6*dNdy1)
+              K_0_1 = K_0_1 + (T7*dNdx1 + T9*dNdy1)
+              K_0_2 = K_0_2 + (T10*dNdx1 + T12*dNdy1)
+              K_0_3 = K_0_3 + (T13*dNdx1 + T15*dNdy1)
+              K_0_4 = K_0_4 + (T16*dNdx1 + T18*dNdy1)
+              K_0_5 = K_0_5 + (T19*dNdx1 + T21*dNdy1)
+              K_0_6 = K_0_6 + (T22*dNdx1 + T24*dNdy1)
+              K_0_7 = K_0_7 + (T25*dNdx1 + T27*dNdy1)
+              K_0_8 = K_0_8 + (T28*dNdx1 + T30*dNdy1)
+              K_0_9 = K_0_9 + (T31*dNdx1 + T33*dNdy1)
+              K_0_10 = K_0_10 + (T34*dNdx1 + T36*dNdy1)
+              K_0_11 = K_0_11 + (T37*dNdx1 + T39*dNdy1)
+              K_0_12 = K_0_12 + (T40*dNdx1 + T42*dNdy1)
+              K_0_13 = K_0_13 + (T43*dNdx1 + T45*dNdy1)
+              K_0_14 = K_0_14 + (T46*dNdx1 + T48*dNdy1)
+              K_0_15 = K_0_15 + (T49*dNdx1 + T51*dNdy1)
+              K_1_1 = K_1_1 + (T8*dNdy1 + T9*dNdx1)
+              K_1_2 = K_1_2 + (T11*dNdy1 + T12*dNdx1)
+              K_1_3 = K_1_3 + (T14*dNdy1 + T15*dNdx1)
+              K_1_4 = K_1_4 + (T17*dNdy1 + T18*dNdx1)
+              K_1_5 = K_1_5 + (T20*dNdy1 + T21*dNdx1)
+              K_1_6 = K_1_6 + (T23*dNdy1 + T24*dNdx1)
+              K_1_7 = K_1_7 + (T26*dNdy1 + T27*dNdx1)
+              K_1_8 = K_1_8 + (T29*dNdy1 + T30*dNdx1)
+              K_1_9 = K_1_9 + (T32*dNdy1 + T33*dNdx1)
+              K_1_10 = K_1_10 + (T35*dNdy1 + T36*dNdx1)
+              K_1_11 = K_1_11 + (T38*dNdy1 + T39*dNdx1)
+              K_1_12 = K_1_12 + (T41*dNdy1 + T42*dNdx1)
+              K_1_13 = K_1_13 + (T44*dNdy1 + T45*dNdx1)
+              K_1_14 = K_1_14 + (T47*dNdy1 + T48*dNdx1)
+              K_1_15 = K_1_15 + (T50*dNdy1 + T51*dNdx1)
+              K_2_2 = K_2_2 + (T10*dNdx2 + T12*dNdy2)
+              K_2_3 = K_2_3 + (T13*dNdx2 + T15*dNdy2)
+              K_2_4 = K_2_4 + (T16*dNdx2 + T18*dNdy2)
+              K_2_5 = K_2_5 + (T19*dNdx2 + T21*dNdy2)
+              K_2_6 = K_2_6 + (T22*dNdx2 + T24*dNdy2)
+              K_2_7 = K_2_7 + (T25*dNdx2 + T27*dNdy2)
+              K_2_8 = K_2_8 + (T28*dNdx2 + T30*dNdy2)
+              K_2_9 = K_2_9 + (T31*dNdx2 + T33*dNdy2)
+              K_2_10 = K_2_10 + (T34*dNdx2 + T36*dNdy2)
+              K_2_11 = K_2_11 + (T37*dNdx2 + T39*dNdy2)
+              K_2_12 = K_2_12 + (T40*dNdx2 + T42*dNdy2)
+              K_2_13 = K_2_13 + (T43*dNdx2 + T45*dNdy2)
+              K_2_14 = K_2_14 + (T46*dNdx2 + T48*dNdy2)
+              K_2_15 = K_2_15 + (T49*dNdx2 + T51*dNdy2)
+              K_3_3 = K_3_3 + (T14*dNdy2 + T15*dNdx2)
+              K_3_4 = K_3_4 + (T17*dNdy2 + T18*dNdx2)
+              K_3_5 = K_3_5 + (T20*dNdy2 + T21*dNdx2)
+              K_3_6 = K_3_6 + (T23*dNdy2 + T24*dNdx2)
+              K_3_7 = K_3_7 + (T26*dNdy2 + T27*dNdx2)
+              K_3_8 = K_3_8 + (T29*dNdy2 + T30*dNdx2)
+              K_3_9 = K_3_9 + (T32*dNdy2 + T33*dNdx2)
+              K_3_10 = K_3_10 + (T35*dNdy2 + T36*dNdx2)
+              K_3_11 = K_3_11 + (T38*dNdy2 + T39*dNdx2)
+              K_3_12 = K_3_12 + (T41*dNdy2 + T42*dNdx2)
+              K_3_13 = K_3_13 + (T44*dNdy2 + T45*dNdx2)
+              K_3_14 = K_3_14 + (T47*dNdy2 + T48*dNdx2)
+              K_3_15 = K_3_15 + (T50*dNdy2 + T51*dNdx2)
+              K_4_4 = K_4_4 + (T16*dNdx3 + T18*dNdy3)
+              K_4_5 = K_4_5 + (T19*dNdx3 + T21*dNdy3)
+              K_4_6 = K_4_6 + (T22*dNdx3 + T24*dNdy3)
+              K_4_7 = K_4_7 + (T25*dNdx3 + T27*dNdy3)
+              K_4_8 = K_4_8 + (T28*dNdx3 + T30*dNdy3)
+              K_4_9 = K_4_9 + (T31*dNdx3 + T33*dNdy3)
+              K_4_10 = K_4_10 + (T34*dNdx3 + T36*dNdy3)
+              K_4_11 = K_4_11 + (T37*dNdx3 + T39*dNdy3)
+              K_4_12 = K_4_12 + (T40*dNdx3 + T42*dNdy3)
+              K_4_13 = K_4_13 + (T43*dNdx3 + T45*dNdy3)
+              K_4_14 = K_4_14 + (T46*dNdx3 + T48*dNdy3)
+              K_4_15 = K_4_15 + (T49*dNdx3 + T51*dNdy3)
+              K_5_5 = K_5_5 + (T20*dNdy3 + T21*dNdx3)
+              K_5_6 = K_5_6 + (T23*dNdy3 + T24*dNdx3)
+              K_5_7 = K_5_7 + (T26*dNdy3 + T27*dNdx3)
+              K_5_8 = K_5_8 + (T29*dNdy3 + T30*dNdx3)
+              K_5_9 = K_5_9 + (T32*dNdy3 + T33*dNdx3)
+              K_5_10 = K_5_10 + (T35*dNdy3 + T36*dNdx3)
+              K_5_11 = K_5_11 + (T38*dNdy3 + T39*dNdx3)
+              K_5_12 = K_5_12 + (T41*dNdy3 + T42*dNdx3)
+              K_5_13 = K_5_13 + (T44*dNdy3 + T45*dNdx3)
+              K_5_14 = K_5_14 + (T47*dNdy3 + T48*dNdx3)
+              K_5_15 = K_5_15 + (T50*dNdy3 + T51*dNdx3)
+              K_6_6 = K_6_6 + (T22*dNdx4 + T24*dNdy4)
+              K_6_7 = K_6_7 + (T25*dNdx4 + T27*dNdy4)
+              K_6_8 = K_6_8 + (T28*dNdx4 + T30*dNdy4)
+              K_6_9 = K_6_9 + (T31*dNdx4 + T33*dNdy4)
+              K_6_10 = K_6_10 + (T34*dNdx4 + T36*dNdy4)
+              K_6_11 = K_6_11 + (T37*dNdx4 + T39*dNdy4)
+              K_6_12 = K_6_12 + (T40*dNdx4 + T42*dNdy4)
+              K_6_13 = K_6_13 + (T43*dNdx4 + T45*dNdy4)
+              K_6_14 = K_6_14 + (T46*dNdx4 + T48*dNdy4)
+              K_6_15 = K_6_15 + (T49*dNdx4 + T51*dNdy4)
+              K_7_7 = K_7_7 + (T26*dNdy4 + T27*dNdx4)
+              K_7_8 = K_7_8 + (T29*dNdy4 + T30*dNdx4)
+              K_7_9 = K_7_9 + (T32*dNdy4 + T33*dNdx4)
+              K_7_10 = K_7_10 + (T35*dNdy4 + T36*dNdx4)
+              K_7_11 = K_7_11 + (T38*dNdy4 + T39*dNdx4)
+              K_7_12 = K_7_12 + (T41*dNdy4 + T42*dNdx4)
+              K_7_13 = K_7_13 + (T44*dNdy4 + T45*dNdx4)
+              K_7_14 = K_7_14 + (T47*dNdy4 + T48*dNdx4)
+              K_7_15 = K_7_15 + (T50*dNdy4 + T51*dNdx4)
+              K_8_8 = K_8_8 + (T28*dNdx5 + T30*dNdy5)
+              K_8_9 = K_8_9 + (T31*dNdx5 + T33*dNdy5)
+              K_8_10 = K_8_10 + (T34*dNdx5 + T36*dNdy5)
+              K_8_11 = K_8_11 + (T37*dNdx5 + T39*dNdy5)
+              K_8_12 = K_8_12 + (T40*dNdx5 + T42*dNdy5)
+              K_8_13 = K_8_13 + (T43*dNdx5 + T45*dNdy5)
+              K_8_14 = K_8_14 + (T46*dNdx5 + T48*dNdy5)
+              K_8_15 = K_8_15 + (T49*dNdx5 + T51*dNdy5)
+              K_9_9 = K_9_9 + (T32*dNdy5 + T33*dNdx5)
+              K_9_10 = K_9_10 + (T35*dNdy5 + T36*dNdx5)
+              K_9_11 = K_9_11 + (T38*dNdy5 + T39*dNdx5)
+              K_9_12 = K_9_12 + (T41*dNdy5 + T42*dNdx5)
+              K_9_13 = K_9_13 + (T44*dNdy5 + T45*dNdx5)
+              K_9_14 = K_9_14 + (T47*dNdy5 + T48*dNdx5)
+              K_9_15 = K_9_15 + (T50*dNdy5 + T51*dNdx5)
+              K_10_10 = K_10_10 + (T34*dNdx6 + T36*dNdy6)
+              K_10_11 = K_10_11 + (T37*dNdx6 + T39*dNdy6)
+              K_10_12 = K_10_12 + (T40*dNdx6 + T42*dNdy6)
+              K_10_13 = K_10_13 + (T43*dNdx6 + T45*dNdy6)
+              K_10_14 = K_10_14 + (T46*dNdx6 + T48*dNdy6)
+              K_10_15 = K_10_15 + (T49*dNdx6 + T51*dNdy6)
+              K_11_11 = K_11_11 + (T38*dNdy6 + T39*dNdx6)
+              K_11_12 = K_11_12 + (T41*dNdy6 + T42*dNdx6)
+              K_11_13 = K_11_13 + (T44*dNdy6 + T45*dNdx6)
+              K_11_14 = K_11_14 + (T47*dNdy6 + T48*dNdx6)
+              K_11_15 = K_11_15 + (T50*dNdy6 + T51*dNdx6)
+              K_12_12 = K_12_12 + (T40*dNdx7 + T42*dNdy7)
+              K_12_13 = K_12_13 + (T43*dNdx7 + T45*dNdy7)
+              K_12_14 = K_12_14 + (T46*dNdx7 + T48*dNdy7)
+              K_12_15 = K_12_15 + (T49*dNdx7 + T51*dNdy7)
+              K_13_13 = K_13_13 + (T44*dNdy7 + T45*dNdx7)
+              K_13_14 = K_13_14 + (T47*dNdy7 + T48*dNdx7)
+              K_13_15 = K_13_15 + (T50*dNdy7 + T51*dNdx7)
+              K_14_14 = K_14_14 + (T46*dNdx8 + T48*dNdy8)
+              K_14_15 = K_14_15 + (T49*dNdx8 + T51*dNdy8)
+              K_15_15 = K_15_15 + (T50*dNdy8 + T51*dNdx8)
+            end block
+          end do
+          do p = 1, 4   ! gauss-2x2: loop over the 4 points
+            block
+              real(dp) :: c0, c1, c2, c3, c4, c5, c6, c7, c8, c9, c10, c11, c12, c13, c14, c15, c16, c17, c18
+              real(dp) :: c19, c20, eta, w, xi, J00, J01, J10, J11, detJ, idet, Ji00, Ji01, Ji10, Ji11, dNdx1
+              real(dp) :: dNdy1, dNdx2, dNdy2, dNdx3, dNdy3, dNdx4, dNdy4, dNdx5, dNdy5, dNdx6, dNdy6, dNdx7
+              real(dp) :: dNdy7, dNdx8, dNdy8, sc52, s53, T54, T55, T56, T57, T58, T59, T60, T61, T62, T63, T64
+              real(dp) :: T65, T66, T67, T68, T69
+              c0 = KS1_c0(p)
+              c1 = KS1_c1(p)
+              c2 = KS1_c2(p)
+              c3 = KS1_c3(p)
+              c4 = KS1_c4(p)
+              c5 = KS1_c5(p)
+              c6 = KS1_c6(p)
+              c7 = KS1_c7(p)
+              c8 = KS1_c8(p)
+              c9 = KS1_c9(p)
+              c10 = KS1_c10(p)
+              c11 = KS1_c11(p)
+              c12 = KS1_c12(p)
+              c13 = KS1_c13(p)
+              c14 = KS1_c14(p)
+              c15 = KS1_c15(p)
+              c16 = KS1_c16(p)
+              c17 = KS1_c17(p)
+              c18 = KS1_c18(p)
+              c19 = KS1_c19(p)
+              c20 = KS1_c20(p)
+              eta = KS1_eta(p)
+              w = KS1_w(p)
+              xi = KS1_xi(p)
+              J00 = gx_1_0 + c0*gx_1_2 + c1*gx_2_0 + c2*gx_2_1 + eta*gx_1_1
+              J01 = gy_1_0 + c0*gy_1_2 + c1*gy_2_0 + c2*gy_2_1 + eta*gy_1_1
+              J10 = gx_0_1 + c2*gx_1_2 + c3*gx_0_2 + c4*gx_2_1 + gx_1_1*xi
+              J11 = gy_0_1 + c2*gy_1_2 + c3*gy_0_2 + c4*gy_2_1 + gy_1_1*xi
+              detJ = J00*J11 - J01*J10
+              idet = 1.0_dp/detJ
+              Ji00 = J11*idet
+              Ji01 = -J01*idet
+              Ji10 = -J10*idet
+              Ji11 = J00*idet
+              dNdx1 = Ji00*c5 + Ji01*c6
+              dNdy1 = Ji10*c5 + Ji11*c6
+              dNdx2 = Ji00*c7 + Ji01*c8
+              dNdy2 = Ji10*c7 + Ji11*c8
+              dNdx3 = Ji00*c9 + Ji01*c10
+              dNdy3 = Ji10*c9 + Ji11*c10
+              dNdx4 = Ji00*c11 + Ji01*c12
+              dNdy4 = Ji10*c11 + Ji11*c12
+              dNdx5 = Ji00*c13 + Ji01*c14
+              dNdy5 = Ji10*c13 + Ji11*c14
+              dNdx6 = Ji00*c15 + Ji01*c16
+              dNdy6 = Ji10*c15 + Ji11*c16
+              dNdx7 = Ji00*c17 + Ji01*c18
+              dNdy7 = Ji10*c17 + Ji11*c18
+              dNdx8 = Ji00*c19 + Ji01*c20
+              dNdy8 = Ji10*c19 + Ji11*c20
+              sc52 = detJ*t*w
+              s53 = m3*sc52
+              T54 = dNdx1*s53
+              T55 = dNdy1*s53
+              T56 = dNdx2*s53
+              T57 = dNdy2*s53
+              T58 = dNdx3*s53
+              T59 = dNdy3*s53
+              T60 = dNdx4*s53
+              T61 = dNdy4*s53
+              T62 = dNdx5*s53
+              T63 = dNdy5*s53
+              T64 = dNdx6*s53
+              T65 = dNdy6*s53
+              T66 = dNdx7*s53
+              T67 = dNdy7*s53
+              T68 = dNdx8*s53
+              T69 = dNdy8*s53
+              K_0_0 = K_0_0 + (T54*dNdx1)
+              K_0_1 = K_0_1 + (T55*dNdx1)
+              K_0_2 = K_0_2 + (T56*dNdx1)
+              K_0_3 = K_0_3 + (T57*dNdx1)
+              K_0_4 = K_0_4 + (T58*dNdx1)
+              K_0_5 = K_0_5 + (T59*dNdx1)
+              K_0_6 = K_0_6 + (T60*dNdx1)
+              K_0_7 = K_0_7 + (T61*dNdx1)
+              K_0_8 = K_0_8 + (T62*dNdx1)
+              K_0_9 = K_0_9 + (T63*dNdx1)
+              K_0_10 = K_0_10 + (T64*dNdx1)
+              K_0_11 = K_0_11 + (T65*dNdx1)
+              K_0_12 = K_0_12 + (T66*dNdx1)
+              K_0_13 = K_0_13 + (T67*dNdx1)
+              K_0_14 = K_0_14 + (T68*dNdx1)
+              K_0_15 = K_0_15 + (T69*dNdx1)
+              K_1_1 = K_1_1 + (T55*dNdy1)
+              K_1_2 = K_1_2 + (T56*dNdy1)
+              K_1_3 = K_1_3 + (T57*dNdy1)
+              K_1_4 = K_1_4 + (T58*dNdy1)
+              K_1_5 = K_1_5 + (T59*dNdy1)
+              K_1_6 = K_1_6 + (T60*dNdy1)
+              K_1_7 = K_1_7 + (T61*dNdy1)
+              K_1_8 = K_1_8 + (T62*dNdy1)
+              K_1_9 = K_1_9 + (T63*dNdy1)
+              K_1_10 = K_1_10 + (T64*dNdy1)
+              K_1_11 = K_1_11 + (T65*dNdy1)
+              K_1_12 = K_1_12 + (T66*dNdy1)
+              K_1_13 = K_1_13 + (T67*dNdy1)
+              K_1_14 = K_1_14 + (T68*dNdy1)
+              K_1_15 = K_1_15 + (T69*dNdy1)
+              K_2_2 = K_2_2 + (T56*dNdx2)
+              K_2_3 = K_2_3 + (T57*dNdx2)
+              K_2_4 = K_2_4 + (T58*dNdx2)
+              K_2_5 = K_2_5 + (T59*dNdx2)
+              K_2_6 = K_2_6 + (T60*dNdx2)
+              K_2_7 = K_2_7 + (T61*dNdx2)
+              K_2_8 = K_2_8 + (T62*dNdx2)
+              K_2_9 = K_2_9 + (T63*dNdx2)
+              K_2_10 = K_2_10 + (T64*dNdx2)
+              K_2_11 = K_2_11 + (T65*dNdx2)
+              K_2_12 = K_2_12 + (T66*dNdx2)
+              K_2_13 = K_2_13 + (T67*dNdx2)
+              K_2_14 = K_2_14 + (T68*dNdx2)
+              K_2_15 = K_2_15 + (T69*dNdx2)
+              K_3_3 = K_3_3 + (T57*dNdy2)
+              K_3_4 = K_3_4 + (T58*dNdy2)
+              K_3_5 = K_3_5 + (T59*dNdy2)
+              K_3_6 = K_3_6 + (T60*dNdy2)
+              K_3_7 = K_3_7 + (T61*dNdy2)
+              K_3_8 = K_3_8 + (T62*dNdy2)
+              K_3_9 = K_3_9 + (T63*dNdy2)
+              K_3_10 = K_3_10 + (T64*dNdy2)
+              K_3_11 = K_3_11 + (T65*dNdy2)
+              K_3_12 = K_3_12 + (T66*dNdy2)
+              K_3_13 = K_3_13 + (T67*dNdy2)
+              K_3_14 = K_3_14 + (T68*dNdy2)
+              K_3_15 = K_3_15 + (T69*dNdy2)
+              K_4_4 = K_4_4 + (T58*dNdx3)
+              K_4_5 = K_4_5 + (T59*dNdx3)
+              K_4_6 = K_4_6 + (T60*dNdx3)
+              K_4_7 = K_4_7 + (T61*dNdx3)
+              K_4_8 = K_4_8 + (T62*dNdx3)
+              K_4_9 = K_4_9 + (T63*dNdx3)
+              K_4_10 = K_4_10 + (T64*dNdx3)
+              K_4_11 = K_4_11 + (T65*dNdx3)
+              K_4_12 = K_4_12 + (T66*dNdx3)
+              K_4_13 = K_4_13 + (T67*dNdx3)
+              K_4_14 = K_4_14 + (T68*dNdx3)
+              K_4_15 = K_4_15 + (T69*dNdx3)
+              K_5_5 = K_5_5 + (T59*dNdy3)
+              K_5_6 = K_5_6 + (T60*dNdy3)
+              K_5_7 = K_5_7 + (T61*dNdy3)
+              K_5_8 = K_5_8 + (T62*dNdy3)
+              K_5_9 = K_5_9 + (T63*dNdy3)
+              K_5_10 = K_5_10 + (T64*dNdy3)
+              K_5_11 = K_5_11 + (T65*dNdy3)
+              K_5_12 = K_5_12 + (T66*dNdy3)
+              K_5_13 = K_5_13 + (T67*dNdy3)
+              K_5_14 = K_5_14 + (T68*dNdy3)
+              K_5_15 = K_5_15 + (T69*dNdy3)
+              K_6_6 = K_6_6 + (T60*dNdx4)
+              K_6_7 = K_6_7 + (T61*dNdx4)
+              K_6_8 = K_6_8 + (T62*dNdx4)
+              K_6_9 = K_6_9 + (T63*dNdx4)
+              K_6_10 = K_6_10 + (T64*dNdx4)
+              K_6_11 = K_6_11 + (T65*dNdx4)
+              K_6_12 = K_6_12 + (T66*dNdx4)
+              K_6_13 = K_6_13 + (T67*dNdx4)
+              K_6_14 = K_6_14 + (T68*dNdx4)
+              K_6_15 = K_6_15 + (T69*dNdx4)
+              K_7_7 = K_7_7 + (T61*dNdy4)
+              K_7_8 = K_7_8 + (T62*dNdy4)
+              K_7_9 = K_7_9 + (T63*dNdy4)
+              K_7_10 = K_7_10 + (T64*dNdy4)
+              K_7_11 = K_7_11 + (T65*dNdy4)
+              K_7_12 = K_7_12 + (T66*dNdy4)
+              K_7_13 = K_7_13 + (T67*dNdy4)
+              K_7_14 = K_7_14 + (T68*dNdy4)
+              K_7_15 = K_7_15 + (T69*dNdy4)
+              K_8_8 = K_8_8 + (T62*dNdx5)
+              K_8_9 = K_8_9 + (T63*dNdx5)
+              K_8_10 = K_8_10 + (T64*dNdx5)
+              K_8_11 = K_8_11 + (T65*dNdx5)
+              K_8_12 = K_8_12 + (T66*dNdx5)
+              K_8_13 = K_8_13 + (T67*dNdx5)
+              K_8_14 = K_8_14 + (T68*dNdx5)
+              K_8_15 = K_8_15 + (T69*dNdx5)
+              K_9_9 = K_9_9 + (T63*dNdy5)
+              K_9_10 = K_9_10 + (T64*dNdy5)
+              K_9_11 = K_9_11 + (T65*dNdy5)
+              K_9_12 = K_9_12 + (T66*dNdy5)
+              K_9_13 = K_9_13 + (T67*dNdy5)
+              K_9_14 = K_9_14 + (T68*dNdy5)
+              K_9_15 = K_9_15 + (T69*dNdy5)
+              K_10_10 = K_10_10 + (T64*dNdx6)
+              K_10_11 = K_10_11 + (T65*dNdx6)
+              K_10_12 = K_10_12 + (T66*dNdx6)
+              K_10_13 = K_10_13 + (T67*dNdx6)
+              K_10_14 = K_10_14 + (T68*dNdx6)
+              K_10_15 = K_10_15 + (T69*dNdx6)
+              K_11_11 = K_11_11 + (T65*dNdy6)
+              K_11_12 = K_11_12 + (T66*dNdy6)
+              K_11_13 = K_11_13 + (T67*dNdy6)
+              K_11_14 = K_11_14 + (T68*dNdy6)
+              K_11_15 = K_11_15 + (T69*dNdy6)
+              K_12_12 = K_12_12 + (T66*dNdx7)
+              K_12_13 = K_12_13 + (T67*dNdx7)
+              K_12_14 = K_12_14 + (T68*dNdx7)
+              K_12_15 = K_12_15 + (T69*dNdx7)
+              K_13_13 = K_13_13 + (T67*dNdy7)
+              K_13_14 = K_13_14 + (T68*dNdy7)
+              K_13_15 = K_13_15 + (T69*dNdy7)
+              K_14_14 = K_14_14 + (T68*dNdx8)
+              K_14_15 = K_14_15 + (T69*dNdx8)
+              K_15_15 = K_15_15 + (T69*dNdy8)
+            end block
+          end do
+          kl(lane, 1, 1) = K_0_0
+          kl(lane, 1, 2) = K_0_1
+          kl(lane, 1, 3) = K_0_2
+          kl(lane, 1, 4) = K_0_3
+          kl(lane, 1, 5) = K_0_4
+          kl(lane, 1, 6) = K_0_5
+          kl(lane, 1, 7) = K_0_6
+          kl(lane, 1, 8) = K_0_7
+          kl(lane, 1, 9) = K_0_8
+          kl(lane, 1, 10) = K_0_9
+          kl(lane, 1, 11) = K_0_10
+          kl(lane, 1, 12) = K_0_11
+          kl(lane, 1, 13) = K_0_12
+          kl(lane, 1, 14) = K_0_13
+          kl(lane, 1, 15) = K_0_14
+          kl(lane, 1, 16) = K_0_15
+          kl(lane, 2, 1) = K_0_1
+          kl(lane, 2, 2) = K_1_1
+          kl(lane, 2, 3) = K_1_2
+          kl(lane, 2, 4) = K_1_3
+          kl(lane, 2, 5) = K_1_4
+          kl(lane, 2, 6) = K_1_5
+          kl(lane, 2, 7) = K_1_6
+          kl(lane, 2, 8) = K_1_7
+          kl(lane, 2, 9) = K_1_8
+          kl(lane, 2, 10) = K_1_9
+          kl(lane, 2, 11) = K_1_10
+          kl(lane, 2, 12) = K_1_11
+          kl(lane, 2, 13) = K_1_12
+          kl(lane, 2, 14) = K_1_13
+          kl(lane, 2, 15) = K_1_14
+          kl(lane, 2, 16) = K_1_15
+          kl(lane, 3, 1) = K_0_2
+          kl(lane, 3, 2) = K_1_2
+          kl(lane, 3, 3) = K_2_2
+          kl(lane, 3, 4) = K_2_3
+          kl(lane, 3, 5) = K_2_4
+          kl(lane, 3, 6) = K_2_5
+          kl(lane, 3, 7) = K_2_6
+          kl(lane, 3, 8) = K_2_7
+          kl(lane, 3, 9) = K_2_8
+          kl(lane, 3, 10) = K_2_9
+          kl(lane, 3, 11) = K_2_10
+          kl(lane, 3, 12) = K_2_11
+          kl(lane, 3, 13) = K_2_12
+          kl(lane, 3, 14) = K_2_13
+          kl(lane, 3, 15) = K_2_14
+          kl(lane, 3, 16) = K_2_15
+          kl(lane, 4, 1) = K_0_3
+          kl(lane, 4, 2) = K_1_3
+          kl(lane, 4, 3) = K_2_3
+          kl(lane, 4, 4) = K_3_3
+          kl(lane, 4, 5) = K_3_4
+          kl(lane, 4, 6) = K_3_5
+          kl(lane, 4, 7) = K_3_6
+          kl(lane, 4, 8) = K_3_7
+          kl(lane, 4, 9) = K_3_8
+          kl(lane, 4, 10) = K_3_9
+          kl(lane, 4, 11) = K_3_10
+          kl(lane, 4, 12) = K_3_11
+          kl(lane, 4, 13) = K_3_12
+          kl(lane, 4, 14) = K_3_13
+          kl(lane, 4, 15) = K_3_14
+          kl(lane, 4, 16) = K_3_15
+          kl(lane, 5, 1) = K_0_4
+          kl(lane, 5, 2) = K_1_4
+          kl(lane, 5, 3) = K_2_4
+          kl(lane, 5, 4) = K_3_4
+          kl(lane, 5, 5) = K_4_4
+          kl(lane, 5, 6) = K_4_5
+          kl(lane, 5, 7) = K_4_6
+          kl(lane, 5, 8) = K_4_7
+          kl(lane, 5, 9) = K_4_8
+          kl(lane, 5, 10) = K_4_9
+          kl(lane, 5, 11) = K_4_10
+          kl(lane, 5, 12) = K_4_11
+          kl(lane, 5, 13) = K_4_12
+          kl(lane, 5, 14) = K_4_13
+          kl(lane, 5, 15) = K_4_14
+          kl(lane, 5, 16) = K_4_15
+          kl(lane, 6, 1) = K_0_5
+          kl(lane, 6, 2) = K_1_5
+          kl(lane, 6, 3) = K_2_5
+          kl(lane, 6, 4) = K_3_5
+          kl(lane, 6, 5) = K_4_5
+          kl(lane, 6, 6) = K_5_5
+          kl(lane, 6, 7) = K_5_6
+          kl(lane, 6, 8) = K_5_7
+          kl(lane, 6, 9) = K_5_8
+          kl(lane, 6, 10) = K_5_9
+          kl(lane, 6, 11) = K_5_10
+          kl(lane, 6, 12) = K_5_11
+          kl(lane, 6, 13) = K_5_12
+          kl(lane, 6, 14) = K_5_13
+          kl(lane, 6, 15) = K_5_14
+          kl(lane, 6, 16) = K_5_15
+          kl(lane, 7, 1) = K_0_6
+          kl(lane, 7, 2) = K_1_6
+          kl(lane, 7, 3) = K_2_6
+          kl(lane, 7, 4) = K_3_6
+          kl(lane, 7, 5) = K_4_6
+          kl(lane, 7, 6) = K_5_6
+          kl(lane, 7, 7) = K_6_6
+          kl(lane, 7, 8) = K_6_7
+          kl(lane, 7, 9) = K_6_8
+          kl(lane, 7, 10) = K_6_9
+          kl(lane, 7, 11) = K_6_10
+          kl(lane, 7, 12) = K_6_11
+          kl(lane, 7, 13) = K_6_12
+          kl(lane, 7, 14) = K_6_13
+          kl(lane, 7, 15) = K_6_14
+          kl(lane, 7, 16) = K_6_15
+          kl(lane, 8, 1) = K_0_7
+          kl(lane, 8, 2) = K_1_7
+          kl(lane, 8, 3) = K_2_7
+          kl(lane, 8, 4) = K_3_7
+          kl(lane, 8, 5) = K_4_7
+          kl(lane, 8, 6) = K_5_7
+          kl(lane, 8, 7) = K_6_7
+          kl(lane, 8, 8) = K_7_7
+          kl(lane, 8, 9) = K_7_8
+          kl(lane, 8, 10) = K_7_9
+          kl(lane, 8, 11) = K_7_10
+          kl(lane, 8, 12) = K_7_11
+          kl(lane, 8, 13) = K_7_12
+          kl(lane, 8, 14) = K_7_13
+          kl(lane, 8, 15) = K_7_14
+          kl(lane, 8, 16) = K_7_15
+          kl(lane, 9, 1) = K_0_8
+          kl(lane, 9, 2) = K_1_8
+          kl(lane, 9, 3) = K_2_8
+          kl(lane, 9, 4) = K_3_8
+          kl(lane, 9, 5) = K_4_8
+          kl(lane, 9, 6) = K_5_8
+          kl(lane, 9, 7) = K_6_8
+          kl(lane, 9, 8) = K_7_8
+          kl(lane, 9, 9) = K_8_8
+          kl(lane, 9, 10) = K_8_9
+          kl(lane, 9, 11) = K_8_10
+          kl(lane, 9, 12) = K_8_11
+          kl(lane, 9, 13) = K_8_12
+          kl(lane, 9, 14) = K_8_13
+          kl(lane, 9, 15) = K_8_14
+          kl(lane, 9, 16) = K_8_15
+          kl(lane, 10, 1) = K_0_9
+          kl(lane, 10, 2) = K_1_9
+          kl(lane, 10, 3) = K_2_9
+          kl(lane, 10, 4) = K_3_9
+          kl(lane, 10, 5) = K_4_9
+          kl(lane, 10, 6) = K_5_9
+          kl(lane, 10, 7) = K_6_9
+          kl(lane, 10, 8) = K_7_9
+          kl(lane, 10, 9) = K_8_9
+          kl(lane, 10, 10) = K_9_9
+          kl(lane, 10, 11) = K_9_10
+          kl(lane, 10, 12) = K_9_11
+          kl(lane, 10, 13) = K_9_12
+          kl(lane, 10, 14) = K_9_13
+          kl(lane, 10, 15) = K_9_14
+          kl(lane, 10, 16) = K_9_15
+          kl(lane, 11, 1) = K_0_10
+          kl(lane, 11, 2) = K_1_10
+          kl(lane, 11, 3) = K_2_10
+          kl(lane, 11, 4) = K_3_10
+          kl(lane, 11, 5) = K_4_10
+          kl(lane, 11, 6) = K_5_10
+          kl(lane, 11, 7) = K_6_10
+          kl(lane, 11, 8) = K_7_10
+          kl(lane, 11, 9) = K_8_10
+          kl(lane, 11, 10) = K_9_10
+          kl(lane, 11, 11) = K_10_10
+          kl(lane, 11, 12) = K_10_11
+          kl(lane, 11, 13) = K_10_12
+          kl(lane, 11, 14) = K_10_13
+          kl(lane, 11, 15) = K_10_14
+          kl(lane, 11, 16) = K_10_15
+          kl(lane, 12, 1) = K_0_11
+          kl(lane, 12, 2) = K_1_11
+          kl(lane, 12, 3) = K_2_11
+          kl(lane, 12, 4) = K_3_11
+          kl(lane, 12, 5) = K_4_11
+          kl(lane, 12, 6) = K_5_11
+          kl(lane, 12, 7) = K_6_11
+          kl(lane, 12, 8) = K_7_11
+          kl(lane, 12, 9) = K_8_11
+          kl(lane, 12, 10) = K_9_11
+          kl(lane, 12, 11) = K_10_11
+          kl(lane, 12, 12) = K_11_11
+          kl(lane, 12, 13) = K_11_12
+          kl(lane, 12, 14) = K_11_13
+          kl(lane, 12, 15) = K_11_14
+          kl(lane, 12, 16) = K_11_15
+          kl(lane, 13, 1) = K_0_12
+          kl(lane, 13, 2) = K_1_12
+          kl(lane, 13, 3) = K_2_12
+          kl(lane, 13, 4) = K_3_12
+          kl(lane, 13, 5) = K_4_12
+          kl(lane, 13, 6) = K_5_12
+          kl(lane, 13, 7) = K_6_12
+          kl(lane, 13, 8) = K_7_12
+          kl(lane, 13, 9) = K_8_12
+          kl(lane, 13, 10) = K_9_12
+          kl(lane, 13, 11) = K_10_12
+          kl(lane, 13, 12) = K_11_12
+          kl(lane, 13, 13) = K_12_12
+          kl(lane, 13, 14) = K_12_13
+          kl(lane, 13, 15) = K_12_14
+          kl(lane, 13, 16) = K_12_15
+          kl(lane, 14, 1) = K_0_13
+          kl(lane, 14, 2) = K_1_13
+          kl(lane, 14, 3) = K_2_13
+          kl(lane, 14, 4) = K_3_13
+          kl(lane, 14, 5) = K_4_13
+          kl(lane, 14, 6) = K_5_13
+          kl(lane, 14, 7) = K_6_13
+          kl(lane, 14, 8) = K_7_13
+          kl(lane, 14, 9) = K_8_13
+          kl(lane, 14, 10) = K_9_13
+          kl(lane, 14, 11) = K_10_13
+          kl(lane, 14, 12) = K_11_13
+          kl(lane, 14, 13) = K_12_13
+          kl(lane, 14, 14) = K_13_13
+          kl(lane, 14, 15) = K_13_14
+          kl(lane, 14, 16) = K_13_15
+          kl(lane, 15, 1) = K_0_14
+          kl(lane, 15, 2) = K_1_14
+          kl(lane, 15, 3) = K_2_14
+          kl(lane, 15, 4) = K_3_14
+          kl(lane, 15, 5) = K_4_14
+          kl(lane, 15, 6) = K_5_14
+          kl(lane, 15, 7) = K_6_14
+          kl(lane, 15, 8) = K_7_14
+          kl(lane, 15, 9) = K_8_14
+          kl(lane, 15, 10) = K_9_14
+          kl(lane, 15, 11) = K_10_14
+          kl(lane, 15, 12) = K_11_14
+          kl(lane, 15, 13) = K_12_14
+          kl(lane, 15, 14) = K_13_14
+          kl(lane, 15, 15) = K_14_14
+          kl(lane, 15, 16) = K_14_15
+          kl(lane, 16, 1) = K_0_15
+          kl(lane, 16, 2) = K_1_15
+          kl(lane, 16, 3) = K_2_15
+          kl(lane, 16, 4) = K_3_15
+          kl(lane, 16, 5) = K_4_15
+          kl(lane, 16, 6) = K_5_15
+          kl(lane, 16, 7) = K_6_15
+          kl(lane, 16, 8) = K_7_15
+          kl(lane, 16, 9) = K_8_15
+          kl(lane, 16, 10) = K_9_15
+          kl(lane, 16, 11) = K_10_15
+          kl(lane, 16, 12) = K_11_15
+          kl(lane, 16, 13) = K_12_15
+          kl(lane, 16, 14) = K_13_15
+          kl(lane, 16, 15) = K_14_15
+          kl(lane, 16, 16) = K_15_15
+        end block
+      end do
+      do lane = 1, mlan
+        K(:, :, ib + lane - 1) = kl(lane, :, :)
+      end do
     end do
   end subroutine q8_selective_plane_stress_stiffness_batch
 
