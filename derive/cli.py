@@ -20,6 +20,13 @@ COMMANDS = ("list", "shapes", "stiffness", "locking", "chart", "kernel", "modes"
             "perf", "demo")
 
 
+class _Parser(argparse.ArgumentParser):
+    """argparse with a one-line error (what, where, what is allowed) and exit status 2."""
+
+    def error(self, message: str):
+        self.exit(2, f"{self.prog}: error: {message} (see {self.prog} --help)\n")
+
+
 def _load(name: str):
     try:
         return importlib.import_module(f"derive.commands.{name}_cmd")
@@ -30,14 +37,14 @@ def _load(name: str):
 
 
 def build_parser() -> argparse.ArgumentParser:
-    parser = argparse.ArgumentParser(
+    parser = _Parser(
         prog="derive",
         description="Derive, audit and generate finite element routines: shape functions, Jacobians, "
                     "B matrices, stiffness, locking, kernels and verification.",
         epilog="example:\n  derive stiffness Q4 --geometry rectangle\n\n" + CAUTION,
         formatter_class=argparse.RawDescriptionHelpFormatter)
     parser.add_argument("--version", action="version", version=f"derive {__version__}")
-    sub = parser.add_subparsers(dest="command", metavar="COMMAND")
+    sub = parser.add_subparsers(dest="command", metavar="COMMAND", parser_class=_Parser)
     for name in COMMANDS:
         mod = _load(name)
         if mod is None:

@@ -71,3 +71,11 @@ def test_python_m_derive_runs():
     res = subprocess.run([sys.executable, "-m", "derive", "stiffness", "Q4", "--what", "D"], capture_output=True,
                          text=True, timeout=120)
     assert res.returncode == 0 and "D[0,0]" in res.stdout
+
+
+def test_argparse_errors_are_one_line_exit_2(capsys):
+    with pytest.raises(SystemExit) as exc:
+        main(["stiffness", "Q4", "--geometry", "blob"])
+    err = capsys.readouterr().err
+    assert exc.value.code == 2 and "invalid choice: 'blob'" in err
+    assert len(err.strip().splitlines()) == 1  # one line, no usage block (common practice)
