@@ -26,7 +26,7 @@ import numpy as np
 from . import catalog
 from . import mesh as M
 from .errors import InputError
-from .output import Progress, write_atomic
+from .output import CAUTION, Progress, write_atomic
 
 PROBLEMS = ("cantilever", "membrane", "cylinder", "locking-mesh")
 CANTILEVER_MESHES = ("rectangular", "trapezoidal", "parallelogram")
@@ -619,7 +619,7 @@ def table_text(study: dict) -> str:
     out = ["| " + " | ".join(keys) + " |", "|" + "---|" * len(keys)]
     for r in rows:
         out.append("| " + " | ".join(_fmt(r.get(k)) for k in keys) + " |")
-    return "\n".join(out) + "\n"
+    return "\n".join(out) + "\n\n> " + CAUTION + "\n"
 
 
 def _fmt(v) -> str:

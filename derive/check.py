@@ -441,7 +441,7 @@ def demo_section(outdir) -> dict:
     """
     from pathlib import Path
 
-    from .output import emit_json, write_atomic
+    from .output import CAUTION, emit_json, write_atomic
     outdir = Path(outdir)
     nodes = [[0, 0], [sp.Rational(3, 5), 0], [sp.Rational(3, 5), sp.Rational(3, 10)], [0, sp.Rational(3, 10)]]
     mat = {"E": sp.Integer(32 * 10 ** 9), "nu": sp.Rational(1, 5), "t": sp.Rational(2, 5)}
@@ -458,7 +458,7 @@ def demo_section(outdir) -> dict:
     res_ok = check(good, given_numeric=K)
     report = {"as_found": {"match": res_bad.match, "mismatched": len(res_bad.mismatched),
                            "diagnosis": res_bad.diagnosis},
-              "fixed": {"match": res_ok.match}}
+              "fixed": {"match": res_ok.match}, "caution": CAUTION}
     write_atomic(outdir / "solver-check.json", emit_json(report) + "\n")
     lines = [f"in-house solver Q4 (0.6 m x 0.3 m element), as found: match {res_bad.match}, "
              f"{len(res_bad.mismatched)} of 64 entries differ; diagnosis: "

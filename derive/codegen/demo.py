@@ -15,7 +15,7 @@ import numpy as np
 import sympy as sp
 
 from ..element import element
-from ..output import emit_json, write_atomic
+from ..output import CAUTION, emit_json, write_atomic
 from ..stiffness import numeric_stiffness
 from ..symbols import E as E_s, a as a_s, b as b_s, nu as nu_s, t as t_s
 from .emit import generate
@@ -114,7 +114,7 @@ def demo_section(outdir: Path) -> dict:
             "entries and elements.  The closed form is derive's exact integration on the rectangle "
             f"{2 * hw:.2f} m x {2 * hh:.2f} m; the numeric route evaluates the same formulation point by point "
             "with lambdified operators.  Rigid-body residual: max |K r| / (max |K| max |r|) over the "
-            "three rigid motions.\n\n" + "\n".join(table) + "\n")
+            "three rigid motions.\n\n" + "\n".join(table) + "\n\n> " + CAUTION + "\n")
     files.append(write_atomic(Path(outdir) / "kernel-proof.md", text).name)
     files.append(write_atomic(Path(outdir) / "kernel-proof.json", emit_json(rows) + "\n").name)
     worst = max(max(r["vs_closed_form"], r["vs_numeric_route"]) for r in rows)

@@ -134,4 +134,5 @@ def run(args) -> int:
         print(line)
     for kind, path in files.items():
         print(f"{kind} written to {path}")
+    print(CAUTION)
     return 0

@@ -47,4 +47,5 @@ def run(args) -> int:
         print(line)
     if args.plot:
         print(f"mode shapes written to {res['plot']}")
+    print(CAUTION)
     return 0

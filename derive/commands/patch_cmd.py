@@ -43,4 +43,5 @@ def run(args) -> int:
     else:
         for line in summary_lines(res):
             print(line)
+        print(CAUTION)
     return 0 if res["passed"] else 1
