@@ -120,7 +120,7 @@ register_element(ElementInfo(
 def element_info(name: str) -> ElementInfo:
     key = name.strip().upper() if isinstance(name, str) else name
     if key not in ELEMENTS:
-        raise InputError(f"unknown element {name!r}; allowed: {', '.join(ELEMENTS)} (or a spec file with --spec)")
+        raise InputError(f"unknown element {name!r}; allowed: {', '.join(ELEMENTS)} (shapes, stiffness, kernel and check also take a spec .toml file)")
     return ELEMENTS[key]
 
 
