@@ -117,11 +117,37 @@ register_element(ElementInfo(
     "gauss-3x3", "gauss-2x2", ("full", "reduced", "selective", "bbar")))
 
 
+#: user-defined elements loaded from spec files in this process, by upper-case name; kept apart
+#: from ELEMENTS so the catalogue (and the committed kernel set) never changes by loading a file
+SPEC_ELEMENTS: dict[str, ElementInfo] = {}
+
+
 def element_info(name: str) -> ElementInfo:
+    """Catalogue entry by name, or the entry of a spec file when ``name`` is a ``.toml`` path
+    (a shipped example may be named by its file name alone)."""
+    if isinstance(name, str) and name.strip().lower().endswith(".toml"):
+        return _spec_info(name.strip())
     key = name.strip().upper() if isinstance(name, str) else name
-    if key not in ELEMENTS:
-        raise InputError(f"unknown element {name!r}; allowed: {', '.join(ELEMENTS)} (shapes, stiffness, kernel and check also take a spec .toml file)")
-    return ELEMENTS[key]
+    if key in ELEMENTS:
+        return ELEMENTS[key]
+    if key in SPEC_ELEMENTS:
+        return SPEC_ELEMENTS[key]
+    raise InputError(f"unknown element {name!r}; allowed: {', '.join(ELEMENTS)} or a spec .toml file")
+
+
+def _spec_info(path_text: str) -> ElementInfo:
+    from pathlib import Path
+
+    from .spec import SPEC_DIR, load_spec
+    path = Path(path_text)
+    if not path.exists() and (SPEC_DIR / path.name).exists():
+        path = SPEC_DIR / path.name
+    info, _ = load_spec(path)
+    key = info.name.upper()
+    if key in ELEMENTS:
+        raise InputError(f"spec {path.name}: its name {info.name!r} is a catalogue element; give the spec another name")
+    SPEC_ELEMENTS[key] = info
+    return info
 
 
 def check_variant(info: ElementInfo, variant: str) -> VariantInfo:

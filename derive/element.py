@@ -113,8 +113,11 @@ class Element:
 
     def numeric_stiffness(self, xy, E: float, nu: float, t: float = 1.0) -> np.ndarray:
         """Float64 stiffness for one element (nodes, 2) or a batch (n, nodes, 2)."""
-        if self.info.name not in catalog.ELEMENTS:
-            raise InputError("numeric batches are available for catalogue elements only")
+        key = self.info.name.upper()
+        if catalog.ELEMENTS.get(key, self.info) != self.info:
+            raise InputError(f"element {self.info.name!r} is not the catalogue element of that name")
+        if key not in catalog.ELEMENTS:
+            catalog.SPEC_ELEMENTS.setdefault(key, self.info)  # a spec element: make it resolvable by name
         return numeric_stiffness(self.info.name, self.variant, self.state, xy, E, nu, t)
 
 

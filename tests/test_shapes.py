@@ -88,3 +88,28 @@ def test_spec_file_errors(tmp_path):
     p.write_text('name = "X"\ndomain = "square"\nnodes = [[0,0]]\nbasis = ["1"]\ncolour = "red"\n')
     with pytest.raises(SpecError, match="unknown key"):
         load_spec(p)
+
+
+def test_spec_elements_reach_the_analyses(capsys):
+    from derive.cli import main
+    import json
+    # a spec element is analysed like a catalogue one: the Q8 spec reproduces Q8's bending ratio 1
+    # and its zero-energy count (3 rigid modes), and the cubic T10 passes the constant-strain patch
+    # (quadratic fields contain pure bending; isoparametric completeness: common practice)
+    assert main(["locking", "q8-serendipity.toml", "--aspect", "4", "--nu", "0.3", "--json"]) == 0
+    assert json.loads(capsys.readouterr().out)["ratio"] == 1
+    assert main(["modes", "q12-cubic-serendipity.toml", "--json"]) == 0
+    data = json.loads(capsys.readouterr().out)
+    assert data["rigid"] == 3 and data["spurious"] == 0
+    assert main(["patch", "t10-cubic-triangle.toml", "--json"]) == 0
+    assert json.loads(capsys.readouterr().out)["passed"] is True
+
+
+def test_spec_may_not_reuse_a_catalogue_name(tmp_path):
+    from derive import catalog
+    from derive.errors import InputError
+    p = tmp_path / "q4.toml"
+    p.write_text('name = "Q4"\ndomain = "square"\nnodes = [[-1,-1],[1,-1],[1,1],[-1,1]]\n'
+                 'basis = ["1","xi","eta","xi*eta"]\n')
+    with pytest.raises(InputError, match="catalogue element"):
+        catalog.element_info(str(p))

@@ -6,7 +6,7 @@ import sys
 from pathlib import Path
 
 from .. import catalog
-from ..element import Element, element, from_spec
+from ..element import Element, element
 from ..errors import InputError
 from ..material import STATES
 from ..output import CAUTION, FORMATS, emit_json
@@ -41,13 +41,9 @@ def resolve_element(name: str, variant: str = "full", state: str = "plane-stress
     if state not in STATES:
         raise InputError(f"unknown state {state!r}; allowed: {', '.join(STATES)}")
     path = Path(name)
-    if name.lower().endswith(".toml") or (path.exists() and path.is_file()):
-        from ..spec import SPEC_DIR, load_spec
-        if not path.exists() and (SPEC_DIR / path.name).exists():
-            path = SPEC_DIR / path.name
-        info, shapes = load_spec(path)
-        return from_spec(info, shapes, variant, state)
-    return element(name, variant, state)
+    if not name.lower().endswith(".toml") and path.exists() and path.is_file():
+        raise InputError(f"{name}: an element spec file must end in .toml")
+    return element(name, variant, state)  # catalogue names and spec .toml files alike
 
 
 def print_json(obj) -> None:
