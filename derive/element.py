@@ -129,10 +129,3 @@ def element(name: str, variant: str = "full", state: str = "plane-stress") -> El
     catalog.check_state(state)
     catalog.check_variant_state(v, state)
     return Element(info, variant, state, catalog.shape_set(info.name))
-
-
-def from_spec(info: ElementInfo, shapes: ShapeSet, variant: str = "full", state: str = "plane-stress") -> Element:
-    """Element for a user-defined spec (see :mod:`derive.spec`)."""
-    catalog.check_variant(info, variant)
-    catalog.check_state(state)
-    return Element(info, variant, state, shapes)

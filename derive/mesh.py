@@ -258,7 +258,7 @@ def _generate(element: str, nx: int, ny: int, position, label: str) -> Mesh:
     locals_ = _lift(element)
     I, J = np.meshgrid(np.arange(nx), np.arange(ny), indexing="ij")
     I, J = I.ravel(), J.ravel()  # cells, s-major
-    all_keys, all_xy, all_param, conns = [], [], [], []
+    all_keys, all_xy, all_param = [], [], []
     for loc in locals_:
         u = loc[None, :, 0]
         v = loc[None, :, 1]

@@ -133,8 +133,6 @@ def exact_blocks(form: Formulation, imap: IsoMap, state: str, material: dict, ru
             for i in range(rows):
                 for j in range(i):
                     out[i][j] = out[j][i]
-        if term.factor != 1:
-            pass  # factor already inside g
         dm = DomainMatrix(out, (rows, cols), F)
         blocks[term.block] = blocks[term.block] + dm if term.block in blocks else dm
     return blocks

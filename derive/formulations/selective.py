@@ -34,8 +34,6 @@ from __future__ import annotations
 
 from functools import lru_cache
 
-import sympy as sp
-
 from .. import material
 from ..errors import InputError
 from .base import B_op, Formulation, Term
