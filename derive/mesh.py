@@ -10,7 +10,8 @@ What is here
     on curved boundaries), :func:`from_corner_grid` (a grid of corner points with straight
     element edges and mid-side nodes at the edge midpoints), :func:`from_corners` (any
     corner mesh lifted to the element, e.g. a hand-drawn patch) or :func:`hand` (all nodes
-    given).  Triangles split every cell of a structured grid along its rising diagonal.
+    given).  Triangles split every cell of a structured grid along its rising diagonal, a
+    straight edge (``curved_diagonals=True`` is the explicit option for a mapped one).
   * :func:`assemble`: global stiffness in ``scipy.sparse`` CSR from a batch of element
     matrices.  The element-matrix provider is a parameter, ``provider(xy, E, nu, t)`` with
     ``xy`` of shape (n, nodes, 2) returning (n, ndof, ndof); by default
@@ -241,6 +242,10 @@ class Mesh:
         return {"elements": self.n_elements, "nodes": self.n_nodes}
 
 
+#: cell-local corners (u, v) of the two triangles a square cell is split into (rising diagonal)
+_TRIANGLE_CORNERS = (((0.0, 0.0), (1.0, 0.0), (1.0, 1.0)), ((0.0, 0.0), (1.0, 1.0), (0.0, 1.0)))
+
+
 def _lift(element: str):
     """Cell-local (u, v) in [0, 1]^2 of every element node, for a square cell or its two triangles."""
     ref = ref_element(element)
@@ -251,22 +256,59 @@ def _lift(element: str):
     return [np.stack([p + q, q], axis=1), np.stack([p, p + q], axis=1)]
 
 
-def _generate(element: str, nx: int, ny: int, position, label: str) -> Mesh:
-    """Shared structured generator: ``position(i, j, u, v) -> (x, y)`` for cell (i, j) and local (u, v)."""
+def _affine_nodes(element: str) -> list[np.ndarray]:
+    """Per cell piece (the square, or each of the two triangles), the boolean mask of the
+    triangle nodes that lie off the cell's grid-line edges (on the diagonal or inside the
+    triangle): these are placed by the affine map of the triangle's three corners so the
+    diagonal edge is straight."""
+    ref = ref_element(element)
+    out = []
+    for loc in _lift(element):
+        if ref.domain == "square":
+            out.append(np.zeros(ref.n_nodes, bool))
+            continue
+        u, v = loc.T
+        out.append(~(np.isclose(u, 0) | np.isclose(u, 1) | np.isclose(v, 0) | np.isclose(v, 1)))
+    return out
+
+
+def _generate(element: str, nx: int, ny: int, position, label: str, curved_diagonals: bool = False) -> Mesh:
+    """Shared structured generator: ``position(i, j, u, v) -> (x, y)`` for cell (i, j) and local (u, v).
+
+    Nodes on the cell's grid-line edges are placed at ``position``.  Triangle nodes on the
+    cell diagonal (and inside the triangle) are placed by the affine map of the triangle's
+    corners, so every diagonal is a straight edge with its mid-side node at the midpoint;
+    ``curved_diagonals=True`` places them at ``position`` too (the diagonal then follows the
+    cell's map and is curved where the map is not affine).
+    """
     nx, ny = _count(nx, "nx"), _count(ny, "ny")
     ref = ref_element(element)
     locals_ = _lift(element)
+    affine_masks = _affine_nodes(element)
     I, J = np.meshgrid(np.arange(nx), np.arange(ny), indexing="ij")
     I, J = I.ravel(), J.ravel()  # cells, s-major
     all_keys, all_xy, all_param = [], [], []
-    for loc in locals_:
+    for k_tri, loc in enumerate(locals_):
         u = loc[None, :, 0]
         v = loc[None, :, 1]
         ks = I[:, None] * _KEY + np.rint(u * _KEY).astype(np.int64)
         kt = J[:, None] * _KEY + np.rint(v * _KEY).astype(np.int64)
         x, y = position(I[:, None], J[:, None], np.broadcast_to(u, ks.shape), np.broadcast_to(v, ks.shape))
+        x = np.array(np.broadcast_to(x, ks.shape), dtype=float)
+        y = np.array(np.broadcast_to(y, ks.shape), dtype=float)
+        affine = affine_masks[k_tri]
+        if affine.any() and not curved_diagonals:
+            p, q = ref.nodes[affine, 0], ref.nodes[affine, 1]
+            L = (1 - p - q, p, q)  # area coordinates of the nodes in their triangle
+            cx = cy = 0.0
+            for Lk, (cu, cv) in zip(L, _TRIANGLE_CORNERS[k_tri]):
+                px, py = position(I[:, None], J[:, None], np.full((1, 1), cu), np.full((1, 1), cv))
+                cx = cx + Lk[None, :] * px
+                cy = cy + Lk[None, :] * py
+            x[:, affine] = cx
+            y[:, affine] = cy
         all_keys.append(kt * (nx * _KEY + 1) + ks)
-        all_xy.append(np.stack([np.broadcast_to(x, ks.shape), np.broadcast_to(y, ks.shape)], axis=2))
+        all_xy.append(np.stack([x, y], axis=2))
         all_param.append(np.stack([ks / (nx * _KEY), kt / (ny * _KEY)], axis=2))
     # interleave the two triangles of a cell so that element numbering follows the cells
     keys = np.stack(all_keys, axis=1).reshape(-1, ref.n_nodes)
@@ -293,13 +335,15 @@ def _count(n, what):
     return v
 
 
-def structured(element: str, nx: int, ny: int, mapping, label: str = "") -> Mesh:
+def structured(element: str, nx: int, ny: int, mapping, label: str = "", curved_diagonals: bool = False) -> Mesh:
     """Structured nx x ny mesh of a mapping of the unit square.
 
-    ``mapping(s, t) -> (x, y)`` is vectorised over arrays; every node (corner, mid-side,
-    interior) is placed at the mapping of its parametric position, so nodes follow curved
-    boundaries.  ``mapping`` may also be four corner points (a bilinear quadrilateral,
-    counter-clockwise from the corner at s = t = 0).
+    ``mapping(s, t) -> (x, y)`` is vectorised over arrays; every node on the grid lines
+    (corner, mid-side of a grid-line edge) and every quadrilateral interior node is placed
+    at the mapping of its parametric position, so nodes follow curved boundaries.
+    ``mapping`` may also be four corner points (a bilinear quadrilateral, counter-clockwise
+    from the corner at s = t = 0).  Triangles: the cell diagonal is a straight edge (its
+    nodes at the affine map of the triangle's corners) unless ``curved_diagonals=True``.
     """
     if not callable(mapping):
         mapping = bilinear(mapping)
@@ -307,14 +351,18 @@ def structured(element: str, nx: int, ny: int, mapping, label: str = "") -> Mesh
     def position(i, j, u, v):
         return mapping((i + u) / nx, (j + v) / ny)
 
-    return _generate(element, nx, ny, position, label)
+    return _generate(element, nx, ny, position, label, curved_diagonals)
 
 
-def from_corner_grid(element: str, X: np.ndarray, Y: np.ndarray, label: str = "") -> Mesh:
+def from_corner_grid(element: str, X: np.ndarray, Y: np.ndarray, label: str = "",
+                     curved_diagonals: bool = False) -> Mesh:
     """Mesh from a grid of element corners X[i, j], Y[i, j] (shape (nx+1, ny+1)).
 
-    Element edges are straight: mid-side and interior nodes are placed by the bilinear
-    map of each cell's four corners (mid-side nodes at the edge midpoints).
+    Element edges are straight: mid-side nodes at the edge midpoints (the triangles'
+    diagonals included), quadrilateral interior nodes at the bilinear map of the cell's
+    four corners.  ``curved_diagonals=True`` (an explicit choice, never the default)
+    places the triangles' diagonal nodes by the cell's bilinear map instead, which curves
+    the diagonal of a non-parallelogram cell.
     """
     X, Y = np.asarray(X, float), np.asarray(Y, float)
     if X.shape != Y.shape or X.ndim != 2 or min(X.shape) < 2:
@@ -328,7 +376,7 @@ def from_corner_grid(element: str, X: np.ndarray, Y: np.ndarray, label: str = ""
         y = w00 * Y[i, j] + w10 * Y[i + 1, j] + w11 * Y[i + 1, j + 1] + w01 * Y[i, j + 1]
         return x, y
 
-    return _generate(element, nx, ny, position, label)
+    return _generate(element, nx, ny, position, label, curved_diagonals)
 
 
 def from_corners(element: str, corner_nodes, corner_conn, label: str = "") -> Mesh:
