@@ -4,12 +4,15 @@ Each command lives in ``derive/commands/<name>_cmd.py`` with ``NAME``, ``HELP``,
 ``EXAMPLE``, ``add_arguments(parser)`` and ``run(args) -> exit status``; add a new
 command by adding its module name to ``COMMANDS``.
 
-Exit status: 0 success; 1 a check ran and failed; 2 bad input; 3 internal error.
+Exit status: 0 success; 1 a check ran and failed; 2 bad input (also an output that cannot be
+written: a full device, a closed pipe, a read-only folder); 3 internal error.
 """
 from __future__ import annotations
 
 import argparse
+import errno
 import importlib
+import os
 import sys
 
 from . import __version__
@@ -63,19 +66,52 @@ def main(argv: list[str] | None = None) -> int:
         parser.print_help()
         return 2
     try:
-        return int(args._run(args) or 0)
+        status = int(args._run(args) or 0)
+        sys.stdout.flush()  # a full device or a closed pipe shows here, not at interpreter exit
+        return status
     except DeriveError as exc:
         print(f"derive {args.command}: error: {exc}", file=sys.stderr)
         return 2
     except KeyboardInterrupt:
         print(f"derive {args.command}: interrupted", file=sys.stderr)
         return 130
-    except BrokenPipeError:
-        return 0
+    except OSError as exc:
+        return _os_error(args.command, exc)
     except Exception as exc:  # never a traceback for the user; say what failed in one line
         print(f"derive {args.command}: internal error: {type(exc).__name__}: {exc} "
               "(please report it with the command line)", file=sys.stderr)
         return 3
+
+
+def _os_error(command: str, exc: OSError) -> int:
+    """One line and exit 2 for an OS failure: stdout on a full device or a closed pipe, a
+    file that cannot be read or written (the path is named)."""
+    if exc.filename is None and exc.errno in (errno.EPIPE, errno.ENOSPC, errno.EIO, errno.EBADF, errno.EFBIG) \
+            or isinstance(exc, BrokenPipeError):
+        _silence_stdout()
+        what = "the output pipe was closed" if exc.errno == errno.EPIPE else (exc.strerror or str(exc)).lower()
+        _say(f"derive {command}: error: cannot write to standard output: {what}")
+        return 2
+    where = f"{exc.filename}: " if exc.filename else ""
+    _say(f"derive {command}: error: {where}{(exc.strerror or str(exc)).lower()}")
+    return 2
+
+
+def _silence_stdout() -> None:
+    """Point stdout at /dev/null so the interpreter's final flush cannot raise again."""
+    try:
+        fd = os.open(os.devnull, os.O_WRONLY)
+        os.dup2(fd, sys.stdout.fileno())
+        os.close(fd)
+    except (OSError, ValueError):
+        pass
+
+
+def _say(line: str) -> None:
+    try:
+        print(line, file=sys.stderr)
+    except OSError:
+        pass
 
 
 def entry() -> None:

@@ -13,13 +13,15 @@ Each capability adds a section: a function ``section(outdir) -> dict`` returning
 from __future__ import annotations
 
 import importlib
+import time
 from pathlib import Path
+from typing import Callable
 
 import numpy as np
 import sympy as sp
 
 from .element import element
-from .output import CAUTION, Progress, emit_json, matrix_latex, matrix_text, write_atomic
+from .output import CAUTION, OutputFolder, Progress, emit_json, matrix_latex, matrix_text, write_atomic
 from .symbols import E, a, b, nu, t
 
 SCENARIO = {
@@ -65,18 +67,32 @@ def core_section(outdir: Path) -> dict:
     return {"title": "Element matrices", "lines": lines, "files": [str(f.name) for f in files]}
 
 
-def run_demo(outdir: str | Path, show_progress: bool | None = None) -> dict:
-    """Run every section; write demo-report.md and demo-summary.json into ``outdir``."""
-    outdir = Path(outdir)
-    outdir.mkdir(parents=True, exist_ok=True)
+def run_demo(outdir: str | Path, show_progress: bool | None = None, force: bool = False,
+             on_section: Callable[[dict], None] | None = None) -> dict:
+    """Run every section; write demo-report.md and demo-summary.json into ``outdir``.
+
+    ``outdir`` follows the folder rule of :class:`derive.output.OutputFolder` (its parent must
+    exist; a folder holding files derive did not write needs ``force``).  ``on_section`` is
+    called with each section's result as soon as it finishes (the CLI prints it).
+    """
+    folder = OutputFolder(outdir, "-o", force=force)
+    outdir = folder.path
+    started = time.time()
     progress = Progress(len(SECTIONS), "demo", enabled=show_progress)
     results = []
-    for spec in SECTIONS:
-        module, func = spec.split(":")
-        fn = getattr(importlib.import_module(module), func)
-        progress.step(func)
-        results.append(fn(outdir))
-    progress.close()
+    try:
+        for spec in SECTIONS:
+            module, func = spec.split(":")
+            fn = getattr(importlib.import_module(module), func)
+            progress.step(f"running {module.rsplit('.', 1)[-1]}")
+            res = fn(outdir)
+            results.append(res)
+            if on_section is not None:
+                progress.clear()
+                on_section(res)
+    finally:
+        progress.close()
+        folder.adopt(started)
     report = [f"# derive demo: {SCENARIO['beam']}", "", f"> {CAUTION}", "",
               "Scenario (invented): checking the in-house solver used for a deep floor-slab transfer beam, "
               f"{SCENARIO['span_m']} m span, {SCENARIO['depth_m']} m deep, {SCENARIO['thickness_m']} m thick, "
@@ -89,7 +105,7 @@ def run_demo(outdir: str | Path, show_progress: bool | None = None) -> dict:
             report.append("")
             report.append("Files: " + ", ".join(f"`{f}`" for f in res["files"]))
         report.append("")
-    write_atomic(outdir / "demo-report.md", "\n".join(report))
+    folder.write("demo-report.md", "\n".join(report) + "\n")
     summary = {"scenario": SCENARIO, "sections": results, "caution": CAUTION}
-    write_atomic(outdir / "demo-summary.json", emit_json(summary) + "\n")
+    folder.write("demo-summary.json", emit_json(summary) + "\n")
     return summary

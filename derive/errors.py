@@ -27,6 +27,11 @@ class MaterialError(InputError):
     """Invalid material constants (E <= 0, nu outside its admissible range)."""
 
 
+class OutputError(InputError):
+    """An output path derive cannot or must not write (missing folder, a file where a folder
+    is expected, read-only, an existing file without --force, a full device)."""
+
+
 class SpecError(InputError):
     """Invalid user-defined element specification (TOML file)."""
 

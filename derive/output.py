@@ -2,6 +2,7 @@
 from __future__ import annotations
 
 import json
+import math
 import os
 import sys
 import tempfile
@@ -12,7 +13,7 @@ import numpy as np
 import sympy as sp
 
 from . import symbols
-from .errors import InputError
+from .errors import InputError, OutputError
 
 CAUTION = ("Caution: derive is a verification aid, not a design check. Defer to the governing local codes "
            "and to licensed engineering practice before relying on any result.")
@@ -131,7 +132,40 @@ def to_float_matrix(M: sp.Matrix) -> np.ndarray:
 
 
 def emit_json(obj) -> str:
-    return json.dumps(obj, indent=2, sort_keys=False, default=_json_default)
+    """Strict JSON (RFC 8259): no NaN or Infinity anywhere.
+
+    A non-finite number becomes ``null``; inside an object a sibling field ``<key>_note``
+    says why ("infinite: unbounded", "-infinite", "not a number"), so strict parsers (a
+    browser's JSON.parse, most standard libraries) read every file derive writes.
+    """
+    return json.dumps(_strict(obj), indent=2, sort_keys=False, default=_json_default, allow_nan=False)
+
+
+def _nonfinite_note(v: float) -> str:
+    if math.isnan(v):
+        return "not a number"
+    return "infinite: unbounded" if v > 0 else "-infinite: unbounded below"
+
+
+def _strict(o):
+    if isinstance(o, (np.floating, np.integer, np.bool_)):
+        o = o.item()
+    if isinstance(o, float):
+        return o if math.isfinite(o) else None
+    if isinstance(o, dict):
+        out = {}
+        for k, v in o.items():
+            if isinstance(v, (float, np.floating)) and not math.isfinite(float(v)):
+                out[k] = None
+                out[f"{k}_note"] = _nonfinite_note(float(v))
+            else:
+                out[k] = _strict(v)
+        return out
+    if isinstance(o, (list, tuple)):
+        return [_strict(v) for v in o]
+    if isinstance(o, np.ndarray):
+        return _strict(o.tolist())
+    return o
 
 
 def _json_default(o):
@@ -144,24 +178,184 @@ def _json_default(o):
     raise TypeError(type(o).__name__)
 
 
-def write_atomic(path: str | os.PathLike, data: str | bytes) -> Path:
-    """Write a file atomically (temporary file in the same folder, then rename)."""
+def write_atomic(path: str | os.PathLike, data: str | bytes, make_folder: bool = False) -> Path:
+    """Write a file atomically (temporary file in the same folder, then rename).
+
+    The parent folder must exist (``make_folder=True`` creates that one folder when *its*
+    parent exists; used for a folder derive owns, such as ``kernels/`` inside an output
+    folder).  Every OS failure becomes a one-line :class:`OutputError`; the temporary file
+    is removed, so no half-written file is left behind.
+    """
     path = Path(path)
-    path.parent.mkdir(parents=True, exist_ok=True)
+    if make_folder and not path.parent.exists():
+        _check_parent(path.parent, str(path.parent))
+        _os_call(lambda: path.parent.mkdir(), path.parent)
+    _check_parent(path, str(path))
+    if path.is_dir():
+        raise OutputError(f"{path}: is a folder; give a file name")
     mode = "wb" if isinstance(data, bytes) else "w"
-    fd, tmp = tempfile.mkstemp(prefix=f".{path.name}.", dir=str(path.parent))
+    fd, tmp = _os_call(lambda: tempfile.mkstemp(prefix=f".{path.name}.", dir=str(path.parent)), path)
     try:
         with os.fdopen(fd, mode, **({} if mode == "wb" else {"encoding": "utf-8"})) as fh:
             fh.write(data)
         os.chmod(tmp, 0o666 & ~_umask())  # mkstemp creates 0600; give the file the usual mode
         os.replace(tmp, path)
-    except BaseException:
+    except BaseException as exc:
         try:
             os.unlink(tmp)
         except OSError:
             pass
+        if isinstance(exc, OSError):
+            raise OutputError(f"{path}: cannot write: {_reason(exc)}") from None
         raise
     return path
+
+
+# --- output paths: one rule for every command ------------------------------------------------
+#
+# A FILE output (chart -o, bench --plot/--table/--vtu, modes --plot, ...) is checked with
+# ``check_output_file`` before any work starts:
+#   * its folder must exist and be a writable folder (derive never creates a file's folder:
+#     the message names the missing folder and the user creates it);
+#   * the path must not be a folder or a non-regular file (FIFO, device);
+#   * an existing file is replaced only with ``--force`` (the message says so).
+# A FOLDER output (demo -o, kernel -o DIR) is opened with ``OutputFolder``:
+#   * the path must not be a file; its parent must exist (the folder itself is created);
+#   * a folder that exists and holds files derive did not write (no manifest
+#     ``.derive-manifest.json`` lists them) is refused without ``--force``;
+#   * derive replaces only the file names it writes and never deletes anything; the
+#     manifest records what it wrote so later runs (and clean-ups) know derive's files.
+# Every failure is an OutputError (an InputError: one line, CLI exit status 2).
+
+MANIFEST = ".derive-manifest.json"
+
+
+def _reason(exc: OSError) -> str:
+    return (exc.strerror or type(exc).__name__).lower() if isinstance(exc, OSError) else str(exc)
+
+
+def _os_call(fn, path):
+    try:
+        return fn()
+    except OSError as exc:
+        raise OutputError(f"{path}: cannot write: {_reason(exc)}") from None
+
+
+def _check_parent(path: Path, shown: str, option: str = "") -> None:
+    """The folder that will hold ``path`` exists, is a folder and is writable."""
+    where = f"{option} {shown}" if option else shown
+    parent = path.parent if str(path.parent) else Path(".")
+    probe = parent
+    while not probe.exists() and probe != probe.parent:
+        probe = probe.parent
+    if not parent.exists():
+        if probe.exists() and not probe.is_dir():
+            raise OutputError(f"{where}: {probe} is a file, not a folder")
+        raise OutputError(f"{where}: folder {parent} does not exist; create it first")
+    if not parent.is_dir():
+        raise OutputError(f"{where}: {parent} is a file, not a folder")
+    if not os.access(parent, os.W_OK | os.X_OK):
+        raise OutputError(f"{where}: folder {parent} is not writable")
+
+
+def check_output_file(path: str | os.PathLike, option: str = "-o", force: bool = False) -> Path:
+    """Validate a file derive is about to write (before the work); returns the path.
+
+    Refuses (OutputError, exit 2) a missing, non-folder or read-only parent, a path that is
+    a folder or a special file, and an existing file unless ``force``.
+    """
+    p = Path(path)
+    shown = str(path)
+    if not p.name or shown.endswith(("/", os.sep)):
+        raise OutputError(f"{option} {shown}: give a file name, not a folder")
+    if p.is_dir():
+        raise OutputError(f"{option} {shown}: is a folder; give a file name inside it")
+    _check_parent(p, shown, option)
+    if p.exists() or p.is_symlink():
+        if not p.is_file():
+            raise OutputError(f"{option} {shown}: exists and is not a regular file")
+        if not force:
+            raise OutputError(f"{option} {shown}: file exists; add --force to replace it")
+        if not os.access(p, os.W_OK):
+            raise OutputError(f"{option} {shown}: file is read-only")
+    return p
+
+
+class OutputFolder:
+    """A folder derive writes several files into (see the rules above ``check_output_file``).
+
+    ``OutputFolder(path, option, force)`` validates and creates the folder;
+    ``target(name)`` checks one file name (inside the folder; an existing file derive did
+    not write needs ``force``); ``write(name, data)`` writes it atomically and records it in
+    the manifest; ``adopt(since)`` records files others wrote into the folder during this
+    run (modified after the time ``since``, from ``time.time()``).
+    """
+
+    def __init__(self, path: str | os.PathLike, option: str = "-o", force: bool = False):
+        self.path, self.option, self.force = Path(path), option, force
+        shown = str(path)
+        if self.path.exists() and not self.path.is_dir():
+            raise OutputError(f"{option} {shown}: is a file; give a folder name (derive writes several files into it)")
+        if not self.path.exists():
+            _check_parent(self.path, shown, option)
+            _os_call(lambda: self.path.mkdir(), self.path)
+        elif not os.access(self.path, os.W_OK | os.X_OK):
+            raise OutputError(f"{option} {shown}: folder is not writable")
+        self.written: set[str] = set(self._read_manifest())
+        if not force:
+            foreign = sorted(f for f in self._files() if f not in self.written)
+            if foreign:
+                more = f" and {len(foreign) - 3} more" if len(foreign) > 3 else ""
+                raise OutputError(f"{option} {shown}: folder holds files derive did not write ({', '.join(foreign[:3])}"
+                                  f"{more}); add --force to write into it (derive replaces only its own file names "
+                                  "and deletes nothing), or choose another folder")
+
+    def _files(self) -> list[str]:
+        out = []
+        for p in self.path.rglob("*"):
+            if p.name != MANIFEST and not p.is_dir():
+                out.append(p.relative_to(self.path).as_posix())
+        return out
+
+    def _read_manifest(self) -> list[str]:
+        m = self.path / MANIFEST
+        try:
+            data = json.loads(m.read_text(encoding="utf-8"))
+            return [str(f) for f in data.get("files", [])]
+        except (OSError, ValueError, AttributeError):
+            return []
+
+    def target(self, name: str) -> Path:
+        rel = Path(name)
+        if rel.is_absolute() or ".." in rel.parts or not rel.parts:
+            raise OutputError(f"{self.option} {self.path}: {name!r} is not a file name inside the folder")
+        p = self.path / rel
+        if p.is_dir():
+            raise OutputError(f"{self.option} {self.path}: {rel.as_posix()} is a folder; derive writes a file there")
+        if p.exists() and rel.as_posix() not in self.written and not self.force:
+            raise OutputError(f"{self.option} {self.path}: {rel.as_posix()} exists and derive did not write it; "
+                              "add --force to replace it")
+        return p
+
+    def write(self, name: str, data: str | bytes) -> Path:
+        p = write_atomic(self.target(name), data, make_folder=True)
+        self.written.add(Path(name).as_posix())
+        self.save_manifest()
+        return p
+
+    def adopt(self, since: float) -> None:
+        for f in self._files():
+            try:
+                if (self.path / f).stat().st_mtime >= since - 1:
+                    self.written.add(f)
+            except OSError:
+                pass
+        self.save_manifest()
+
+    def save_manifest(self) -> None:
+        data = {"written_by": "derive", "note": "files derive wrote into this folder (it deletes none of them)",
+                "files": sorted(self.written)}
+        write_atomic(self.path / MANIFEST, json.dumps(data, indent=1) + "\n")
 
 
 def _umask() -> int:
@@ -183,7 +377,11 @@ class Progress:
             sys.stderr.write(f"\r{self.label}: {self.done}/{self.total} {what[:50]:<50}")
             sys.stderr.flush()
 
-    def close(self) -> None:
+    def clear(self) -> None:
+        """Erase the line (before printing a result on stdout); the next step redraws it."""
         if self.enabled:
             sys.stderr.write("\r" + " " * 80 + "\r")
             sys.stderr.flush()
+
+    def close(self) -> None:
+        self.clear()

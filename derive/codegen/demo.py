@@ -48,7 +48,7 @@ def demo_section(outdir: Path) -> dict:
     for name, variant in KERNELS:
         (ks,) = generate(name, variant, SCENARIO["state"], langs=("c",))
         for src in ks.sources:
-            p = write_atomic(kdir / Path(src.path).name, src.text)
+            p = write_atomic(kdir / Path(src.path).name, src.text, make_folder=True)
             files.append(f"kernels/{p.name}")
         lines.append(f"{name} {variant}: C kernel {ks.stem}.c/.h written ({ks.meta['flops']['stiffness']} flops "
                      f"per element stiffness; rules {', '.join(sorted(set(ks.meta['rules'].values())))}"

@@ -4,8 +4,8 @@ from __future__ import annotations
 from .. import benchmarks as B
 from ..errors import InputError
 from ..mesh import write_vtu
-from ..output import CAUTION, parse_number, write_atomic
-from .common import add_output_args, output_format, print_json
+from ..output import CAUTION, check_output_file, parse_number, write_atomic
+from .common import add_force_arg, add_output_args, output_format, print_json
 
 NAME = "bench"
 HELP = "benchmark meshes: cantilever, membrane (tapered panel), thick cylinder, locking-mesh chart"
@@ -39,6 +39,7 @@ def add_arguments(p) -> None:
     p.add_argument("--table", metavar="FILE", help="write the result table (Markdown)")
     p.add_argument("--vtu", metavar="FILE", help="write the deformed mesh of the (finest) run as VTK .vtu")
     p.add_argument("--scale", default="1", help="deformation scale for --vtu (default 1)")
+    add_force_arg(p, "replace existing --plot / --table / --vtu files (their folders must exist)")
     add_output_args(p, formats=False)
 
 
@@ -68,6 +69,9 @@ def run(args) -> int:
     prob = args.problem
     if args.plot:
         B.plot_format(args.plot)          # refuse a bad file name before the runs
+    for option in ("plot", "table", "vtu"):
+        if getattr(args, option):
+            check_output_file(getattr(args, option), f"--{option}", args.force)
     scale = float(parse_number(args.scale, "--scale"))
     if prob == "cantilever":
         meshes = B.CANTILEVER_MESHES if args.mesh in (None, "all") else (args.mesh,)

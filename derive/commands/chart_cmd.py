@@ -5,8 +5,8 @@ from pathlib import Path
 
 from .. import charts
 from ..errors import InputError
-from ..output import CAUTION, parse_number
-from .common import add_output_args, output_format, print_json
+from ..output import CAUTION, check_output_file, parse_number
+from .common import add_force_arg, add_output_args, output_format, print_json
 from .locking_cmd import parse_nus
 
 NAME = "chart"
@@ -35,7 +35,9 @@ def add_arguments(p) -> None:
     p.add_argument("--tolerance", default="0.05", help="tolerance band / contour (default 0.05; 'none' to omit)")
     p.add_argument("--distortion", default="taper=0:0.6",
                    help="distortion chart: KIND=lo:hi with KIND skew (degrees), taper or trapezoid (default taper=0:0.6)")
-    p.add_argument("-o", "--output", required=True, help="chart file to write: .png, .svg or .pdf")
+    p.add_argument("-o", "--output", required=True,
+                   help="chart file to write: .png, .svg or .pdf (its folder must exist)")
+    add_force_arg(p, "replace an existing chart file")
     add_output_args(p, formats=False)
 
 
@@ -50,6 +52,7 @@ def run(args) -> int:
     out = Path(args.output)
     if out.suffix.lower() not in charts.FORMATS:
         raise InputError(f"-o {args.output!r}: the chart file must end in {', '.join(charts.FORMATS)}")
+    check_output_file(out, "-o", args.force)
     tol = None if args.tolerance.strip().lower() == "none" else float(parse_number(args.tolerance, "--tolerance"))
     specs = charts.parse_specs(args.elements)
     if args.kind == "locking":

@@ -52,3 +52,9 @@ def print_json(obj) -> None:
 
 def caution_line() -> str:
     return CAUTION
+
+
+def add_force_arg(p: argparse.ArgumentParser, what: str = "replace an existing output file") -> None:
+    """``--force``: the one switch that lets a command replace or write into what exists
+    (see the output-path rules in derive/output.py)."""
+    p.add_argument("--force", action="store_true", help=what)

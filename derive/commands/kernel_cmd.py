@@ -117,7 +117,7 @@ def run(args) -> int:
         for src in ks.sources:
             fname = Path(src.path).name
             if args.output:
-                path = write_atomic(Path(args.output) / fname, src.text)
+                path = write_atomic(Path(args.output) / fname, src.text, make_folder=True)
                 written.append(str(path))
                 entry["files"].append(str(path))
             else:

@@ -3,8 +3,8 @@ from __future__ import annotations
 
 from .. import catalog
 from ..modes import GEOMETRIES, plot_modes, summary_lines, zero_energy_modes
-from ..output import CAUTION, parse_number
-from .common import add_output_args, output_format, print_json
+from ..output import CAUTION, check_output_file, parse_number
+from .common import add_force_arg, add_output_args, output_format, print_json
 from .stiffness_cmd import parse_nodes
 
 NAME = "modes"
@@ -27,6 +27,7 @@ def add_arguments(p) -> None:
     p.add_argument("--nu", default="0.3", help="Poisson's ratio used for the eigenvalues (default 0.3; E = 1, t = 1)")
     p.add_argument("--tol", default="1e-8", help="zero threshold relative to the largest eigenvalue (default 1e-8)")
     p.add_argument("--plot", metavar="FILE", help="write the deformed shapes of the zero-energy modes (.png, .svg, .pdf)")
+    add_force_arg(p, "replace an existing --plot file (its folder must exist)")
     add_output_args(p, formats=False)
 
 
@@ -34,6 +35,7 @@ def run(args) -> int:
     if args.plot:
         from ..benchmarks import plot_format
         plot_format(args.plot)            # refuse a bad file name before the analysis
+        check_output_file(args.plot, "--plot", args.force)
     nu = float(parse_number(args.nu, "--nu"))
     tol = float(parse_number(args.tol, "--tol"))
     nodes = [[float(u), float(v)] for u, v in parse_nodes(args.nodes)] if args.nodes else None
