@@ -25,26 +25,13 @@ import numpy as np
 
 from . import catalog
 from . import mesh as M
+from .analysis import analyse
 from .errors import InputError
 from .output import CAUTION, Progress, write_atomic
+from .problems import CANTILEVER, COOK, COOK_CONVERGED, COOK_CONVERGED_METHOD, CYLINDER
 
 PROBLEMS = ("cantilever", "membrane", "cylinder", "locking-mesh")
 CANTILEVER_MESHES = ("rectangular", "trapezoidal", "parallelogram")
-
-CANTILEVER = {"length": 6.0, "depth": 0.2, "t": 0.1, "E": 1.0e7, "nu": 0.30, "nx": 6,
-              # MacNeal & Harder (1985), from memory
-              "reference": {"shear": 0.1081, "extension": 3.0e-5}}
-COOK = {"corners": ((0.0, 0.0), (48.0, 44.0), (48.0, 60.0), (0.0, 44.0)), "E": 1.0, "nu": 1.0 / 3.0, "t": 1.0,
-        "load": 1.0, "corner": (48.0, 60.0), "mid": (48.0, 52.0),
-        # Cook (1974) / often-quoted converged mid-edge value, from memory
-        "quoted_mid": 23.96}
-# converged values established in this project: Q9 and Q8 refinement studies to 256 x 256 with
-# Richardson extrapolation of the last three levels agree to 1e-4 (Q9: 25.18928 / 23.96774,
-# Q8: 25.18922 / 23.96774); see notes/verification.md
-COOK_CONVERGED = {"corner": 25.189, "mid": 23.968}
-CYLINDER = {"inner": 3.0, "outer": 9.0, "E": 1000.0, "p": 1.0, "t": 1.0,
-            "nus": (0.3, 0.49, 0.499, 0.4999)}
-
 
 # ---------------------------------------------------------------------------------------------
 # closed forms
@@ -224,7 +211,7 @@ def run_cantilever(element: str, variant: str = "full", kind: str = "rectangular
     total = (0.0, 1.0) if load == "shear" else (1.0, 0.0)
     f = M.uniform_edge_force(mesh, "right", total, "plane-stress", c["t"])
     fixed = M.fix(mesh, "left", "uv")
-    sol = M.analyse(mesh, f, fixed, variant, "plane-stress", c["E"], c["nu"], c["t"], provider)
+    sol = analyse(mesh, f, fixed, variant, "plane-stress", c["E"], c["nu"], c["t"], provider)
     tip = np.nonzero(mesh.side("right"))[0]
     comp = 1 if load == "shear" else 0
     value = float(sol.U[tip, comp].mean())
@@ -240,7 +227,7 @@ def run_membrane(element: str, variant: str = "full", n: int = 16, provider=None
     mesh = membrane_mesh(element, n)
     f = M.uniform_edge_force(mesh, "right", (0.0, c["load"]), "plane-stress", c["t"])
     fixed = M.fix(mesh, "left", "uv")
-    sol = M.analyse(mesh, f, fixed, variant, "plane-stress", c["E"], c["nu"], c["t"], provider)
+    sol = analyse(mesh, f, fixed, variant, "plane-stress", c["E"], c["nu"], c["t"], provider)
     corner = sol.displacement_at(*c["corner"])[1]
     mid = sol.displacement_at(*c["mid"])[1]
     ref = COOK_CONVERGED["mid"] or c["quoted_mid"]
@@ -256,7 +243,7 @@ def run_cylinder(element: str, variant: str = "full", n: int = 8, nu: float = 0.
     mesh = cylinder_mesh(element, n, n_theta)
     f = M.pressure_load(mesh, "left", c["p"], "plane-strain", c["t"])
     fixed = {**M.fix(mesh, "bottom", "v"), **M.fix(mesh, "top", "u")}
-    sol = M.analyse(mesh, f, fixed, variant, "plane-strain", c["E"], nu, c["t"], provider)
+    sol = analyse(mesh, f, fixed, variant, "plane-strain", c["E"], nu, c["t"], provider)
     bore = np.nonzero(mesh.side("left"))[0]
     P = mesh.nodes[bore]
     ur = (sol.U[bore, 0] * P[:, 0] + sol.U[bore, 1] * P[:, 1]) / np.hypot(P[:, 0], P[:, 1])
@@ -655,7 +642,7 @@ def demo_section(outdir: Path) -> dict:
             f = M.edge_load(m, "top", (0.0, -q / t), "plane-stress", t)
             # end faces held vertically (shear-carrying supports, as in beam theory), one horizontal restraint
             fixed = {**M.fix(m, "left", "v"), **M.fix(m, "right", "v"), 2 * m.node_at(0.0, 0.0): 0.0}
-            sol = M.analyse(m, f, fixed, var, "plane-stress", E, nu, t)
+            sol = analyse(m, f, fixed, var, "plane-stress", E, nu, t)
             v = -sol.displacement_at(L / 2, h / 2)[1]
             rows.append((el, var, nx, ny, v))
             last = sol

@@ -25,8 +25,8 @@ What is here
     t (plane states) or 2 pi r (axisymmetric, full ring), consistent with the stiffness.
   * supports (:func:`fix`), :func:`solve` (elimination of prescribed DOFs, sparse LU),
     :func:`mechanism_check` (lowest eigenvalues of the supported stiffness: spurious modes
-    that survive the supports, near-mechanisms; run by :func:`analyse`, which also warns when
-    the element variant has spurious zero-energy modes, :func:`spurious_mode_warning`),
+    that survive the supports, near-mechanisms; run by :func:`derive.analysis.analyse`, which
+    also warns when the element variant has spurious zero-energy modes),
     stresses at the rule's points (:meth:`Solution.point_stresses`) and averaged at the
     nodes (:meth:`Solution.nodal_stresses`), and VTK XML ``.vtu`` export of the deformed
     mesh (:func:`write_vtu`).
@@ -56,6 +56,7 @@ from .errors import GeometryError, InputError
 from .material import D as D_matrix
 from .material import check_material
 from .output import write_atomic
+from .problems import COOK
 from .symbols import eta, xi
 
 SIDES = ("left", "right", "bottom", "top")
@@ -995,40 +996,8 @@ def _extrapolation(ref: RefElement, pts: np.ndarray) -> np.ndarray:
     return np.full((ref.n_nodes, npt), 1.0 / npt)
 
 
-def analyse(mesh: Mesh, f: np.ndarray, fixed: dict[int, float], variant: str = "full",
-            state: str = "plane-stress", E: float = 1.0, nu: float = 0.3, t: float = 1.0,
-            provider: Provider | None = None, check: bool = True) -> Solution:
-    """Assemble, solve and return a :class:`Solution`.
-
-    With ``check`` (default) the solution carries the element-mode warning of the variant
-    (:func:`spurious_mode_warning`) and the result of :func:`mechanism_check`; a detected
-    near-mechanism sets ``Solution.reliable = False`` and adds a warning.
-    """
-    asm = assemble(mesh, variant, state, E, nu, t, provider)
-    diag: dict = {}
-    u, reactions, secs = solve(asm.K, f, fixed, diag)
-    warnings = list(diag.get("warnings", []))
-    reliable, checks = True, {}
-    secs_check = 0.0
-    if check:
-        t0 = time.perf_counter()
-        elem = spurious_mode_warning(mesh.element, variant, state)
-        if elem:
-            warnings.insert(0, elem)
-        checks = mechanism_check(mesh, asm.K, fixed, variant, state, E, nu, t, lu=diag.get("_lu"),
-                                 spurious=element_spurious_modes(mesh.element, variant, state)["spurious"])
-        if checks.get("mechanism"):
-            reliable = False
-        warnings += checks.get("warnings", [])
-        secs_check = time.perf_counter() - t0
-    return Solution(mesh, variant, state, E, nu, t, u, reactions, f, asm.route,
-                    {"element_matrices": asm.element_seconds, "scatter": asm.scatter_seconds, "solve": secs,
-                     "mechanism_check": secs_check},
-                    warnings, reliable, checks)
-
-
 # ---------------------------------------------------------------------------------------------
-# element spurious modes and the mechanism / near-mechanism check
+# the mechanism / near-mechanism check of a supported stiffness
 
 #: largest number of free DOFs for which :func:`mechanism_check` computes eigenvalues
 #: (shift-invert on the solve's own LU factors; measured about 4x the factorization time,
@@ -1041,32 +1010,6 @@ SPURIOUS_ENERGY_RATIO = 1e-5
 #: below ISOLATED_GAP (one mode far softer than every other: a near-mechanism)
 ISOLATED_ABS = 1e-10
 ISOLATED_GAP = 1e-6
-
-
-@lru_cache(maxsize=None)
-def element_spurious_modes(element: str, variant: str, state: str) -> dict:
-    """Spurious zero-energy modes of one element of the variant (``derive.modes``, square
-    geometry), cached per element / variant / state: {"spurious": n, "communicable": bool}."""
-    from .modes import zero_energy_modes
-    try:
-        r = zero_energy_modes(element, variant, state)
-    except Exception as exc:  # a variant the eigen-analysis cannot handle: say so, do not guess
-        return {"spurious": None, "communicable": None, "error": str(exc)}
-    return {"spurious": int(r["spurious"]), "communicable": bool(r["communicable"])}
-
-
-def spurious_mode_warning(element: str, variant: str, state: str) -> str | None:
-    """One-line warning when the element variant has spurious zero-energy modes (None otherwise)."""
-    info = element_spurious_modes(catalog.element_info(element).name, variant, state)
-    n = info["spurious"]
-    if n is None:
-        return f"{element} {variant} ({state}): spurious zero-energy modes not determined ({info.get('error')})"
-    if not n:
-        return None
-    spread = "communicable: they can spread through a mesh" if info["communicable"] else \
-        "not communicable in free-free test meshes"
-    return (f"{element} {variant} ({state}) has {n} spurious zero-energy element mode{'s' if n > 1 else ''} "
-            f"({spread}; see `derive modes {element} --variant {variant}`)")
 
 
 def mechanism_check(mesh: Mesh, K: sps.spmatrix, fixed: dict[int, float], variant: str, state: str,
@@ -1228,7 +1171,6 @@ def write_vtu(path, sol: Solution, scale: float = 1.0):
 # benchmark (derive perf --mesh)
 
 def _membrane_problem(element: str, n: int):
-    from .benchmarks import COOK
     mesh = structured(element, n, n, COOK["corners"])
     f = uniform_edge_force(mesh, "right", (0.0, COOK["load"]), "plane-stress", COOK["t"])
     fixed = fix(mesh, "left", "uv")

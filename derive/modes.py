@@ -164,7 +164,7 @@ def _outline_lines(name: str, n: int = 24):
 
 def plot_modes(result: dict, path) -> str:
     """Deformed shapes of the zero-energy modes (rigid first, then spurious) into an image file."""
-    from .benchmarks import plot_format
+    from .plotting import plot_format
     fmt = plot_format(path)
     import matplotlib
     matplotlib.use("Agg")

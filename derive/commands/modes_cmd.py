@@ -33,7 +33,7 @@ def add_arguments(p) -> None:
 
 def run(args) -> int:
     if args.plot:
-        from ..benchmarks import plot_format
+        from ..plotting import plot_format
         plot_format(args.plot)            # refuse a bad file name before the analysis
         check_output_file(args.plot, "--plot", args.force)
     nu = float(parse_number(args.nu, "--nu"))
