@@ -12,9 +12,19 @@ Example (``derive/specs/q8-serendipity.toml``)::
 
 Node coordinates are numbers or strings holding a fraction ("1/3").  Shape functions come
 from the generalised Vandermonde matrix (:func:`derive.shapes.from_nodes`).
+
+A spec's text reaches generated kernel source (the name, the description, the file name), so
+it is validated here before anything else sees it: the name is a short identifier
+(:data:`NAME_PATTERN`) that does not collide with a catalogue name after normalisation
+(strip, case-fold), the description is printable ASCII, and the size is bounded
+(:data:`MAX_NODES`, :data:`MAX_DEGREE`, :data:`MAX_TOTAL_DEGREE`, :data:`MAX_FILE_BYTES`)
+so that a crafted file cannot make the derivation run for minutes.  The code generator
+escapes every literal per target language as well (defence in depth).
 """
 from __future__ import annotations
 
+import math
+import re
 import sys
 from pathlib import Path
 
@@ -32,6 +42,20 @@ else:  # pragma: no cover
 SPEC_DIR = Path(__file__).parent / "specs"
 KEYS = ("name", "description", "domain", "nodes", "basis", "full_rule", "reduced_rule")
 
+#: a spec name: a letter, then letters, digits, "_" or "-"; at most 16 characters (it becomes
+#: part of C and Fortran identifiers, whose length Fortran limits to 63)
+NAME_PATTERN = re.compile(r"[A-Za-z][A-Za-z0-9_-]{0,15}")
+DESCRIPTION_MAX = 200
+#: size limits: 27 nodes admits every element up to the 27-node Lagrange hexahedron; the
+#: per-coordinate and total degree limits admit everything up to a quartic Lagrange square
+#: (Q25) and a quintic triangle (T21).  Beyond them the exact derivation runs for minutes.
+MAX_NODES = 27
+MAX_DEGREE = 6
+MAX_TOTAL_DEGREE = 8
+MAX_FILE_BYTES = 65536
+#: a node coordinate written as text (a fraction such as "1/3") is at most this long
+MAX_COORD_CHARS = 40
+
 
 def shipped_specs() -> list[Path]:
     return sorted(SPEC_DIR.glob("*.toml"))
@@ -40,25 +64,22 @@ def shipped_specs() -> list[Path]:
 def load_spec(path) -> tuple[ElementInfo, ShapeSet]:
     """Read and validate a spec file; every problem is a one-line :class:`SpecError`."""
     path = Path(path)
-    where = path.name
-    try:
-        data = tomllib.loads(path.read_text(encoding="utf-8"))
-    except FileNotFoundError:
-        raise SpecError(f"spec file {path} not found") from None
-    except UnicodeDecodeError:
-        raise SpecError(f"{where}: not a UTF-8 text file") from None
-    except tomllib.TOMLDecodeError as exc:
-        raise SpecError(f"{where}: not valid TOML ({exc})") from None
+    where = _printable(path.name)
+    data = _read(path, where)
     unknown = sorted(set(data) - set(KEYS))
     if unknown:
         raise SpecError(f"{where}: unknown key(s) {', '.join(unknown)}; allowed: {', '.join(KEYS)}")
     for key in ("name", "domain", "nodes", "basis"):
         if key not in data:
             raise SpecError(f"{where}: missing key {key!r} (required: name, domain, nodes, basis)")
-    name = str(data["name"])
+    name = check_name(data["name"], where)
+    description = _check_description(data.get("description", "user-defined element"), where)
     domain = str(data["domain"])
     if not isinstance(data["nodes"], list) or not data["nodes"]:
         raise SpecError(f"{where}: 'nodes' must be a list of [xi, eta] pairs")
+    if len(data["nodes"]) > MAX_NODES:
+        raise SpecError(f"{where}: {len(data['nodes'])} nodes; a spec has at most {MAX_NODES} nodes "
+                        "(the limit of the exact derivation's running time)")
     nodes = []
     for k, node in enumerate(data["nodes"], start=1):
         if not isinstance(node, list) or len(node) != 2:
@@ -67,8 +88,14 @@ def load_spec(path) -> tuple[ElementInfo, ShapeSet]:
     basis_raw = data["basis"]
     if isinstance(basis_raw, list):
         basis_raw = ",".join(str(v) for v in basis_raw)
+    basis_text = str(basis_raw)
+    bad = re.search(r"[^A-Za-z0-9_*^ ,]", basis_text)
+    if bad:
+        raise SpecError(f"{where}: basis: character {bad.group()!r} is not allowed (allowed: ASCII monomials such "
+                        "as xi^2*eta, separated by commas)")
     try:
-        basis = monomials(str(basis_raw))
+        basis = monomials(basis_text)
+        _check_degree(basis, where)
         shapes = from_nodes(name, domain, nodes, basis)
     except SpecError as exc:
         raise SpecError(f"{where}: {exc}") from None
@@ -83,10 +110,85 @@ def load_spec(path) -> tuple[ElementInfo, ShapeSet]:
             raise SpecError(f"{where}: {exc}") from None
         if rl.domain != domain:
             raise SpecError(f"{where}: rule {r} is for the {rl.domain}, the element is on the {domain}")
-    info = ElementInfo(name=name, description=str(data.get("description", "user-defined element")), domain=domain,
+    info = ElementInfo(name=name, description=description, domain=domain,
                        nodes=tuple(nodes), basis=basis, full_rule=full_rule, reduced_rule=reduced_rule,
-                       variants=("full", "reduced"), source=str(path.name))
+                       variants=("full", "reduced"), source=where)
     return info, shapes
+
+
+def _read(path: Path, where: str) -> dict:
+    """The parsed TOML of a spec file of bounded size; every failure a one-line SpecError."""
+    try:
+        with open(path, "rb") as fh:
+            raw = fh.read(MAX_FILE_BYTES + 1)
+    except FileNotFoundError:
+        raise SpecError(f"spec file {_printable(str(path))} not found") from None
+    except IsADirectoryError:
+        raise SpecError(f"spec file {_printable(str(path))} is a folder, not a file") from None
+    except OSError as exc:
+        raise SpecError(f"spec file {_printable(str(path))}: cannot be read ({exc.strerror or exc})") from None
+    if len(raw) > MAX_FILE_BYTES:
+        raise SpecError(f"{where}: larger than {MAX_FILE_BYTES // 1024} kB; a spec file is at most "
+                        f"{MAX_FILE_BYTES // 1024} kB")
+    try:
+        return tomllib.loads(raw.decode("utf-8"))
+    except UnicodeDecodeError:
+        raise SpecError(f"{where}: not a UTF-8 text file") from None
+    except tomllib.TOMLDecodeError as exc:
+        raise SpecError(f"{where}: not valid TOML ({_printable(str(exc))})") from None
+    except ValueError as exc:  # e.g. an integer of more than 4300 digits
+        what = "an integer of more than 4300 digits" if "digits" in str(exc) else _printable(str(exc))
+        raise SpecError(f"{where}: not valid TOML ({what})") from None
+
+
+def _printable(text: str, limit: int = 80) -> str:
+    """``text`` safe to print on one terminal line: control and non-ASCII characters escaped, shortened."""
+    out = text.encode("ascii", "backslashreplace").decode("ascii")
+    out = "".join(c if c.isprintable() else repr(c)[1:-1] for c in out)
+    return out if len(out) <= limit else out[:limit] + "..."
+
+
+def check_name(value, where: str) -> str:
+    """A spec's name, validated: an identifier-like short ASCII name, not a catalogue name.
+
+    The name becomes part of generated source (identifiers, string literals, comments), of
+    file names and of terminal output, so nothing else is allowed through.
+    """
+    from .catalog import ELEMENTS
+    if not isinstance(value, str):
+        raise SpecError(f"{where}: 'name' must be a string such as \"Q12\", got {type(value).__name__}")
+    norm = value.strip().casefold()
+    for cat in ELEMENTS:
+        if norm == cat.casefold():
+            raise SpecError(f"{where}: name {_printable(value)!r} collides with the catalogue element {cat} "
+                            "(names are compared stripped and case-folded); give the spec another name")
+    if not NAME_PATTERN.fullmatch(value):
+        raise SpecError(f"{where}: name {_printable(value, 40)!r} is not allowed; a name is a letter followed by "
+                        "letters, digits, '_' or '-', at most 16 characters (e.g. \"Q12\")")
+    return value
+
+
+def _check_description(value, where: str) -> str:
+    if not isinstance(value, str):
+        raise SpecError(f"{where}: 'description' must be a string")
+    if len(value) > DESCRIPTION_MAX or not all(" " <= c <= "~" for c in value):
+        raise SpecError(f"{where}: description {_printable(value, 40)!r} is not allowed; it must be printable ASCII "
+                        f"on one line, at most {DESCRIPTION_MAX} characters")
+    return value
+
+
+def _check_degree(basis, where: str) -> None:
+    """Refuse bases whose degree makes the exact derivation unbounded (domain-agnostic)."""
+    for k, m in enumerate(basis, start=1):
+        if m.is_number:
+            continue
+        syms = sorted(m.free_symbols, key=str)
+        poly = sp.Poly(m, *syms)
+        per = max(poly.degree(s) for s in syms)
+        total = poly.total_degree()
+        if per > MAX_DEGREE or total > MAX_TOTAL_DEGREE:
+            raise SpecError(f"basis entry {k} ({_printable(str(m).replace('**', '^'), 40)}) has degree {per} in one "
+                            f"coordinate and {total} in total; the limits are {MAX_DEGREE} and {MAX_TOTAL_DEGREE}")
 
 
 def _coordinate(v, where: str, k: int) -> sp.Rational:
@@ -95,17 +197,28 @@ def _coordinate(v, where: str, k: int) -> sp.Rational:
     if isinstance(v, int):
         return sp.Integer(v)
     if isinstance(v, float):
+        if not math.isfinite(v):
+            raise SpecError(f"{where}: node {k}: coordinate {v!r} is not a finite number")
         return sp.nsimplify(v, rational=True)
     if isinstance(v, str):
         s = v.strip()
+        if len(s) > MAX_COORD_CHARS or not re.fullmatch(r"[0-9+\-./ ]+([eE][+-]?[0-9]{1,2})?", s):
+            raise SpecError(f"{where}: node {k}: coordinate {_printable(v, 40)!r} is not a number or fraction such as "
+                            f"\"1/3\" (at most {MAX_COORD_CHARS} characters)")
         try:
             if "/" in s:
                 p, q = s.split("/", 1)
-                return sp.Rational(int(p), int(q))
-            return sp.Rational(s)
+                p, q = int(p), int(q)
+            else:
+                p, q = sp.Rational(s), 1
         except (ValueError, TypeError, ZeroDivisionError):
-            pass
-    raise SpecError(f"{where}: node {k}: coordinate {v!r} is not a number or fraction such as \"1/3\"")
+            p = None
+        if p is not None:
+            if q == 0:
+                raise SpecError(f"{where}: node {k}: coordinate {v!r} divides by zero")
+            return sp.Rational(p, q)
+    raise SpecError(f"{where}: node {k}: coordinate {_printable(repr(v), 40)} is not a number or fraction such as "
+                    "\"1/3\"")
 
 
 def default_rules(domain: str, basis) -> tuple[str, str]:

@@ -209,6 +209,8 @@ def test_committed_set_is_current_in_a_fresh_process():
 
 def test_differences_and_atomic_write(tmp_path):
     files = {"a.txt": "one\n", "sub/b.c": "int x;\n"}
+    # the manifest records what derive wrote (it guides replacements and clean-ups)
+    files["manifest.json"] = json.dumps({"generator": "derive.codegen", "files": {"a.txt": "", "sub/b.c": ""}})
     committed.write_all(tmp_path / "g", files)
     assert committed.differences(tmp_path / "g", files) == []
     (tmp_path / "g" / "a.txt").write_text("changed\n")
@@ -216,9 +218,11 @@ def test_differences_and_atomic_write(tmp_path):
     (tmp_path / "g" / "sub" / "b.c").unlink()
     assert committed.differences(tmp_path / "g", files) == ["differs: a.txt", "not generated (stale): extra.h",
                                                             "missing: sub/b.c"]
-    committed.write_all(tmp_path / "g", files)             # replaces the folder as a whole
-    assert committed.differences(tmp_path / "g", files) == []
+    committed.write_all(tmp_path / "g", files)             # rewrites derive's files, keeps the others
+    assert committed.differences(tmp_path / "g", files) == ["not generated (stale): extra.h"]
+    assert (tmp_path / "g" / "extra.h").read_text() == "\n"  # not derive's: never removed
     assert sorted(p.name for p in tmp_path.iterdir()) == ["g"]   # no temporary folders left
+    assert sorted(p.name for p in (tmp_path / "g").iterdir()) == ["a.txt", "extra.h", "manifest.json", "sub"]
 
 
 def test_generation_is_deterministic_in_process():
@@ -301,7 +305,8 @@ def test_cli_writes_kernel_files(tmp_path, capsys):
     out = json.loads(capsys.readouterr().out)
     names = sorted(p.name for p in tmp_path.iterdir())
     stem = "q4_incompatible_centred_plane_stress"
-    assert names == [f"{stem}.c", f"{stem}.f90", f"{stem}.h", f"{stem}.py"]
+    # the kernel files and the record of what derive wrote there (guides later overwrites)
+    assert names == [".derive-manifest.json", f"{stem}.c", f"{stem}.f90", f"{stem}.h", f"{stem}.py"]
     assert out["kernels"][0]["flops"]["stiffness"] > 0
     text = (tmp_path / f"{stem}.h").read_text()
     assert f"void derive_{stem}_stiffness_batch(long n" in text

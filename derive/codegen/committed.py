@@ -17,8 +17,6 @@ from __future__ import annotations
 import hashlib
 import json
 import os
-import shutil
-import tempfile
 from concurrent.futures import ProcessPoolExecutor
 from pathlib import Path
 
@@ -26,6 +24,7 @@ from .. import catalog
 from ..errors import InputError
 from ..material import STATES
 from . import GENERATOR_VERSION
+from . import owned as owned_mod
 from .emit import generate
 
 NATIVE_STATES = ("plane-stress",)
@@ -75,7 +74,8 @@ def repo_generated_dir() -> Path | None:
 def render_all(jobs: int | None = None, progress=None) -> dict[str, str]:
     """{relative path: text} of the whole committed set including the manifest."""
     work = committed_set()
-    jobs = jobs or min(2, os.cpu_count() or 1)
+    cores = os.cpu_count() or 1
+    jobs = min(jobs or 2, cores)            # never more worker processes than cores
     results = []
     if jobs > 1 and len(work) > 1:
         # largest first so the two workers finish together
@@ -114,7 +114,7 @@ def render_all(jobs: int | None = None, progress=None) -> dict[str, str]:
             })
     entries.sort(key=lambda e: (e["element"], e["variant"], e["state"], e["lang"]))
     manifest = {
-        "generator": "derive.codegen", "generator_version": GENERATOR_VERSION,
+        "generator": owned_mod.GENERATOR, "generator_version": GENERATOR_VERSION,
         "policy": "numpy: every catalogue element, variant and state; c and fortran: every element and "
                   "variant in " + ", ".join(NATIVE_STATES),
         "regenerate": "derive kernel --all", "check": "derive kernel --check",
@@ -123,8 +123,10 @@ def render_all(jobs: int | None = None, progress=None) -> dict[str, str]:
                    "(the same memory as the C layout)"},
         "kernels": entries,
     }
-    files[MANIFEST] = json.dumps(manifest, indent=2, sort_keys=True) + "\n"
     files["README.md"] = _readme(entries)
+    # every file derive writes here (the record that guides later replacements and clean-ups)
+    manifest["files"] = {rel: owned_mod.digest(text) for rel, text in sorted(files.items())}
+    files[MANIFEST] = json.dumps(manifest, indent=2, sort_keys=True) + "\n"
     return dict(sorted(files.items()))
 
 
@@ -164,28 +166,29 @@ def _readme(entries) -> str:
     return "\n".join(lines) + "\n"
 
 
-def write_all(dest: Path, files: dict[str, str]) -> None:
-    """Replace ``dest`` by exactly these files: written into a sibling temporary folder,
-    then swapped in with renames (readers never see a half-written set)."""
+def write_all(dest: Path, files: dict[str, str], force: bool = False) -> dict:
+    """Write the committed set into ``dest``, touching only derive's own files.
+
+    The previous ``manifest.json`` (when it is derive's) says which files derive wrote: those
+    are replaced, and those the new set no longer has are removed.  A file of the same name
+    that derive did not write is refused (InputError, nothing written) unless ``force``.
+    Nothing else in the folder changes, nor the folder's mode.  Returns what was done.
+    """
     dest = Path(dest)
-    dest.parent.mkdir(parents=True, exist_ok=True)
-    tmp = Path(tempfile.mkdtemp(prefix=f".{dest.name}.new-", dir=str(dest.parent)))
-    try:
-        for rel, text in files.items():
-            p = tmp / rel
-            p.parent.mkdir(parents=True, exist_ok=True)
-            p.write_text(text, encoding="utf-8", newline="\n")
-        old = None
-        if dest.exists():
-            old = Path(tempfile.mkdtemp(prefix=f".{dest.name}.old-", dir=str(dest.parent)))
-            os.rmdir(old)
-            os.replace(dest, old)
-        os.replace(tmp, dest)
-        if old is not None:
-            shutil.rmtree(old, ignore_errors=True)
-    except BaseException:
-        shutil.rmtree(tmp, ignore_errors=True)
-        raise
+    if dest.exists() and not dest.is_dir():
+        raise InputError(f"{dest}: is a file; -o takes a folder")
+    owned, manifest_foreign = owned_mod.read_record(dest, MANIFEST)
+    if (dest / MANIFEST).is_file() and not manifest_foreign:
+        owned |= {MANIFEST, "README.md"}    # a derive manifest: the folder's README is derive's too
+    clash = owned_mod.foreign(dest, files, owned)
+    if clash and not force:
+        owned_mod.refuse_foreign(dest, clash)
+    stale = {rel for rel in owned if rel not in files}
+    removed = owned_mod.remove_stale(dest, stale)
+    # the manifest first: an interrupted write leaves only files some derive manifest lists
+    order = [MANIFEST] + [rel for rel in files if rel != MANIFEST] if MANIFEST in files else list(files)
+    written = owned_mod.write_files(dest, files, order)
+    return {"written": len(written), "removed": removed, "replaced_foreign": clash if force else []}
 
 
 def differences(dest: Path, files: dict[str, str]) -> list[str]:

@@ -8,6 +8,7 @@ recovery (strain and stress at the full rule's points).
 from __future__ import annotations
 
 import re
+import textwrap
 from dataclasses import dataclass
 from functools import lru_cache
 
@@ -33,9 +34,64 @@ NATIVE_MODE = "mixed"
 
 @lru_cache(maxsize=1)
 def _env() -> jinja2.Environment:
-    return jinja2.Environment(loader=jinja2.PackageLoader("derive.codegen", "templates"),
-                              undefined=jinja2.StrictUndefined, keep_trailing_newline=True,
-                              trim_blocks=True, lstrip_blocks=True, autoescape=False)
+    env = jinja2.Environment(loader=jinja2.PackageLoader("derive.codegen", "templates"),
+                             undefined=jinja2.StrictUndefined, keep_trailing_newline=True,
+                             trim_blocks=True, lstrip_blocks=True, autoescape=False)
+    env.filters.update(py_str=py_str, py_doc=py_doc, c_comment=c_comment, f_comment=f_comment)
+    return env
+
+
+# ---------------------------------------------------------------------------------------------
+# escaping of text literals per target language.  Names reaching the generator are validated
+# (derive.spec.check_name), but every piece of text a template places in a string or a comment
+# goes through one of these filters as well, so no text can close a string or a comment.
+
+def _ascii_line(text: str) -> str:
+    """One line of printable ASCII: non-ASCII as backslash escapes, control characters as '?'."""
+    text = str(text).encode("ascii", "backslashreplace").decode("ascii")
+    return "".join(c if " " <= c <= "~" else "?" for c in text)
+
+
+def py_str(text: str) -> str:
+    """A Python string literal (double-quoted, ASCII) holding exactly ``text``."""
+    import json
+    return json.dumps(str(text), ensure_ascii=True)   # JSON string escapes are Python string escapes
+
+
+def py_doc(text: str) -> str:
+    """``text`` safe inside a triple-double-quoted (non-raw) docstring, on one line."""
+    out = []
+    for c in str(text):
+        if c in '\\"':
+            out.append("\\" + c)
+        elif " " <= c <= "~":
+            out.append(c)
+        else:                                   # \n, \x00, \xe9, \u2028 ...: escapes Python reads back
+            out.append(c.encode("unicode_escape").decode("ascii"))
+    return "".join(out)
+
+
+def c_comment(text: str) -> str:
+    """``text`` safe inside a C block comment: no comment delimiters, no backslash (line
+    splicing), no trigraphs, one line of ASCII."""
+    line = _ascii_line(text).replace("\\", "/")
+    while "*/" in line or "/*" in line or "??" in line:
+        line = line.replace("*/", "* /").replace("/*", "/ *").replace("??", "? ?")
+    return line
+
+
+def f_comment(text: str) -> str:
+    """``text`` safe in a Fortran ``!`` comment: one line of printable ASCII."""
+    return _ascii_line(text)
+
+
+def check_identifier(name: str) -> str:
+    """A kernel's file stem, which becomes C and Fortran identifiers: refuse anything else."""
+    if not re.fullmatch(r"[a-z][a-z0-9_]*", name) or len(name) > 46:
+        from ..errors import InputError
+        raise InputError(f"kernel name {_ascii_line(name)[:60]!r} is not usable in C and Fortran identifiers "
+                         "(a letter, then letters, digits or '_'; at most 46 characters)")
+    return name
 
 
 def stem(element: str, variant: str, state: str) -> str:
@@ -110,7 +166,6 @@ def describe(ir: KernelIR, lows: dict) -> dict:
 
 
 def _wrap_header(lines: list[str], width: int = 96) -> list[str]:
-    import textwrap
     out = []
     for line in lines:
         if len(line) <= width:
@@ -128,8 +183,11 @@ def _wrap_header(lines: list[str], width: int = 96) -> list[str]:
 def header_lines(ir: KernelIR, meta: dict, lang: str) -> list[str]:
     st = ir.state
     rules = "; ".join(f"{label}: {_rule_text(r)}" for label, r in ir.rules.items())
+    from ..output import CAUTION
     out = [
         f"derive generated kernel: {ir.element} {ir.variant} {st}",
+        "",
+        *textwrap.wrap(CAUTION, width=92),
         "",
         f"element      {ir.element}, {ir.n_nodes} nodes, {ir.ndof} DOFs interleaved u1, v1, u2, v2, ...",
         f"formulation  {ir.description}" + (f" [{ir.source}]" if ir.source else ""),
@@ -615,7 +673,7 @@ def generate(element: str, variant: str = "full", state: str = "plane-stress", l
     """KernelSet per language for one catalogue element (or a given IR)."""
     if ir is None:
         ir = _ir_for((catalog.element_info(element).name, variant, state))
-    name = stem(ir.element, ir.variant, ir.state)
+    name = check_identifier(stem(ir.element, ir.variant, ir.state))
     out = []
     unrolled = vector = None
     for lang in langs:

@@ -1,12 +1,13 @@
 """`derive kernel`: generate NumPy / C / Fortran element kernels; regenerate or check the committed set."""
 from __future__ import annotations
 
+import os
 import sys
 import time
 from pathlib import Path
 
 from ..errors import InputError
-from ..output import Progress, write_atomic
+from ..output import OutputFolder, Progress
 from .common import add_output_args, output_format, print_json, resolve_element
 
 NAME = "kernel"
@@ -18,7 +19,10 @@ EXAMPLE = ("examples:\n"
            "  derive kernel T6 --lang all -o kernels/ --json   # all three languages, machine-readable summary\n"
            "  derive kernel --all                              # regenerate generated/ (the committed set)\n"
            "  derive kernel --check                            # exit 1 if generated/ is stale\n"
-           "  derive kernel --list                             # what the committed set contains")
+           "  derive kernel --list                             # what the committed set contains\n"
+           "only files derive wrote into a folder (recorded in its manifest) are replaced or removed;\n"
+           "--all refuses (exit 2) a file of the same name that derive did not write unless --force;\n"
+           "a single kernel's -o refuses a folder holding files derive did not write unless --force")
 
 LANG_CHOICES = ("numpy", "c", "fortran", "all")
 
@@ -28,8 +32,12 @@ def add_arguments(p) -> None:
     p.add_argument("--variant", default="full", help="formulation variant (default: full); see `derive list`")
     p.add_argument("--state", default="plane-stress", help="plane-stress (default), plane-strain, axisymmetric")
     p.add_argument("--lang", default="numpy", help="numpy (default), c, fortran, or all")
-    p.add_argument("-o", "--output", help="folder to write into (created; files written atomically); "
-                                          "default: print the source, or generated/ for --all")
+    p.add_argument("-o", "--output", help="folder to write into (created when its parent exists; files written "
+                                          "atomically; derive replaces and removes only files its manifest says it "
+                                          "wrote); default: print the source, or generated/ for --all")
+    p.add_argument("--force", action="store_true",
+                   help="write even where files derive did not write exist, replacing those of the same name "
+                        "(never removes any other file)")
     p.add_argument("--all", action="store_true", help="regenerate the whole committed set (default folder generated/)")
     p.add_argument("--check", action="store_true",
                    help="compare the committed set with what the generator produces now; exit 1 on any difference")
@@ -48,6 +56,14 @@ def _target(args) -> Path:
     return d
 
 
+def _cores() -> int:
+    """Cores this process may run on (the affinity mask where the platform has one)."""
+    try:
+        return max(1, len(os.sched_getaffinity(0)))
+    except (AttributeError, OSError):
+        return max(1, os.cpu_count() or 1)
+
+
 def run(args) -> int:
     from ..codegen import committed
     modes = [m for m in ("all", "check", "list") if getattr(args, m)]
@@ -55,6 +71,10 @@ def run(args) -> int:
         raise InputError("--all, --check and --list exclude each other; give one")
     if args.jobs is not None and args.jobs < 1:
         raise InputError(f"--jobs must be >= 1, got {args.jobs}")
+    if args.jobs is not None and args.jobs > _cores():
+        print(f"derive kernel: --jobs {args.jobs} capped at {_cores()}, the number of cores available",
+              file=sys.stderr)
+        args.jobs = _cores()
     fmt = output_format(args)
     if modes:
         if args.element:
@@ -76,11 +96,16 @@ def run(args) -> int:
         progress.close()
         elapsed = time.perf_counter() - t0
         if modes[0] == "all":
-            committed.write_all(dest, files)
+            done = committed.write_all(dest, files, force=args.force)
             if fmt == "json":
-                print_json({"written": str(dest), "files": len(files), "seconds": round(elapsed, 2)})
+                print_json({"written": str(dest), "files": len(files), "seconds": round(elapsed, 2),
+                            "removed": done["removed"], "replaced_not_derive": done["replaced_foreign"]})
             else:
                 print(f"wrote {len(files)} files into {dest}/ in {elapsed:.1f} s")
+                for rel in done["removed"]:
+                    print(f"  removed {rel} (written by an earlier derive kernel --all, no longer generated)")
+                for rel in done["replaced_foreign"]:
+                    print(f"  replaced {rel} (not written by derive; --force)")
             return 0
         diffs = committed.differences(dest, files)
         if fmt == "json":
@@ -111,17 +136,18 @@ def run(args) -> int:
     summary = {"element": el.name, "variant": el.variant, "state": el.state, "seconds": round(elapsed, 3),
                "kernels": []}
     written = []
+    if args.output:
+        folder = OutputFolder(args.output, "-o", force=args.force)
+        names = [Path(src.path).name for ks in sets for src in ks.sources]
+        for name in names:
+            folder.target(name)                    # every name checked before the first write
+        written = [str(folder.write(Path(src.path).name, src.text)) for ks in sets for src in ks.sources]
     for ks in sets:
         entry = {"lang": ks.lang, "files": [], "flops": ks.meta["flops"], "rules": ks.meta["rules"],
                  "ndof": ks.meta["ndof"], "n_internal": ks.meta["n_internal"]}
         for src in ks.sources:
             fname = Path(src.path).name
-            if args.output:
-                path = write_atomic(Path(args.output) / fname, src.text, make_folder=True)
-                written.append(str(path))
-                entry["files"].append(str(path))
-            else:
-                entry["files"].append(fname)
+            entry["files"].append(str(Path(args.output) / fname) if args.output else fname)
         summary["kernels"].append(entry)
     if fmt == "json":
         if not args.output:

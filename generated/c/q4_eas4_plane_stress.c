@@ -1,6 +1,9 @@
 /*
  * derive generated kernel: Q4 eas4 plane-stress
  *
+ * Caution: derive is a verification aid, not a design check. Defer to the governing local
+ * codes and to licensed engineering practice before relying on any result.
+ *
  * element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
  * formulation  enhanced assumed strain, 4 modes (det J0/det J T0^-T E) [Simo & Rifai (1990)]
  * integration  B^T D B: gauss-2x2 (4 points); B^T D M: gauss-2x2 (4 points); M^T D M: gauss-2x2 (4

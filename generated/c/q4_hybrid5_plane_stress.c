@@ -1,6 +1,9 @@
 /*
  * derive generated kernel: Q4 hybrid5 plane-stress
  *
+ * Caution: derive is a verification aid, not a design check. Defer to the governing local
+ * codes and to licensed engineering practice before relying on any result.
+ *
  * element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
  * formulation  assumed-stress hybrid, 5 stress parameters: K = G^T H^-1 G [Pian & Sumihara (1984)]
  * integration  B^T P (G^T): gauss-2x2 (4 points); -P^T D^-1 P (-H): gauss-2x2 (4 points)

@@ -1,6 +1,9 @@
 /*
  * derive generated kernel: Q8 bbar plane-stress
  *
+ * Caution: derive is a verification aid, not a design check. Defer to the governing local
+ * codes and to licensed engineering practice before relying on any result.
+ *
  * element      Q8, 8 nodes, 16 DOFs interleaved u1, v1, u2, v2, ...
  * formulation  B-bar, dilatation projected on a linear pressure {1, xi, eta}: K_dev + kappa g^T
  *              M_p^-1 g [Hughes (1980); Nagtegaal, Parks & Rice (1974)]

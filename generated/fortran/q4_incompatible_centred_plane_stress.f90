@@ -1,5 +1,8 @@
 ! derive generated kernel: Q4 incompatible-centred plane-stress
 !
+! Caution: derive is a verification aid, not a design check. Defer to the governing local
+! codes and to licensed engineering practice before relying on any result.
+!
 ! element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
 ! formulation  incompatible modes through the centre Jacobian, scaled det J0/det J (passes the
 !              patch test) [Taylor, Beresford & Wilson (1976)]

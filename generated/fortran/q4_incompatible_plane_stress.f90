@@ -1,5 +1,8 @@
 ! derive generated kernel: Q4 incompatible plane-stress
 !
+! Caution: derive is a verification aid, not a design check. Defer to the governing local
+! codes and to licensed engineering practice before relying on any result.
+!
 ! element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
 ! formulation  incompatible bubble modes, own Jacobian (fails the patch test off parallelograms)
 !              [Wilson, Taylor, Doherty & Ghaboussi (1973)]

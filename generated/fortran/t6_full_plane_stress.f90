@@ -1,5 +1,8 @@
 ! derive generated kernel: T6 full plane-stress
 !
+! Caution: derive is a verification aid, not a design check. Defer to the governing local
+! codes and to licensed engineering practice before relying on any result.
+!
 ! element      T6, 6 nodes, 12 DOFs interleaved u1, v1, u2, v2, ...
 ! formulation  displacement element, full integration [standard displacement formulation]
 ! integration  B^T D B: triangle-d2 (3 points)

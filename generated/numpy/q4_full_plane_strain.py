@@ -1,6 +1,9 @@
 """
 derive generated kernel: Q4 full plane-strain
 
+Caution: derive is a verification aid, not a design check. Defer to the governing local
+codes and to licensed engineering practice before relying on any result.
+
 element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
 formulation  displacement element, full integration [standard displacement formulation]
 integration  B^T D B: gauss-2x2 (4 points)

@@ -1,6 +1,9 @@
 """
 derive generated kernel: Q4 reduced plane-strain
 
+Caution: derive is a verification aid, not a design check. Defer to the governing local
+codes and to licensed engineering practice before relying on any result.
+
 element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
 formulation  displacement element, uniformly reduced integration [standard displacement
              formulation]

@@ -1,6 +1,9 @@
 """
 derive generated kernel: Q4 selective plane-stress
 
+Caution: derive is a verification aid, not a design check. Defer to the governing local
+codes and to licensed engineering practice before relying on any result.
+
 element      Q4, 4 nodes, 8 DOFs interleaved u1, v1, u2, v2, ...
 formulation  selective integration: volumetric part of D with the reduced rule [Doherty, Wilson
              & Taylor (1969); Hughes (1987) Sec. 4.4]

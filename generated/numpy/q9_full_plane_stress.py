@@ -1,6 +1,9 @@
 """
 derive generated kernel: Q9 full plane-stress
 
+Caution: derive is a verification aid, not a design check. Defer to the governing local
+codes and to licensed engineering practice before relying on any result.
+
 element      Q9, 9 nodes, 18 DOFs interleaved u1, v1, u2, v2, ...
 formulation  displacement element, full integration [standard displacement formulation]
 integration  B^T D B: gauss-3x3 (9 points)

@@ -1,6 +1,9 @@
 """
 derive generated kernel: T3 full axisymmetric
 
+Caution: derive is a verification aid, not a design check. Defer to the governing local
+codes and to licensed engineering practice before relying on any result.
+
 element      T3, 3 nodes, 6 DOFs interleaved u1, v1, u2, v2, ...
 formulation  displacement element, full integration [standard displacement formulation]
 integration  B^T D B: triangle-d1 (1 point)
