@@ -3,7 +3,9 @@
 Written from the textbook definitions, not from derive: hand-typed shape functions,
 Gauss points from numpy.polynomial.legendre.leggauss (reference library), the 3-point
 triangle rule with points (1/6, 1/6), (2/3, 1/6), (1/6, 2/3) and weights 1/6 (Strang &
-Fix (1973), from memory), and K = sum_g w_g B^T D B det J t.
+Fix (1973), from memory), and K = sum_g w_g B^T D B det J t; the bending energy ratio of
+a patch from its definition (work of the consistent load of sigma_xx = y over the
+continuum's energy).
 """
 from __future__ import annotations
 
@@ -131,3 +133,46 @@ def _valid(name: str, xy: np.ndarray) -> bool:
             if np.linalg.det(J) <= 0:
                 return False
     return True
+
+
+def _load_points(name: str):
+    """Reference points and weights exact for the degree-2 load integrands: a 6 x 6 Gauss rule
+    (numpy leggauss) on the square, the same collapsed onto the triangle (Duffy map)."""
+    g, w = np.polynomial.legendre.leggauss(6)
+    if name[0] == "Q":
+        return [(s, q, ws * wq) for s, ws in zip(g, w) for q, wq in zip(g, w)]
+    out = []
+    for u, wu in zip(g, w):
+        for v, wv in zip(g, w):
+            s = (1 + u) / 2
+            out.append((s, (1 - s) * (1 + v) / 2, wu * wv * (1 - s) / 4))
+    return out
+
+
+def bending_energy_ratio(name: str, elements: list, stiffness, compliance: float = 1.0) -> float:
+    """Bending locking ratio of a patch of elements (each an (n, 2) node array), ``stiffness(xy)``
+    giving each element matrix (E = 1, t = 1); ``compliance``: 1 in plane stress, 1 - nu^2 in
+    plane strain (the continuum's energy density is compliance * sigma_xx^2 / 2).
+
+    Energy ratio of the patch's response to the consistent load of sigma_xx = y (E = 1,
+    plane stress) over the continuum's energy int y^2 dA, written from the definition:
+    f = int B^T sigma dA, the patch supported on u, v at its first node and v at its second
+    (statically determinate; the load is self-equilibrated), work f . K^-1 f."""
+    keys: dict = {}
+    conn = [[keys.setdefault((round(x, 12), round(y, 12)), len(keys)) for x, y in xy] for xy in elements]
+    nd = 2 * len(keys)
+    K = np.zeros((nd, nd)); f = np.zeros(nd); second = 0.0
+    for xy, nodes in zip(elements, conn):
+        dofs = np.ravel([[2 * n, 2 * n + 1] for n in nodes])
+        K[np.ix_(dofs, dofs)] += stiffness(xy)
+        for s, q, wt in _load_points(name):
+            N, ds, dt = shape(name, s, q)
+            J = np.array([[ds @ xy[:, 0], ds @ xy[:, 1]], [dt @ xy[:, 0], dt @ xy[:, 1]]])
+            dxy = np.linalg.solve(J, np.vstack([ds, dt]))
+            dA = wt * np.linalg.det(J)
+            yy = N @ xy[:, 1]
+            f[dofs[0::2]] += dxy[0] * yy * dA
+            second += yy * yy * dA
+    free = [k for k in range(nd) if k not in (0, 1, 3)]
+    u = np.linalg.solve(K[np.ix_(free, free)], f[free])
+    return float(f[free] @ u / (compliance * second))

@@ -6,6 +6,7 @@ import math
 
 import numpy as np
 import pytest
+from numpy.testing import assert_allclose
 
 import derive
 from derive import benchmarks as B
@@ -100,21 +101,25 @@ def test_membrane_mid_edge_converges_to_quoted_value():
     assert abs(q9 - quoted) / quoted < 1e-3
 
 
-def test_membrane_extrapolation_matches_established_values():
-    # the converged values established by the 256 x 256 studies (notes/verification.md) are
-    # approached by Richardson extrapolation of a 8, 16, 32 study (common practice, no source)
+def test_membrane_extrapolation_matches_the_published_mid_edge_value():
+    # Richardson extrapolation (common practice) of an 8, 16, 32 Q9 study against the published
+    # mid-edge deflection 23.96 (Cook 1974, often quoted, from memory; measured here 23.971).
+    # The corner value has no outside source (derive's own 256 x 256 study, notes/verification.md):
+    # it is only required to lie above the mid-edge value, as the panel's rotation makes it.
     res = B.membrane_study("Q9", "full", levels=(8, 16, 32))
-    assert abs(res["extrapolated"]["mid"]["value"] - B.COOK_CONVERGED["mid"]) < 0.01
-    assert abs(res["extrapolated"]["corner"]["value"] - B.COOK_CONVERGED["corner"]) < 0.02
-    assert B.COOK_CONVERGED["corner"] > B.COOK_CONVERGED["mid"]
-    assert abs(B.COOK_CONVERGED["mid"] - 23.96) < 0.02          # Cook (1974), often quoted, from memory
+    assert abs(res["extrapolated"]["mid"]["value"] - 23.96) < 0.02
+    assert abs(B.COOK_CONVERGED["mid"] - 23.96) < 0.02
+    assert res["extrapolated"]["corner"]["value"] > res["extrapolated"]["mid"]["value"] + 1.0
 
 
 def test_cylinder_locking_and_cures():
     # Lame closed form (Timoshenko & Goodier (1970), from memory); plane strain, nu = 0.4999
-    lame = B.lame_bore(1.0, 3.0, 9.0, 1000.0, 0.4999)
+    p, a, b, E, nu = 1.0, 3.0, 9.0, 1000.0, 0.4999
+    # bore displacement u(a) = (1 + nu) p a^2 / (E (b^2 - a^2)) ((1 - 2 nu) a + b^2 / a), written here
+    lame = (1 + nu) * p * a ** 2 / (E * (b ** 2 - a ** 2)) * ((1 - 2 * nu) * a + b ** 2 / a)
     full = B.run_cylinder("Q4", "full", 8, 0.4999)
-    assert full["reference"] == lame and full["normalized"] < 0.5          # volumetric locking
+    assert math.isclose(full["reference"], lame, rel_tol=1e-12)
+    assert full["normalized"] < 0.5                                      # volumetric locking
     for name, variant in (("Q4", "selective"), ("Q4", "bbar"), ("Q4", "eas4"), ("Q8", "reduced")):
         r = B.run_cylinder(name, variant, 8, 0.4999)
         assert abs(r["normalized"] - 1) < 0.02, (name, variant, r["normalized"])
@@ -194,8 +199,9 @@ def test_recovered_bending_stress():
         pos, sig = sol.point_stresses()
         xc = pos[..., 0].mean(axis=1, keepdims=True)           # element centre (2x2 points symmetric)
         exact = -(6.0 - xc) * (pos[..., 1] - 0.1) / I
-        assert np.allclose(sig[..., 0], exact, rtol=0.01, atol=1e-3 * np.abs(exact).max()), v
-        assert np.allclose(sig[..., 0].mean(axis=1), 0.0, atol=1e-6 * np.abs(sig).max())   # no net axial force
+        assert_allclose(sig[..., 0], exact, rtol=0.01, atol=1e-3 * np.abs(exact).max(), err_msg=v)
+        # no net axial force (statics): round-off of the recovery only
+        assert_allclose(sig[..., 0].mean(axis=1), 0.0, rtol=0, atol=1e-10 * np.abs(sig).max())
     full = B.run_cantilever("Q4", "full", "rectangular", "shear", 1)["_solution"]
     _, sig = full.point_stresses()
     assert np.abs(sig[..., 0]).max() < 0.2 * 6.0 * 0.1 / I              # locked: far below M c / I

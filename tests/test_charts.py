@@ -8,6 +8,9 @@ import math
 import numpy as np
 import pytest
 import sympy as sp
+from numpy.testing import assert_allclose
+
+import fem_reference as fr
 
 from derive import charts
 from derive import locking as L
@@ -18,9 +21,10 @@ COOK = (1 - nu ** 2) / (1 + (1 - nu) * r ** 2 / 2)
 SIGNATURES = {".png": b"\x89PNG\r\n\x1a\n", ".svg": b"<svg", ".pdf": b"%PDF-"}
 
 
-def _closed(name, variant, state, rv, nv) -> float:
-    # the closed form evaluated by plain substitution (not the chart's lambdified function)
-    return float(L.locking_ratio(name, variant, state).subs({r: sp.Float(rv, 30), nu: sp.Float(nv, 30)}))
+def _q4_plane_strain(rv: float, nv: float) -> float:
+    # Q4 full, plane strain, derived by hand from the bending mode u = c x y (the independent value
+    # of tests/test_locking.py, Cook et al. 4th ed. method, from memory)
+    return (1 - 2 * nv) / ((1 - nv) ** 2 + (1 - nv) * (1 - 2 * nv) * rv ** 2 / 2)
 
 
 def test_locking_chart_data_equal_the_closed_form(tmp_path):
@@ -75,8 +79,8 @@ def test_contour_grid_equals_the_closed_form():
     nn = np.linspace(0, 0.499, 200)
     assert coords.shape[:2] == (201, 201)
     for i, j in ((0, 0), (10, 150), (199, 3), (120, 77)):
-        # plane-strain closed form derived by hand (tests/test_locking.py), sampled by substitution
-        assert math.isclose(Z[i, j], _closed("Q4", "full", "plane-strain", rr[j], nn[i]), rel_tol=1e-11)
+        # plane-strain closed form derived by hand (tests/test_locking.py), not derive's own formula
+        assert math.isclose(Z[i, j], _q4_plane_strain(rr[j], nn[i]), rel_tol=1e-11)
 
 
 def test_distortion_chart_data(tmp_path):
@@ -84,13 +88,17 @@ def test_distortion_chart_data(tmp_path):
     lines = {d["gid"]: d for d in charts.series(fig)}
     d = lines["distortion|Q4|full|skew"]
     xs = np.array(d["x"])
-    # against the exact skew expression evaluated by substitution at c = tan(angle)
-    expr = L.distortion_expression("Q4", "full", "plane-stress", "skew", sp.Integer(2), sp.Rational(3, 10))
+    # against an independent energy solve on the skewed element (textbook Q4 of tests/fem_reference.py,
+    # nodes x = a X + c Y, y = Y with c = tan(angle), a = 2, b = 1), not derive's own expression
+    ref = np.array(fr.REF_NODES["Q4"], dtype=float)
     for k in (0, 4, 9):
         c = math.tan(math.radians(xs[k]))
-        assert math.isclose(d["y"][k], float(expr.subs(L.c_sym, c)), rel_tol=1e-12)
+        xy = np.column_stack([2.0 * ref[:, 0] + c * ref[:, 1], ref[:, 1]])
+        expected = fr.bending_energy_ratio("Q4", [xy], lambda e: fr.stiffness("Q4", e, 1.0, 0.3, 1.0))
+        assert math.isclose(d["y"][k], expected, rel_tol=1e-10)
     assert d["y"][0] == pytest.approx(float(COOK.subs({r: 2, nu: sp.Rational(3, 10)})), rel=1e-12)
-    assert np.allclose(lines["distortion|Q4|eas4|skew"]["y"], 1.0)   # Simo & Rifai (1990): exact on parallelograms
+    # Simo & Rifai (1990): exact on parallelograms
+    assert_allclose(lines["distortion|Q4|eas4|skew"]["y"], 1.0, rtol=1e-10, atol=0)
 
 
 @pytest.mark.parametrize("ext", [".png", ".svg", ".pdf"])

@@ -28,8 +28,10 @@ def test_general_q4_det_is_bilinear():
 
 def test_validity_report_ok():
     rep = element("Q4").validity([[0, 0], [2, 0], [2, 1], [0, 1]])
-    assert rep["det_min"] == pytest.approx(0.5) and rep["det_max"] == pytest.approx(0.5)  # det J = A/4 (common practice)
-    assert rep["area"] == pytest.approx(2.0)
+    # det J = A/4 (common practice)
+    assert rep["det_min"] == pytest.approx(0.5, rel=1e-12, abs=0)
+    assert rep["det_max"] == pytest.approx(0.5, rel=1e-12, abs=0)
+    assert rep["area"] == pytest.approx(2.0, rel=1e-12, abs=0)
 
 
 def test_clockwise_nodes_refused():

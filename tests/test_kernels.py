@@ -17,6 +17,7 @@ from pathlib import Path
 
 import numpy as np
 import pytest
+from numpy.testing import assert_allclose
 
 import test_kernels_ref as ref
 from compilers import need
@@ -168,10 +169,11 @@ def test_reference_shape_functions_sane():
     for name, pts in nodes.items():
         for i, (s, r) in enumerate(pts):
             N, _, _ = ref.shape(name, s, r)
-            assert np.allclose(N, np.eye(len(pts))[i], atol=1e-14)   # Kronecker delta; definition
+            assert_allclose(N, np.eye(len(pts))[i], rtol=0, atol=1e-14)   # Kronecker delta; definition
         s, r = 0.23, 0.31
         N, ds, dr = ref.shape(name, s, r)
         assert abs(N.sum() - 1) < 1e-14                             # partition of unity; definition
         # central differences (common practice, no source)
-        assert np.allclose(ds, (ref.shape(name, s + h, r)[0] - ref.shape(name, s - h, r)[0]) / (2 * h), atol=1e-8)
-        assert np.allclose(dr, (ref.shape(name, s, r + h)[0] - ref.shape(name, s, r - h)[0]) / (2 * h), atol=1e-8)
+        # (truncation h^2 ~ 1e-12 and round-off eps / h ~ 1e-10 of these O(1) derivatives)
+        assert_allclose(ds, (ref.shape(name, s + h, r)[0] - ref.shape(name, s - h, r)[0]) / (2 * h), rtol=0, atol=1e-8)
+        assert_allclose(dr, (ref.shape(name, s, r + h)[0] - ref.shape(name, s, r - h)[0]) / (2 * h), rtol=0, atol=1e-8)

@@ -53,11 +53,15 @@ def test_q4_rectangle_whole_matrix_vs_independent_quadrature(av, bv, nuv):
 def test_closed_form_rectangle_and_parallelogram_vs_quadrature(name, state):
     el = element(name, "full", state)
     vals = {a: sp.Rational(3, 2), b: sp.Rational(7, 10), c: sp.Rational(2, 5), E: 1000, nu: sp.Rational(3, 10), t: 2}
-    for geom in ("rectangle", "parallelogram"):
+    # the nodes fixed here from the documented geometry (derive/geometry.py docstring), not from
+    # derive's map: 2a x 2b centred, x = a X + c Y, y = b Y; triangles on the lower-left half
+    X = np.array(ref.REF_NODES[name], dtype=float)
+    if name[0] == "T":
+        X = 2 * X - 1                 # reference triangle -> vertices (-1,-1), (1,-1), (-1,1)
+    for geom, skew in (("rectangle", 0.0), ("parallelogram", 0.4)):
         K = el.stiffness(geom)
         Kn = np.array(K.subs(vals).evalf().tolist(), dtype=float)
-        imap = el.map(geom)
-        xy = np.array([[float(u.subs(vals)), float(v.subs(vals))] for u, v in zip(imap.geometry.xs, imap.geometry.ys)])
+        xy = np.column_stack([1.5 * X[:, 0] + skew * X[:, 1], 0.7 * X[:, 1]])
         # independent numeric quadrature from the textbook definition (reference library: numpy leggauss)
         Kr = ref.stiffness(name, xy, 1000.0, 0.3, 2.0, state)
         assert np.abs(Kn - Kr).max() <= 1e-12 * np.abs(Kr).max()
