@@ -1,19 +1,26 @@
 """Compare a user's matrix (hand derivation or their code's numbers) with derive's, and
 diagnose the usual mistakes.
 
-Equality is decided, entry by entry, by exact cancellation of the difference; where
-cancellation is inconclusive (radicals, elementary functions) by evaluation at many exact
-rational points, and a point where the two differ is reported as the counterexample.
-Numeric input is compared with a tolerance relative to the expected matrix's norm.
+Equality is decided entry by entry (derive.check_equality): both entries are evaluated
+exactly at the same random rational points (a point where they differ is the
+counterexample), and where they agree everywhere, equality is proven by expanding the
+cross difference when its estimated size allows; larger entries are reported equal at the
+points (the method says how many).  Sizes are estimated from the expression tree before
+any algebra, so a short input that would expand to millions of terms costs no more than
+its evaluation; the work driven by the user's entries runs under a CPU-time and memory
+limit (derive.bounded).  Numeric input is compared with a tolerance relative to the
+expected matrix's norm.
 
 When the matrices differ, each diagnosis below is tried by applying that one mistake to
-derive's matrix and asking whether the result equals the user's exactly (numeric input:
-within the tolerance).  Only mistakes that explain the whole difference are reported; the
-more specific one wins where two coincide (``sign`` over ``scale -1``, ``thickness`` over
+derive's matrix and asking whether the result equals the user's (numeric input: within
+the tolerance).  Only mistakes that explain the whole difference are reported; the more
+specific one wins where two coincide (``sign`` over ``scale -1``, ``thickness`` over
 ``scale t``).
 
   node-order        the user's nodes are a permutation of derive's (different start node,
                     opposite orientation, or any renumbering): reports the permutation
+  clockwise         nodes numbered clockwise and det J kept signed (negative), so the
+                    matrix is -P K P^T: reports the permutation
   transposed        the user's matrix is derive's transposed
   thickness         t missing (K / t) or applied twice (K t)
   shear-convention  the shear term scaled: tensor instead of engineering shear strain
@@ -27,21 +34,22 @@ more specific one wins where two coincide (``sign`` over ``scale -1``, ``thickne
 from __future__ import annotations
 
 import dataclasses
-import itertools
-import random
 from dataclasses import dataclass, field
+from fractions import Fraction
 
 import numpy as np
 import sympy as sp
 
 from . import quadrature
+from .bounded import Limits, run_bounded
+from .check_equality import MAX_PROOF_TERMS, Comparer, check_degree, estimate, values_differ
 from .element import Element, element
 from .errors import InputError
 from .formulations.base import D_op, Formulation
+from .output import display
 
-CODES = ("node-order", "transposed", "thickness", "shear-convention", "plane-state", "sign", "scale",
+CODES = ("node-order", "clockwise", "transposed", "thickness", "shear-convention", "plane-state", "sign", "scale",
          "quadrature", "dof-order")
-N_RANDOM_POINTS = 12
 
 
 @dataclass
@@ -53,6 +61,7 @@ class CheckResult:
     compared: int = 0
     method: str = "exact"
     details: list[dict] = field(default_factory=list)
+    shape: dict | None = None  # {"given": [r, c], "expected": [r, c]} when the shapes differ
 
     @property
     def codes(self) -> list[str]:
@@ -62,67 +71,49 @@ class CheckResult:
 # ---------------------------------------------------------------------------------------------
 # equality
 
-def _sample_value(sym: sp.Symbol, rnd: random.Random) -> sp.Rational:
-    name = sym.name
-    if name == "nu":
-        return sp.Rational(rnd.randint(1, 45), 97)
-    if name in ("E", "t", "a", "b", "R"):
-        return sp.Rational(rnd.randint(50, 400), rnd.randint(20, 60))
-    return sp.Rational(rnd.randint(-300, 300), rnd.randint(50, 120))
-
-
-def _points(symbols, n: int, seed: int = 20261201):
-    rnd = random.Random(seed)
-    syms = sorted(symbols, key=lambda s: s.name)
-    return [{s: _sample_value(s, rnd) for s in syms} for _ in range(n)]
-
-
-def equal_exact(expected: sp.Expr, given: sp.Expr) -> tuple[bool | None, dict | None]:
-    """(True, None) equal; (False, point) different with a counterexample; None if undecided."""
-    diff = sp.expand(expected - given) if not (expected.free_symbols or given.free_symbols) else expected - given
-    try:
-        d = sp.cancel(sp.together(diff))
-    except Exception:  # cancel refuses some function-heavy input; fall back to evaluation
-        d = diff
-    if d == 0:
-        return True, None
-    rational = d.is_rational_function(*d.free_symbols) if d.free_symbols else d.is_Rational
-    for pt in _points(d.free_symbols, N_RANDOM_POINTS):
-        try:
-            v = d.subs(pt)
-            v = sp.nsimplify(v) if not v.is_Rational else v
-        except Exception:
-            continue
-        if v.is_number and v.is_finite and v != 0 and abs(complex(v.evalf(30))) > 1e-25:
-            return False, {k.name: str(val) for k, val in pt.items()}
-    if rational:
-        return False, None
-    return True, None  # all random exact points agree: equal with high probability
-
-
 def _entries_of(M) -> dict:
     if isinstance(M, dict):
         return M
     return {(i, j): M[i, j] for i in range(M.rows) for j in range(M.cols)}
 
 
-def compare_symbolic(expected: sp.Matrix, given) -> CheckResult:
-    """Entry-wise exact comparison; ``given`` is a Matrix or a dict {(i, j): expr}."""
+def _symbols_of(*mats) -> set:
+    out: set = set()
+    for M in mats:
+        for v in (M.values() if isinstance(M, dict) else M):
+            out |= sp.sympify(v).free_symbols
+    return out
+
+
+def _shape_differs(expected_shape, given_shape, compared: int) -> CheckResult:
+    return CheckResult(match=False, mismatched=[], compared=compared, method="shape differs",
+                       shape={"given": list(given_shape), "expected": list(expected_shape)})
+
+
+def compare_symbolic(expected: sp.Matrix, given, comparer: Comparer | None = None) -> CheckResult:
+    """Entry-wise comparison; ``given`` is a Matrix or a dict {(i, j): expr}.  Cost bounded
+    before any algebra (derive.check_equality); each entry's degree is checked first."""
     entries = _entries_of(given)
     if not isinstance(given, dict) and given.shape != expected.shape:
-        if given.shape == expected.T.shape:  # a transposed matrix: every entry differs; diagnosis follows
-            return CheckResult(match=False, mismatched=[], compared=len(entries), method="shape differs")
+        if given.shape == expected.T.shape:  # transposed: the diagnosis follows, no entry list
+            return _shape_differs(expected.shape, given.shape, len(entries))
         raise InputError(f"the given matrix is {given.rows} x {given.cols}; expected {expected.rows} x {expected.cols}")
-    mismatched, counter = [], None
     for (i, j), g in sorted(entries.items()):
         if not (0 <= i < expected.rows and 0 <= j < expected.cols):
             raise InputError(f"entry [{i},{j}] is outside the {expected.rows} x {expected.cols} matrix (0-based)")
-        ok, pt = equal_exact(sp.sympify(expected[i, j]), g)
+        check_degree(g, f"entry [{i},{j}] (0-based)")
+    comparer = comparer or Comparer(_symbols_of(expected, entries))
+    mismatched, counter = [], None
+    for (i, j), g in sorted(entries.items()):
+        ok, pt = comparer.equal(expected[i, j], g)
         if not ok:
             mismatched.append((i, j))
             if counter is None and pt is not None:
                 counter = {"entry": [i, j], "point": pt}
-    return CheckResult(match=not mismatched, mismatched=mismatched, counterexample=counter, compared=len(entries))
+    result = CheckResult(match=not mismatched, mismatched=mismatched, counterexample=counter,
+                         compared=len(entries), method=comparer.method())
+    result.details = _details_symbolic(expected, entries, mismatched, comparer)
+    return result
 
 
 def compare_numeric(expected: np.ndarray, given: np.ndarray, rtol: float) -> CheckResult:
@@ -130,13 +121,64 @@ def compare_numeric(expected: np.ndarray, given: np.ndarray, rtol: float) -> Che
     given = np.asarray(given, dtype=float)
     if given.shape != expected.shape:
         if given.shape == expected.T.shape:
-            return CheckResult(match=False, mismatched=[], compared=given.size, method="shape differs")
+            return _shape_differs(expected.shape, given.shape, given.size)
         raise InputError(f"the given matrix is {given.shape[0]} x {given.shape[1]}; expected "
                          f"{expected.shape[0]} x {expected.shape[1]}")
     scale = max(np.linalg.norm(expected), 1e-300)
     bad = np.argwhere(np.abs(given - expected) > rtol * scale)
-    return CheckResult(match=len(bad) == 0, mismatched=[(int(i), int(j)) for i, j in bad], compared=given.size,
-                       method=f"numeric, tolerance {rtol:g} x ||expected||")
+    mismatched = [(int(i), int(j)) for i, j in bad]
+    result = CheckResult(match=len(bad) == 0, mismatched=mismatched, compared=given.size,
+                         method=f"numeric, tolerance {rtol:g} x ||expected||")
+    result.details = [_detail_numeric(i, j, expected[i, j], given[i, j], scale) for i, j in mismatched[:DETAIL_LIMIT]]
+    return result
+
+
+# ---------------------------------------------------------------------------------------------
+# mismatch details: expected and given in the same form, their difference and relative difference
+
+DETAIL_LIMIT = 200
+NUMBER_DIGITS = 12  # significant digits of expected, given and difference in the details
+_SHOW_TERMS = 64    # user entries up to this estimated size are shown factored, like derive's
+
+
+def number_text(v: float) -> str:
+    return f"{float(v):.{NUMBER_DIGITS}g}"
+
+
+def _detail_numeric(i: int, j: int, e: float, g: float, norm: float) -> dict:
+    d = float(g) - float(e)
+    return {"entry": [i, j], "expected": number_text(e), "given": number_text(g), "difference": d,
+            "relative_difference": d / abs(e) if e != 0 else None, "relative_to_norm": abs(d) / norm}
+
+
+def _show(expr) -> str:
+    expr = sp.sympify(expr)
+    size = estimate(expr)
+    if size.num <= _SHOW_TERMS and size.den <= _SHOW_TERMS:
+        return str(display(expr))
+    return str(expr)
+
+
+def _details_symbolic(K: sp.Matrix, entries: dict, mismatched, comparer: Comparer) -> list[dict]:
+    out = []
+    for (i, j) in mismatched[:DETAIL_LIMIT]:
+        e, g = sp.sympify(K[i, j]), sp.sympify(entries[(i, j)])
+        row = {"entry": [i, j], "expected": _show(e), "given": _show(g), "difference": None,
+               "relative_difference": None, "at_point": None}
+        diff_size = estimate(g - e)
+        if diff_size.num <= _SHOW_TERMS and diff_size.den <= _SHOW_TERMS:
+            row["difference"] = str(display(sp.cancel(sp.together(g - e))))
+        for pt, ve, vg in zip(comparer.points, comparer.values(e), comparer.values(g)):
+            if ve is None or vg is None or not values_differ(ve, vg):
+                continue
+            fe, fg = float(ve), float(vg)
+            row["at_point"] = {"point": {k.name: str(v) for k, v in pt.items()
+                                         if k in e.free_symbols | g.free_symbols},
+                               "expected": number_text(fe), "given": number_text(fg)}
+            row["relative_difference"] = (fg - fe) / abs(fe) if fe != 0 else None
+            break
+        out.append(row)
+    return out
 
 
 # ---------------------------------------------------------------------------------------------
@@ -244,53 +286,70 @@ def _as_numeric(M: sp.Matrix) -> np.ndarray | None:
     return np.array(M.evalf(20).tolist(), dtype=float)
 
 
-def _matches(candidate, given, numeric_given: np.ndarray | None, rtol: float, entries_only: dict | None) -> bool:
-    if callable(candidate):
-        try:
-            candidate = candidate()
-        except InputError:
-            return False
+def _matches(candidate: sp.Matrix, given, numeric_given: np.ndarray | None, rtol: float,
+             entries_only: dict | None, comparer: Comparer | None) -> bool:
     if numeric_given is not None:
         A = _as_numeric(candidate)
         if A is None or A.shape != numeric_given.shape:
             return False
         return np.abs(A - numeric_given).max() <= rtol * max(np.linalg.norm(A), 1e-300)
     if entries_only is not None:
-        return all(0 <= i < candidate.rows and 0 <= j < candidate.cols and equal_exact(candidate[i, j], g)[0]
+        return all(0 <= i < candidate.rows and 0 <= j < candidate.cols and comparer.equal(candidate[i, j], g)[0]
                    for (i, j), g in entries_only.items())
     if candidate.shape != given.shape:
         return False
-    return all(equal_exact(candidate[i, j], given[i, j])[0] for i in range(given.rows) for j in range(given.cols))
+    return all(comparer.equal(candidate[i, j], given[i, j])[0] for i in range(given.rows) for j in range(given.cols))
 
 
-def _scale_factor(K: sp.Matrix, given, numeric_given, entries) -> sp.Expr | None:
-    """The constant c with given = c K, if one exists (c free of the coordinates xi, eta)."""
-
-    if numeric_given is not None:
-        A = _as_numeric(K)
-        if A is None or A.shape != numeric_given.shape:
-            return None
-        mask = np.abs(A) > 1e-12 * np.abs(A).max()
-        if not mask.any():
-            return None
-        ratios = numeric_given[mask] / A[mask]
-        c = float(np.median(ratios))
-        if np.allclose(numeric_given, c * A, rtol=0, atol=1e-9 * np.abs(numeric_given).max()) and abs(c - 1) > 1e-9:
-            return sp.nsimplify(c, rational=False, tolerance=1e-10)
+def _scale_numeric(A: np.ndarray | None, G: np.ndarray) -> sp.Expr | None:
+    if A is None or A.shape != G.shape:
         return None
-    items = entries.items() if entries is not None else ((ij, given[ij]) for ij in itertools.product(range(K.rows), range(K.cols)))
-    c = None
-    for (i, j), g in items:
-        if K[i, j] == 0:
-            if sp.cancel(g) != 0:
+    mask = np.abs(A) > 1e-12 * np.abs(A).max()
+    if not mask.any():
+        return None
+    c = float(np.median(G[mask] / A[mask]))
+    if np.abs(G - c * A).max() <= 1e-9 * np.abs(G).max() and abs(c - 1) > 1e-9:
+        return sp.nsimplify(c, rational=False, tolerance=1e-10)
+    return None
+
+
+def _is_monomial(c: sp.Expr) -> bool:
+    """A number times powers of symbols (2, 3/2, E, 2 t, 1/a): what a forgotten or doubled
+    constant makes; a ratio of polynomials is no scale mistake."""
+    return all(f.is_Number or f.is_Symbol or (f.is_Pow and f.base.is_Symbol and f.exp.is_Rational)
+               for f in sp.Mul.make_args(c))
+
+
+def _scale_symbolic(K: sp.Matrix, items: list, comparer: Comparer) -> sp.Expr | None:
+    """The c with given = c K on every given entry.  The ratio must first be the same for
+    every entry at every point (exact values, cheap); only then is c formed symbolically,
+    from the smallest entry, and checked on all entries."""
+    ratio_at: list = [None] * len(comparer.points)
+    for ij, g in items:
+        for k, (vg, vk) in enumerate(zip(comparer.values(g), comparer.values(K[ij]))):
+            if vg is None or vk is None:
+                continue
+            if vk == 0:
+                if values_differ(vg, 0 * vk):
+                    return None
+                continue
+            r = vg / vk
+            if ratio_at[k] is None:
+                ratio_at[k] = r
+            elif values_differ(r, ratio_at[k]):
                 return None
-            continue
-        ratio = sp.cancel(g / K[i, j])
-        if c is None:
-            c = ratio
-        elif sp.cancel(ratio - c) != 0:
-            return None
-    if c is None or c == 1 or (c.free_symbols & {sp.Symbol("xi"), sp.Symbol("eta")}):
+    known = [r for r in ratio_at if r is not None]
+    if not known:
+        return None
+    if all(isinstance(r, Fraction) for r in known) and len(set(known)) == 1:
+        c = sp.Rational(known[0].numerator, known[0].denominator)
+    else:
+        nonzero = [(ij, g) for ij, g in items if K[ij] != 0]
+        (i, j), g = min(nonzero, key=lambda it: comparer.size(it[1]).num * comparer.size(it[1]).den)
+        c = g / K[i, j]
+        if estimate(c).num <= _SHOW_TERMS:
+            c = sp.factor(sp.cancel(sp.together(c)))
+    if not all(comparer.equal(c * K[ij], gg)[0] for ij, gg in items):
         return None
     return c
 
@@ -351,15 +410,36 @@ def column_group_permutation(K: np.ndarray | None, G: np.ndarray | None, size: i
     return None if perm == list(range(n)) else perm
 
 
-def _probe_numeric(M: sp.Matrix, seed: int = 7) -> np.ndarray:
-    pt = _points(M.free_symbols, 1, seed)[0]
-    return np.array(M.subs(pt).evalf(20).tolist(), dtype=float)
+def _probe(M: sp.Matrix, comparer: Comparer) -> np.ndarray | None:
+    """M's entries at the comparer's first point where all are defined, as floats (the same
+    point for derive's matrix and the user's, so their probes are comparable)."""
+    for k in range(len(comparer.points)):
+        vals = [comparer.values(M[i, j])[k] for i in range(M.rows) for j in range(M.cols)]
+        if all(v is not None for v in vals):
+            return np.array([float(v) for v in vals], dtype=float).reshape(M.rows, M.cols)
+    return None
 
 
-def check(target: Target, given=None, given_numeric: np.ndarray | None = None, rtol: float = 1e-8) -> CheckResult:
-    """Compare and, on mismatch, diagnose.  ``given``: Matrix or {(i, j): expr}; or numeric array."""
+def _permutation_text(perm: list[int]) -> str:
+    return "your node i is derive's node perm[i] (1-based: " + \
+        ", ".join(f"{i + 1}->{p + 1}" for i, p in enumerate(perm)) + ")"
+
+
+def _limits(lim: Limits | None) -> Limits:
+    return lim or Limits(what="comparing the matrix", hint="a hand derivation needs far less; "
+                         "raise --time-limit / --memory-limit if the input is as intended")
+
+
+def check(target: Target, given=None, given_numeric: np.ndarray | None = None, rtol: float = 1e-8,
+          limits: Limits | None = None) -> CheckResult:
+    """Compare and, on mismatch, diagnose.  ``given``: Matrix or {(i, j): expr}; or numeric array.
+
+    Work driven by the user's entries runs under ``limits`` (CPU time shared by the
+    comparison and the diagnosis, memory; derive.bounded); derive's own matrices (the
+    expected one and each single-mistake candidate) are computed outside it.
+    """
     K = target.expected()
-    entries = given if isinstance(given, dict) else None
+    lim = _limits(limits)
     if given_numeric is not None:
         A = _as_numeric(K)
         if A is None:
@@ -367,69 +447,98 @@ def check(target: Target, given=None, given_numeric: np.ndarray | None = None, r
             raise InputError(f"a numeric matrix needs numeric geometry and material: {names} still symbolic "
                              "(give --nodes and --set E=...,nu=...,t=...)")
         result = compare_numeric(A, given_numeric, rtol)
-    else:
-        result = compare_symbolic(K, given)
+        if not result.match:
+            result.diagnosis = _diagnose(target, K, None, given_numeric, rtol, _candidates(target, K), None)
+        return result
+    result, used = run_bounded(lambda: compare_symbolic(K, given), lim)
     if result.match:
         return result
-    found = []
-    # node order (full matrices only)
-    if entries is None and K.rows == K.cols and K.rows % 2 == 0 and target.what == "stiffness":
-        Kp = _as_numeric(K) if given_numeric is not None else _probe_numeric(K)
-        Gp = given_numeric if given_numeric is not None else _probe_numeric_given(given, K)
-        if Gp is not None:
-            perm = node_permutation(Kp, Gp, max(rtol, 1e-9))
-            if perm is not None:
-                idx = [2 * p + k for p in perm for k in (0, 1)]
-                if _matches(K.extract(idx, idx), given, given_numeric, rtol, entries):
-                    found.append({"code": "node-order", "explanation":
-                                  "your node i is derive's node perm[i] (1-based: " +
-                                  ", ".join(f"{i + 1}->{p + 1}" for i, p in enumerate(perm)) + ")",
-                                  "permutation": [p + 1 for p in perm]})
-    elif entries is None and given_numeric is None and target.what in ("shape", "B") and given.shape == K.shape:
-        size = 1 if target.what == "shape" else 2
-        perm = column_group_permutation(_probe_numeric(K), _probe_numeric_given(given, K), size)
-        if perm is not None:
-            cols = [size * p + k for p in perm for k in range(size)]
-            if _matches(K.extract(list(range(K.rows)), cols), given, None, rtol, None):
-                found.append({"code": "node-order", "explanation":
-                              "your node i is derive's node perm[i] (1-based: " +
-                              ", ".join(f"{i + 1}->{p + 1}" for i, p in enumerate(perm)) + ")",
-                              "permutation": [p + 1 for p in perm]})
-    if K.rows != K.cols or target.what != "stiffness":
-        KT = K.T
-        if given_numeric is not None:
-            ok = KT.shape == given_numeric.shape and _matches(KT, None, given_numeric, rtol, None)
-        elif entries is None:
-            ok = KT.shape == given.shape and _matches(KT, given, None, rtol, None)
-        else:
-            ok = False
-        if ok:
-            found.append({"code": "transposed", "explanation": "your matrix is derive's transposed"})
-    elif given_numeric is None and entries is None and given.shape == K.shape and K != K.T:
-        if _matches(K.T, given, None, rtol, None):
-            found.append({"code": "transposed", "explanation": "your matrix is derive's transposed"})
-    for code, why, cand in target.candidates(K):
-        if any(f["code"] == code for f in found):
-            continue
-        if _matches(cand, given, given_numeric, rtol, entries):
-            found.append({"code": code, "explanation": why})
-    if not any(f["code"] in ("sign", "thickness") for f in found):
-        c = _scale_factor(K, given, given_numeric, entries)
-        t_val = target._mat()["t"]
-        if c is not None and c != -1 and sp.cancel(c - t_val) != 0 and sp.cancel(c - 1 / t_val) != 0:
-            found.append({"code": "scale", "explanation": f"your matrix is {c} times derive's", "factor": str(c)})
-    result.diagnosis = found
+    cands = _candidates(target, K)
+    rest = dataclasses.replace(lim, seconds=max(lim.seconds - used, 0.5))
+    result.diagnosis, _ = run_bounded(lambda: _diagnose(target, K, given, None, rtol, cands,
+                                                        Comparer(_symbols_of(K, _entries_of(given)))), rest)
     return result
 
 
-def _probe_numeric_given(given, K) -> np.ndarray | None:
-    if not isinstance(given, sp.MatrixBase) or given.shape != K.shape:
-        return None
-    pt = _points(K.free_symbols | given.free_symbols, 1, 7)[0]
-    try:
-        return np.array(given.subs(pt).evalf(20).tolist(), dtype=float)
-    except (TypeError, ValueError):
-        return None
+def _candidates(target: Target, K: sp.Matrix) -> list:
+    """(code, detail, matrix) of every single mistake, computed by derive (not limited)."""
+    out = []
+    for code, why, cand in target.candidates(K):
+        if callable(cand):
+            try:
+                cand = cand()
+            except InputError:
+                continue
+        out.append((code, why, cand))
+    return out
+
+
+def _diagnose(target: Target, K: sp.Matrix, given, given_numeric, rtol: float, cands: list,
+              comparer: Comparer | None) -> list[dict]:
+    entries = given if isinstance(given, dict) else None
+    found = []
+    square_k = K.rows == K.cols and K.rows % 2 == 0 and target.what == "stiffness"
+    if entries is None and square_k:
+        Kp = _as_numeric(K) if given_numeric is not None else _probe(K, comparer)
+        Gp = given_numeric if given_numeric is not None else (
+            _probe(given, comparer) if given.shape == K.shape else None)
+        if Kp is not None and Gp is not None and Kp.shape == Gp.shape:
+            tol = max(rtol, 1e-9)
+            perm = node_permutation(Kp, Gp, tol)
+            if perm is not None:
+                idx = [2 * p + k for p in perm for k in (0, 1)]
+                if _matches(K.extract(idx, idx), given, given_numeric, rtol, None, comparer):
+                    found.append({"code": "node-order", "explanation": _permutation_text(perm),
+                                  "permutation": [p + 1 for p in perm]})
+            flipped = node_permutation(Kp, -Gp, tol)
+            if flipped is not None:
+                idx = [2 * p + k for p in flipped for k in (0, 1)]
+                if _matches(-K.extract(idx, idx), given, given_numeric, rtol, None, comparer):
+                    found.append({"code": "clockwise", "explanation":
+                                  "node order reversed (clockwise) with a signed, negative det J: your matrix is "
+                                  "-P K P^T; " + _permutation_text(flipped) +
+                                  "; number the nodes counter-clockwise or integrate with |det J|",
+                                  "permutation": [p + 1 for p in flipped]})
+    elif entries is None and given_numeric is None and target.what in ("shape", "B") and given.shape == K.shape:
+        size = 1 if target.what == "shape" else 2
+        perm = column_group_permutation(_probe(K, comparer), _probe(given, comparer), size)
+        if perm is not None:
+            cols = [size * p + k for p in perm for k in range(size)]
+            if _matches(K.extract(list(range(K.rows)), cols), given, None, rtol, None, comparer):
+                found.append({"code": "node-order", "explanation": _permutation_text(perm),
+                              "permutation": [p + 1 for p in perm]})
+    transposed = {"code": "transposed", "explanation": "your matrix is derive's transposed"}
+    if K.rows != K.cols or target.what != "stiffness":
+        KT = K.T
+        if given_numeric is not None:
+            ok = KT.shape == given_numeric.shape and _matches(KT, None, given_numeric, rtol, None, None)
+        elif entries is None:
+            ok = KT.shape == given.shape and _matches(KT, given, None, rtol, None, comparer)
+        else:
+            ok = False
+        if ok:
+            found.append(transposed)
+    elif given_numeric is None and entries is None and given.shape == K.shape and K != K.T:
+        if _matches(K.T, given, None, rtol, None, comparer):
+            found.append(transposed)
+    for code, why, cand in cands:
+        if any(f["code"] == code for f in found):
+            continue
+        if _matches(cand, given, given_numeric, rtol, entries, comparer):
+            found.append({"code": code, "explanation": why})
+    if not any(f["code"] in ("sign", "thickness", "clockwise") for f in found):
+        if given_numeric is not None:
+            c = _scale_numeric(_as_numeric(K), given_numeric)
+        elif entries is not None or given.shape == K.shape:
+            c = _scale_symbolic(K, sorted(_entries_of(given).items()), comparer)
+        else:
+            c = None
+        t_val = target._mat()["t"]
+        if c is not None and c != 1 and c != -1 and _is_monomial(c) \
+                and not (c.free_symbols & {sp.Symbol("xi"), sp.Symbol("eta")}) \
+                and sp.cancel(c - t_val) != 0 and sp.cancel(c - 1 / t_val) != 0:
+            found.append({"code": "scale", "explanation": f"your matrix is {c} times derive's", "factor": str(c)})
+    return found
 
 
 def demo_section(outdir) -> dict:

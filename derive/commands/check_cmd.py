@@ -4,9 +4,11 @@ from __future__ import annotations
 import numpy as np
 import sympy as sp
 
+from ..bounded import Limits
 from ..check import CODES, Target, check
+from ..check_equality import MAX_DEGREE
 from ..errors import InputError
-from ..output import display, parse_set
+from ..output import parse_set
 from ..symbols import E, nu, t
 from ..userinput import load_matrix_file
 from .common import caution_line, print_json, resolve_element
@@ -22,7 +24,10 @@ EXAMPLE = ("examples:\n"
            "input: a matrix (rows on lines, entries separated by commas or spaces), K[i,j] = expr lines\n"
            "(0- or 1-based; declare with '# index-base: 1'), LaTeX pmatrix/bmatrix, or numbers (.csv, .npy).\n"
            "The text is parsed by derive's own whitelist parser, never evaluated as code.\n"
-           "diagnosis codes: " + ", ".join(CODES) + "\nexit status: 0 match, 1 mismatch, 2 bad input")
+           "diagnosis codes: " + ", ".join(CODES) + "\n"
+           "limits: comparing your entries may take --time-limit CPU seconds (default 5) and\n"
+           f"--memory-limit MB (default 1024); entries of degree above {MAX_DEGREE} are refused.\n"
+           "exit status: 0 match, 1 mismatch, 2 bad input (including a limit exceeded)")
 
 
 def add_arguments(p) -> None:
@@ -38,12 +43,28 @@ def add_arguments(p) -> None:
     p.add_argument("--what", default="stiffness", choices=("stiffness", "B", "shape"), help="what the file holds")
     p.add_argument("--tolerance", type=float, default=1e-8,
                    help="numeric input: tolerance relative to the expected matrix norm (default 1e-8)")
+    p.add_argument("--time-limit", type=float, default=5.0, metavar="SECONDS",
+                   help="CPU seconds allowed for comparing your entries and diagnosing (default 5; "
+                   "derive's own matrices are not counted)")
+    p.add_argument("--memory-limit", type=float, default=1024.0, metavar="MB",
+                   help="extra memory allowed for the comparison (default 1024 MB)")
     p.add_argument("--json", action="store_true", help="machine-readable JSON output")
 
 
+def _limits(args) -> Limits:
+    if not (0 < args.tolerance < 1):
+        raise InputError(f"--tolerance {args.tolerance:g} must be between 0 and 1 (relative to ||K||)")
+    if not (0 < args.time_limit <= 3600):
+        raise InputError(f"--time-limit {args.time_limit:g} must be between 0 and 3600 seconds")
+    if not (16 <= args.memory_limit <= 1 << 20):
+        raise InputError(f"--memory-limit {args.memory_limit:g} must be between 16 and {1 << 20} MB")
+    return Limits(seconds=args.time_limit, memory=int(args.memory_limit * 2 ** 20),
+                  what=f"comparing {args.file}",
+                  hint="a hand derivation needs far less; raise --time-limit / --memory-limit if the input is as intended")
+
+
 def run(args) -> int:
-    if not (args.tolerance > 0 and np.isfinite(args.tolerance)):
-        raise InputError(f"--tolerance {args.tolerance} must be a positive number")
+    limits = _limits(args)
     el = resolve_element(args.element, args.variant, args.state)
     values = parse_set(args.values)
     given = load_matrix_file(args.file)
@@ -66,34 +87,29 @@ def run(args) -> int:
         arr = given.array if given.array is not None else np.array(given.to_matrix().evalf().tolist(), dtype=float)
         if arr.ndim != 2:
             raise InputError(f"{args.file}: a numeric matrix must be 2-D")
-        result = check(target, given_numeric=arr, rtol=args.tolerance)
+        result = check(target, given_numeric=arr, rtol=args.tolerance, limits=limits)
         given_m = sp.Matrix(arr.tolist())
     else:
         if given.kind == "full":
             given_m = given.to_matrix()
-            result = check(target, given_m)
+            result = check(target, given_m, limits=limits)
         else:
             full = _symmetric_full(given, el.ndof) if args.what == "stiffness" else None
             if full is not None:
                 given_m = full
-                result = check(target, full)
+                result = check(target, full, limits=limits)
             else:
                 given_m = given.entries
-                result = check(target, dict(given.entries))
-    expected = target.expected()
-    side = []
-    for (i, j) in result.mismatched[:200]:
-        g = given_m[i, j] if not isinstance(given_m, dict) else given_m[(i, j)]
-        side.append({"entry": [i, j], "expected": str(display(expected[i, j])), "given": str(g)})
+                result = check(target, dict(given.entries), limits=limits)
     if args.json:
         print_json({"element": el.name, "variant": el.variant, "state": el.state, "what": args.what,
                     "match": result.match, "compared": result.compared,
-                    "mismatched": [list(ij) for ij in result.mismatched],
+                    "mismatched": [list(ij) for ij in result.mismatched], "shape": result.shape,
                     "diagnosis": result.codes, "explanations": result.diagnosis,
-                    "counterexample": result.counterexample, "entries": side, "method": result.method,
+                    "counterexample": result.counterexample, "entries": result.details, "method": result.method,
                     "index_base": given.index_base, "syntax": given.syntax, "caution": caution_line()})
     else:
-        _print_text(el, args, result, side, given)
+        _print_text(el, args, result, given)
     return 0 if result.match else 1
 
 
@@ -106,7 +122,7 @@ def _symmetric_full(given, ndof: int) -> sp.Matrix | None:
     return M if M.shape == (ndof, ndof) else None
 
 
-def _print_text(el, args, result, side, given) -> None:
+def _print_text(el, args, result, given) -> None:
     what = {"stiffness": "K", "B": "B", "shape": "N"}[args.what]
     print(f"derive check: {args.file} against {what} of {el.name} ({el.variant}, {el.state})")
     if given.index_base is not None:
@@ -114,8 +130,13 @@ def _print_text(el, args, result, side, given) -> None:
         print(f"indices: {given.index_base}-based ({how})")
     if result.match:
         print(f"MATCH: all {result.compared} entries agree ({result.method}).")
+        print(caution_line())
         return
-    print(f"MISMATCH: {len(result.mismatched)} of {result.compared} entries differ ({result.method}).")
+    if result.shape is not None:
+        g, e = result.shape["given"], result.shape["expected"]
+        print(f"MISMATCH: your matrix is {g[0]} x {g[1]}; derive's {what} is {e[0]} x {e[1]}.")
+    else:
+        print(f"MISMATCH: {len(result.mismatched)} of {result.compared} entries differ ({result.method}).")
     if result.diagnosis:
         print("diagnosis:")
         for d in result.diagnosis:
@@ -126,9 +147,27 @@ def _print_text(el, args, result, side, given) -> None:
         ce = result.counterexample
         pt = ", ".join(f"{k}={v}" for k, v in ce["point"].items())
         print(f"counterexample: entry [{ce['entry'][0]},{ce['entry'][1]}] differs at {pt}")
-    print("mismatched entries (0-based), expected vs given:")
-    for row in side[:20]:
-        print(f"  [{row['entry'][0]},{row['entry'][1]}]  expected {row['expected']}   given {row['given']}")
-    if len(side) > 20:
+    if result.details:
+        print("mismatched entries (0-based): expected, given, difference (given - expected), relative difference:")
+    for row in result.details[:20]:
+        print("  " + _detail_line(row))
+    if len(result.mismatched) > 20:
         print(f"  ... {len(result.mismatched) - 20} more (use --json for all)")
     print(caution_line())
+
+
+def _detail_line(row: dict) -> str:
+    i, j = row["entry"]
+    rel = row["relative_difference"]
+    rel_text = "n/a (expected 0)" if rel is None else f"{rel:.3g}"
+    if isinstance(row["difference"], float):  # numeric input
+        return (f"[{i},{j}]  expected {row['expected']}   given {row['given']}   "
+                f"difference {row['difference']:.3g}   relative {rel_text}")
+    text = f"[{i},{j}]  expected {row['expected']}   given {row['given']}"
+    if row["difference"] is not None:
+        text += f"   difference {row['difference']}"
+    at = row.get("at_point")
+    if at is not None:
+        pt = ", ".join(f"{k}={v}" for k, v in at["point"].items())
+        text += f"   at {pt or 'any point'}: expected {at['expected']}, given {at['given']}, relative {rel_text}"
+    return text

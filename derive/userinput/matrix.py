@@ -3,6 +3,7 @@ from __future__ import annotations
 
 import os
 import re
+import stat
 from dataclasses import dataclass
 from pathlib import Path
 from typing import Iterable
@@ -504,17 +505,44 @@ def _load_npy(path: Path, size: int) -> MatrixInput:
                        array=np.asarray(arr, dtype=float))
 
 
+_NOT_REGULAR = ((stat.S_ISDIR, "a directory"), (stat.S_ISFIFO, "a FIFO (named pipe)"),
+                (stat.S_ISCHR, "a character device"), (stat.S_ISBLK, "a block device"),
+                (stat.S_ISSOCK, "a socket"))
+
+
+def _regular_file_size(p: Path) -> int:
+    """Size of the regular file ``p``; an InputError saying what ``p`` is otherwise (never
+    opens it: reading a FIFO or a device could block or never end)."""
+    try:
+        st = p.stat()
+    except FileNotFoundError:
+        raise InputError(f"matrix file not found: {p}") from None
+    except PermissionError:
+        raise InputError(f"{p}: permission denied: a folder on the path is not accessible") from None
+    except OSError as exc:
+        raise InputError(f"{p}: cannot access the matrix file ({exc.strerror or type(exc).__name__})") from None
+    for test, what in _NOT_REGULAR:
+        if test(st.st_mode):
+            raise InputError(f"{p} is {what}, not a matrix file; give a text, .csv, .tex or .npy file")
+    if not stat.S_ISREG(st.st_mode):
+        raise InputError(f"{p} is not a regular file; give a text, .csv, .tex or .npy file")
+    return st.st_size
+
+
 @guarded
 def load_matrix_file(path, *, extra_symbols: Iterable[str] = ()) -> MatrixInput:
     """Load a matrix from ``.npy``, ``.csv``, ``.tex`` or a text file (syntax auto-detected)."""
     p = Path(os.fspath(path))
-    if not p.is_file():
-        raise InputError(f"matrix file not found: {p}")
-    size = p.stat().st_size
+    size = _regular_file_size(p)
     if size == 0:
         raise InputError(f"matrix file is empty: {p}")
-    with open(p, "rb") as fh:
-        head = fh.read(8)
+    try:
+        with open(p, "rb") as fh:
+            head = fh.read(8)
+    except PermissionError:
+        raise InputError(f"{p}: permission denied: the matrix file is not readable") from None
+    except OSError as exc:
+        raise InputError(f"{p}: cannot read the matrix file ({exc.strerror or type(exc).__name__})") from None
     if head.startswith(b"\x93NUMPY"):
         return _load_npy(p, size)
     suffix = p.suffix.lower()
@@ -522,8 +550,11 @@ def load_matrix_file(path, *, extra_symbols: Iterable[str] = ()) -> MatrixInput:
         raise InputError(f"{p}: not a .npy file (missing the NUMPY header)")
     if size > MAX_FILE_BYTES:
         raise InputError(f"{p}: file larger than {MAX_FILE_BYTES} bytes")
-    with open(p, "rb") as fh:
-        raw = fh.read(MAX_FILE_BYTES + 1)
+    try:
+        with open(p, "rb") as fh:
+            raw = fh.read(MAX_FILE_BYTES + 1)
+    except OSError as exc:
+        raise InputError(f"{p}: cannot read the matrix file ({exc.strerror or type(exc).__name__})") from None
     if b"\x00" in raw:
         raise InputError(f"{p}: binary file; expected text, .csv or .npy")
     try:
