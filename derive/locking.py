@@ -70,8 +70,12 @@ DISTORTIONS = {
     "trapezoid": ("fraction", s_sym, "top edge 2a(1 - s), bottom edge 2a(1 + s), ends leaning"),
 }
 COMPONENTS = ("eps_xx", "eps_yy", "gamma_xy")
-SOURCE = ("energy route (derive.locking): strain energy of the element's exact response to the consistent "
-          "nodal load of sigma_xx = sigma0*y/b, over the continuum's")
+SOURCE = ("energy route (derive.locking): the element's strain energy under the consistent nodal load of "
+          "sigma_xx = sigma0*y/b, divided by the continuum's strain energy under the same load (for one "
+          "load the energy ratio equals the ratio of end rotations)")
+#: names of the patch elements whose strain fields are reported apart (triangles: the 2a x 2b
+#: rectangle split along the diagonal from (-a, -b) to (a, b))
+PATCH_PARTS = {"triangle": ("lower-right triangle", "upper-left triangle")}
 #: the published Q4 plane-stress result, for reference in reports and charts
 COOK_Q4 = (1 - nu ** 2) / (1 + (1 - nu) * r ** 2 / 2)
 COOK_SOURCE = "Cook, Malkus, Plesha & Witt, Concepts and Applications of FEA, 4th ed."
@@ -429,33 +433,10 @@ class Analysis:
 
 
 def display_form(expr) -> sp.Expr:
-    """Factored form for reading: each factor written with a positive constant term
-    (1 - nu rather than nu - 1), signs collected into the coefficient.  Display only; the
-    value is unchanged (it parses back to the same rational function)."""
-    expr = sp.cancel(expr)
-    if expr.is_number:
-        return expr
-    num, den = sp.fraction(expr)
-
-    def tidy(e):
-        c, facs = sp.factor_list(e)
-        parts = []
-        for f, k in facs:
-            const = f.subs({s_: 0 for s_ in f.free_symbols})
-            if const.is_number and const < 0:
-                f = sp.expand(-f)
-                c *= (-1) ** k
-            parts.append(f ** k if k > 1 else f)
-        return c, parts
-
-    cn, pn = tidy(num)
-    cd, pd = tidy(den)
-    coeff = sp.Rational(cn) / sp.Rational(cd) if cn.is_Rational and cd.is_Rational else cn / cd
-    top = sp.Mul(*([coeff] if coeff != 1 else []), *pn, evaluate=False) if (pn or coeff != 1) else sp.Integer(1)
-    if not pd:
-        return top
-    bottom = pd[0] if len(pd) == 1 else sp.Mul(*pd, evaluate=False)
-    return sp.Mul(top, sp.Pow(bottom, -1, evaluate=False), evaluate=False)
+    """Factored form for reading, in the natural sign (1 - nu^2, not (nu - 1)(nu + 1)); display
+    only, the value is unchanged.  The one rule of derive.output.natural_form."""
+    from .output import natural_form
+    return natural_form(expr)
 
 
 @lru_cache(maxsize=None)
@@ -464,15 +445,16 @@ def analyse(name: str, variant: str = "full", state: str = "plane-stress") -> An
     t0 = time.perf_counter()
     name = catalog.element_info(name).name
     res = _solve_exact(name, variant, state)
-    strain = None if res.zero_energy else strain_report(res, state)
+    strain = None if res.zero_energy else strain_report(res, state, PATCH_PARTS.get(catalog.element_info(name).domain, ()))
     return Analysis(name, variant, state, res.ratio, res.zero_energy, strain, time.perf_counter() - t0)
 
 
-def strain_report(res: Response, state: str) -> dict:
+def strain_report(res: Response, state: str, names: tuple = ()) -> dict:
     """Element strain field of the bending response against the continuum's, per component.
 
     Strains in units of the continuum's peak bending strain eps0 = C_xx sigma0 (at y = b),
-    coordinates in units of b.  A component is *spurious* where the element carries a term
+    coordinates in units of b; ``names`` label the patch elements (their fields are shown
+    apart when they differ).  A component is *spurious* where the element carries a term
     (a monomial in x, y) the continuum does not, *missing* where the continuum has a term the
     element lacks.
     """
@@ -494,18 +476,22 @@ def strain_report(res: Response, state: str) -> dict:
     comps = {}
     spurious, missing = [], []
     for k, label in enumerate(COMPONENTS):
-        e_parts = []  # distinct fields over the patch (two triangles may differ)
-        for fields in per_element:
+        e_parts, e_names = [], []  # distinct fields over the patch (two triangles may differ)
+        for n_el, fields in enumerate(per_element):
             if not any(sp.cancel(fields[k] - q) == 0 for q in e_parts):
                 e_parts.append(fields[k])
+                e_names.append(names[n_el] if n_el < len(names) else f"element {n_el + 1}")
         e_support = set()
         for part in e_parts:
             e_support |= _support(part)
         c_support = _support(cont[k])
         extra = sorted(str(m) for m in e_support - c_support)
         lack = sorted(str(m) for m in c_support - e_support)
-        comps[label] = {"element": " | ".join(str(sp.factor(p)) for p in e_parts), "continuum": str(cont[k]),
-                        "spurious_terms": extra, "missing_terms": lack}
+        shown = [str(display_form(p)) for p in e_parts]
+        comps[label] = {"element": shown[0] if len(shown) == 1 else
+                        "; ".join(f"{n}: {f}" for n, f in zip(e_names, shown)),
+                        "element_parts": [{"part": n, "field": f} for n, f in zip(e_names, shown)],
+                        "continuum": str(cont[k]), "spurious_terms": extra, "missing_terms": lack}
         if extra:
             spurious.append(label)
         if lack:

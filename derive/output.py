@@ -77,15 +77,121 @@ def check_unknown(values: dict, free: Iterable[sp.Symbol], what: str) -> None:
 
 
 def display(expr: sp.Expr) -> sp.Expr:
-    """Compact form for display only (factor, never simplify)."""
+    """Compact form for display only (factored in the natural sign, never simplify)."""
     if not isinstance(expr, sp.Basic) or expr.is_number:
         return expr
     if _larger_than(expr, DISPLAY_FACTOR_LIMIT):
         return expr  # factoring a very large entry (general geometry) costs minutes and gains nothing
     try:
-        return sp.factor(expr)
+        return natural_form(expr)
     except Exception:  # factor can refuse radicals-heavy input; fall back to the raw form
         return expr
+
+
+def natural_form(expr: sp.Expr) -> sp.Expr:
+    """Factored form in the natural sign, for reading: each factor with a positive constant
+    term (1 - nu, not nu - 1) or, without one, with more positive than negative terms;
+    univariate factors multiplied out where that is shorter ((1 - nu)(1 + nu) -> 1 - nu^2,
+    while (1 + nu)(1 - 2 nu) stays); signs and numbers collected in one coefficient.
+
+    Display only: the result is the same rational function (``sp.cancel`` of the difference
+    is 0) and its ``str`` parses back with ``parse_expr``.
+    """
+    expr = sp.cancel(sp.together(expr))
+    if expr.is_number:
+        return expr
+    num, den = sp.fraction(expr)
+    cn, pn = _tidy(num)
+    cd, pd = _tidy(den)
+    coeff = sp.Rational(cn, cd) if cn.is_Rational and cd.is_Rational else cn / cd
+    factors = list(pn) + [f ** -1 for f in pd]
+    if not factors:
+        return coeff
+    if len(factors) == 1 and isinstance(factors[0], sp.Add) and coeff != 1:
+        return sp.Mul(coeff, factors[0], evaluate=False)   # 2*(1 - nu), not 2 - 2*nu
+    return sp.Mul(coeff, *factors)
+
+
+def _tidy(e: sp.Expr) -> tuple[sp.Expr, list[sp.Expr]]:
+    """(numeric coefficient, factors in the natural sign) of a polynomial expression."""
+    c, facs = sp.factor_list(e)
+    parts: list[tuple[sp.Expr, int]] = []
+    for f, k in facs:
+        if _flip(f):
+            f = sp.expand(-f)
+            c *= (-1) ** k
+        parts.append((f, k))
+    parts = _merge_univariate(parts)
+    return c, [f ** k if k > 1 else f for f, k in parts]
+
+
+def _flip(f: sp.Expr) -> bool:
+    terms = sp.Add.make_args(sp.expand(f))
+    if len(terms) < 2:
+        return bool(f.could_extract_minus_sign())
+    const = sum((t for t in terms if t.is_number), sp.Integer(0))
+    if const != 0:
+        return bool(const < 0)
+    neg = sum(1 for t in terms if t.could_extract_minus_sign())
+    return neg > len(terms) - neg
+
+
+def _merge_univariate(parts: list[tuple[sp.Expr, int]]) -> list[tuple[sp.Expr, int]]:
+    """Multiply out simple factors in one symbol when the product has no more terms than the
+    longest factor ((1 - nu)(1 + nu) -> 1 - nu^2)."""
+    out = list(parts)
+    changed = True
+    while changed:
+        changed = False
+        for i in range(len(out)):
+            for j in range(i + 1, len(out)):
+                (f, k), (g, m) = out[i], out[j]
+                if k != m or len(f.free_symbols) != 1 or f.free_symbols != g.free_symbols:
+                    continue
+                prod = sp.expand(f * g)
+                longest = max(len(sp.Add.make_args(f)), len(sp.Add.make_args(g)))
+                if len(sp.Add.make_args(prod)) <= longest:
+                    if _flip(prod):  # cannot happen for a product of natural factors; keep the sign honest
+                        continue
+                    out[i] = (prod, k)
+                    del out[j]
+                    changed = True
+                    break
+            if changed:
+                break
+    return out
+
+
+def common_factor(M: sp.Matrix) -> tuple[sp.Expr, sp.Matrix]:
+    """Pull the common factor out of a matrix: ``M = factor * rest`` with ``factor`` the gcd of
+    the entries' numerators over the lcm of their denominators (so ``rest`` is polynomial),
+    in the natural sign.  Returns ``(1, M)`` when there is nothing to pull or the entries are
+    too large to factor quickly (general geometry)."""
+    entries = [v for v in M if v != 0]
+    if not entries or any(_larger_than(v, DISPLAY_FACTOR_LIMIT) for v in entries) \
+            or all(getattr(v, "is_number", True) for v in entries):
+        return sp.Integer(1), M
+    try:
+        fracs = [sp.fraction(sp.cancel(v)) for v in entries]
+        g = sp.Integer(0)
+        for n, _ in fracs:
+            g = sp.gcd(g, n)
+        lcm = sp.Integer(1)
+        for _, d in fracs:
+            lcm = sp.lcm(lcm, d)
+        factor = sp.cancel(g / lcm)
+        if factor.could_extract_minus_sign():
+            factor = -factor
+        _, den = sp.fraction(factor)
+        cd, _ = _tidy(den)
+        if cd < 0:
+            factor = -factor
+        if factor == 1 or factor.is_number:
+            return sp.Integer(1), M
+        rest = M.applyfunc(lambda v: sp.expand(sp.cancel(v / factor)) if v != 0 else v)
+    except (sp.PolynomialError, NotImplementedError, ZeroDivisionError):
+        return sp.Integer(1), M
+    return factor, rest
 
 
 def _larger_than(expr: sp.Expr, limit: int) -> bool:
@@ -96,8 +202,15 @@ def _larger_than(expr: sp.Expr, limit: int) -> bool:
     return False
 
 
-def matrix_text(M: sp.Matrix, name: str = "K", symmetric: bool = False) -> str:
+def matrix_text(M: sp.Matrix, name: str = "K", symmetric: bool = False, pull_factor: bool = True) -> str:
+    """``name[i,j] = expr`` lines (0-based; upper triangle when ``symmetric``), each entry in
+    the natural sign.  With a common factor (see :func:`common_factor`) a header line names it
+    and every entry is written ``factor * (rest)``, so each line still parses back alone."""
+    factor, rest = common_factor(M) if pull_factor else (sp.Integer(1), M)
     lines = []
+    fac = str(display(factor))
+    if factor != 1:
+        lines.append(f"# common factor: {name} = {fac} * (the bracket of each entry)")
     big = M.rows * M.cols > 64 and any(_larger_than(M[i, i], DISPLAY_FACTOR_LIMIT) for i in range(min(M.rows, M.cols)))
     progress = Progress(M.rows, f"printing {name}") if big else None
     for i in range(M.rows):
@@ -106,21 +219,88 @@ def matrix_text(M: sp.Matrix, name: str = "K", symmetric: bool = False) -> str:
         for j in range(M.cols):
             if symmetric and j < i:
                 continue
-            lines.append(f"{name}[{i},{j}] = {display(M[i, j])}")
+            v = rest[i, j]
+            if factor != 1 and v != 0:
+                lines.append(f"{name}[{i},{j}] = {fac} * {_wrapped(display(v), '(', ')', str)}")
+            else:
+                lines.append(f"{name}[{i},{j}] = {display(M[i, j]) if factor == 1 else 0}")
     if progress:
         progress.close()
     return "\n".join(lines)
 
 
-def numeric_text(A: np.ndarray) -> str:
-    with np.printoptions(precision=6, linewidth=160, suppress=False):
-        return np.array2string(np.asarray(A, dtype=float), separator=", ")
+def _wrapped(e: sp.Expr, left: str, right: str, render) -> str:
+    """The rendered expression, bracketed when it is a sum or starts with a sign or a digit
+    (LaTeX \\frac{..}{..} 3 a would read as a number joined to the fraction)."""
+    text = render(e)
+    bare = text.lstrip()
+    return f"{left}{text}{right}" if isinstance(e, sp.Add) or bare[:1] == "-" or bare[:1].isdigit() else text
 
 
-def matrix_latex(M: sp.Matrix, name: str = "K") -> str:
-    rows = [" & ".join(sp.latex(display(M[i, j])) for j in range(M.cols)) for i in range(M.rows)]
-    body = " \\\\\n".join(rows)
-    return f"{name} = \\begin{{bmatrix}}\n{body}\n\\end{{bmatrix}}"
+#: matrices with more columns than this are written to LaTeX as a list of entries (align*)
+LATEX_MATRIX_COLUMNS = 8
+
+
+def matrix_latex(M: sp.Matrix, name: str = "K", title: str | None = None, notes: Iterable[str] = (),
+                 symmetric: bool = False) -> str:
+    """LaTeX a document can include: ``%`` header lines (what the matrix is), then either
+    ``name = factor \\begin{bmatrix} ... \\end{bmatrix}`` (up to LATEX_MATRIX_COLUMNS columns)
+    or, for wider matrices, an ``align*`` list of entries ``name_{i,j} &= ...`` (1-based,
+    upper triangle when ``symmetric``), one per line, which breaks across pages (amsmath)."""
+    factor, rest = common_factor(M)
+    fac = "" if factor == 1 else sp.latex(display(factor)) + " "
+    head = [f"% {title}"] if title else []
+    head += [f"% {line}" for line in notes]
+    if M.cols <= LATEX_MATRIX_COLUMNS:
+        if symmetric:
+            head.append("% symmetric; full matrix shown")
+        rows = [" & ".join(sp.latex(display(rest[i, j])) for j in range(M.cols)) for i in range(M.rows)]
+        body = " \\\\\n".join(rows)
+        return "\n".join(head + [f"{name} = {fac}\\begin{{bmatrix}}\n{body}\n\\end{{bmatrix}}"])
+    head.append(f"% {M.rows} x {M.cols}: too wide for one matrix environment, so listed entry by entry "
+                "(1-based indices" + ("; upper triangle" if symmetric else "") + "; needs amsmath)")
+    if factor != 1:
+        head.append(f"% every entry carries the common factor {sp.latex(display(factor))}")
+    lines = []
+    for i in range(M.rows):
+        for j in range(M.cols):
+            if symmetric and j < i:
+                continue
+            v = rest[i, j]
+            entry = "0" if v == 0 else (fac + _wrapped(display(v), r"\left(", r"\right)", sp.latex) if fac
+                                        else sp.latex(display(v)))
+            lines.append(f"{name}_{{{i + 1},{j + 1}}} &= {entry}")
+    return "\n".join(head + ["\\begin{align*}", " \\\\\n".join(lines), "\\end{align*}"])
+
+
+#: significant digits of numeric text output (``--digits``)
+DEFAULT_DIGITS = 7
+MAX_DIGITS = 17
+
+
+def check_digits(n) -> int:
+    """``--digits``: a whole number 1..17 (17 digits round-trip every float64)."""
+    try:
+        v = int(str(n).strip())
+    except ValueError:
+        raise InputError(f"--digits {n!r}: give a whole number of significant digits, 1 to {MAX_DIGITS}") from None
+    if not 1 <= v <= MAX_DIGITS:
+        raise InputError(f"--digits must be between 1 and {MAX_DIGITS}; got {v}")
+    return v
+
+
+def num(v, digits: int = DEFAULT_DIGITS) -> str:
+    """One number with ``digits`` significant digits (general format, as ``%.{digits}g``)."""
+    return f"{float(v):.{digits}g}"
+
+
+def numeric_text(A: np.ndarray, digits: int = DEFAULT_DIGITS) -> str:
+    """A numeric matrix, every entry with ``digits`` significant digits, columns aligned."""
+    A = np.atleast_2d(np.asarray(A, dtype=float))
+    cells = [[num(v, digits) for v in row] for row in A]
+    width = max((len(c) for row in cells for c in row), default=1)
+    rows = ["[" + ", ".join(c.rjust(width) for c in row) + "]" for row in cells]
+    return "[" + ",\n ".join(rows) + "]"
 
 
 def to_float_matrix(M: sp.Matrix) -> np.ndarray:

@@ -234,3 +234,117 @@ def test_chart_json_and_written_locking_table_are_strict(tmp_path, monkeypatch, 
     table = [{"limit_5pct": aspect_limit("Q4", "eas4", "plane-stress", 0.2, 0.05)}]
     data = strict_loads(output.emit_json(table))          # the demo's locking-table.json is written this way
     assert data[0]["limit_5pct"]["aspect_limit"] is None
+
+
+# --- headers describe the matrix shown --------------------------------------------------------
+
+def test_B_header_is_not_called_symmetric(capsys):
+    code, out, _ = run(["stiffness", "T6", "--what", "B"], capsys)
+    head = [line for line in out.splitlines() if line.startswith("#")]
+    entries = [line for line in out.splitlines() if line.startswith("B[")]
+    assert code == 0 and "upper triangle" not in out and "every entry shown" in out
+    assert any("3 x 12" in line for line in head) and len(entries) == 3 * 12   # T6: 6 nodes x 2 DOFs
+    assert "right triangle with legs 2a along x and 2b along y" in head[0]      # not "geometry rectangle"
+
+
+def test_D_header_has_no_dof_note(capsys):
+    code, out, _ = run(["stiffness", "Q4", "--what", "D"], capsys)
+    assert code == 0 and "DOFs" not in out and "constitutive" in out and "upper triangle shown" in out
+    code, out, _ = run(["stiffness", "Q4", "--what", "D", "--json"], capsys)
+    assert "dof_order" not in strict_loads(out)
+
+
+def test_caution_in_stiffness_and_shapes_text(capsys):
+    for args in (["stiffness", "Q4"], ["stiffness", "T3", "--nodes", "0,0 2,0 0,1", "--set", "E=1,nu=0.25,t=1"],
+                 ["shapes", "Q4"], ["shapes", "Q4", "--format", "latex"], ["stiffness", "Q4", "--format", "latex"]):
+        code, out, _ = run(args, capsys)
+        assert code == 0 and output.CAUTION in out, args
+
+
+# --- locking text -------------------------------------------------------------------------------
+
+def test_locking_method_sentence_is_complete_and_parts_are_named(capsys):
+    code, out, _ = run(["locking", "T3", "--json"], capsys)
+    src = strict_loads(out)["source"]
+    assert src.endswith(")") and "continuum's strain energy under the same load" in src
+    code, out, _ = run(["locking", "T3"], capsys)
+    assert code == 0 and " | " not in out
+    assert "lower-right triangle" in out and "upper-left triangle" in out
+
+
+# --- help -----------------------------------------------------------------------------------------
+
+@pytest.mark.parametrize("cmd", ["locking", "modes", "patch", "bench"])
+def test_element_help_mentions_spec_files(cmd, capsys):
+    with pytest.raises(SystemExit):
+        main([cmd, "--help"] if cmd != "bench" else ["bench", "--help"])
+    assert ".toml" in capsys.readouterr().out
+
+
+@pytest.mark.parametrize("cmd", ["list", "locking", "chart", "modes", "patch", "bench", "perf", "demo", "shapes",
+                                 "stiffness"])
+def test_json_help_and_examples(cmd, capsys):
+    with pytest.raises(SystemExit):
+        main([cmd, "--help"])
+    text = capsys.readouterr().out
+    assert "alias of" not in text
+    if "--format" not in text:
+        assert "same as --format" not in text
+    assert "example" in text and f"derive {cmd}" in text.split("example", 1)[1]
+
+
+def test_nu_range_help_counts_values():
+    from derive.commands.locking_cmd import parse_nus
+    assert len(parse_nus("0:0.45")) == 11          # 10 steps, both ends: 11 values (common practice)
+
+
+def test_nu_range_help_text(capsys):
+    with pytest.raises(SystemExit):
+        main(["locking", "--help"])
+    assert "11 values" in " ".join(capsys.readouterr().out.split())
+
+
+# --- --digits -----------------------------------------------------------------------------------
+
+def test_digits_option(capsys):
+    args = ["stiffness", "Q4", "--set", "a=1,b=1,E=1,nu=0.3,t=1"]
+    code, out, _ = run(args + ["--digits", "3"], capsys)
+    # K[0,0] of the unit square Q4, E = 1, nu = 0.3: (1/(1 - nu^2)) (1/3 + (1 - nu)/6) = 0.4945054945...
+    # (Cook et al. 4th ed. closed form, from memory)
+    assert code == 0 and "[[0.495," in out.replace(" ", "")
+    code, out, _ = run(args + ["--digits", "12"], capsys)
+    assert "0.494505494505" in out
+    code, _, err = run(args + ["--digits", "0"], capsys)
+    assert code == 2 and "--digits" in err
+    code, out, _ = run(["locking", "Q4", "--aspect", "2", "--nu", "0.3", "--digits", "3"], capsys)
+    # Q4 ratio (1 - nu^2)/(1 + (1 - nu) r^2/2) at r = 2, nu = 0.3: 0.91/2.4 = 0.379166... (Cook et al., from memory)
+    assert "nu = 0.3: 0.379\n" in out
+
+
+# --- symbolic readability -------------------------------------------------------------------------
+
+def test_natural_sign_and_common_factor_parse_back(capsys):
+    import sympy as sp
+    from derive.symbols import by_name
+    import derive
+    K = derive.element("Q4").stiffness("rectangle")
+    code, out, _ = run(["stiffness", "Q4"], capsys)
+    assert "# common factor: K = E*t/(24*a*b*(1 - nu**2))" in out
+    assert "nu - 1" not in out and "(nu - 1)*(nu + 1)" not in out
+    for line in out.splitlines():
+        if line.startswith("K["):
+            lhs, rhs = line.split(" = ", 1)
+            i, j = (int(v) for v in lhs[2:-1].split(","))
+            # each printed entry is the derived entry (reference library: sympy)
+            assert sp.cancel(sp.parse_expr(rhs, local_dict=by_name()) - K[i, j]) == 0, line
+    assert str(output.display(derive.locking_ratio("Q4", "full", "plane-stress"))).startswith("2*(1 - nu**2)/")
+
+
+def test_large_latex_matrix_is_a_list_a_document_can_include(capsys):
+    code, out, _ = run(["stiffness", "Q8", "--format", "latex"], capsys)
+    lines = out.splitlines()
+    assert code == 0 and lines[0].startswith("% K of Q8") and "\\begin{align*}" in lines
+    entries = [line for line in lines if line.startswith("K_{")]
+    assert len(entries) == 16 * 17 // 2 and all("&=" in line for line in entries)  # upper triangle of 16 x 16
+    code, out, _ = run(["stiffness", "Q4", "--format", "latex"], capsys)
+    assert "K = \\frac{E t}{24 a b \\left(1 - \\nu^{2}\\right)} \\begin{bmatrix}" in out

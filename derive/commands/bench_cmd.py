@@ -2,6 +2,7 @@
 from __future__ import annotations
 
 from .. import benchmarks as B
+from .. import catalog
 from ..errors import InputError
 from ..mesh import write_vtu
 from ..output import CAUTION, check_output_file, parse_number, write_atomic
@@ -21,7 +22,8 @@ EXAMPLE = ("examples:\n"
 
 def add_arguments(p) -> None:
     p.add_argument("problem", choices=B.PROBLEMS, help="benchmark problem")
-    p.add_argument("--element", default="Q4", help="catalogue element (default Q4)")
+    p.add_argument("--element", default="Q4", help="catalogue name (" + ", ".join(catalog.ELEMENTS) + ") or a spec .toml file "
+                                                    "(default Q4)")
     p.add_argument("--variant", default="full",
                    help="formulation variant (default: full); see `derive list`; locking-mesh accepts a "
                         "comma-separated list to compare variants on one chart")

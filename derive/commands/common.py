@@ -9,7 +9,7 @@ from .. import catalog
 from ..element import Element, element
 from ..errors import InputError
 from ..material import STATES
-from ..output import CAUTION, FORMATS, emit_json
+from ..output import CAUTION, DEFAULT_DIGITS, FORMATS, emit_json
 
 
 class HelpFormatter(argparse.RawDescriptionHelpFormatter):
@@ -27,7 +27,8 @@ def add_element_args(p: argparse.ArgumentParser, variant: bool = True, state: bo
 def add_output_args(p: argparse.ArgumentParser, formats: bool = True) -> None:
     if formats:
         p.add_argument("--format", choices=FORMATS, default="text", help="output format (default: text)")
-    p.add_argument("--json", action="store_true", help="machine-readable JSON output (alias of --format json)")
+    p.add_argument("--json", action="store_true",
+                   help="machine-readable JSON output" + (" (same as --format json)" if formats else ""))
 
 
 def output_format(args) -> str:
@@ -58,3 +59,9 @@ def add_force_arg(p: argparse.ArgumentParser, what: str = "replace an existing o
     """``--force``: the one switch that lets a command replace or write into what exists
     (see the output-path rules in derive/output.py)."""
     p.add_argument("--force", action="store_true", help=what)
+
+
+def add_digits_arg(p: argparse.ArgumentParser) -> None:
+    """``--digits N``: significant digits of the numbers in text output (default 7)."""
+    p.add_argument("--digits", default=str(DEFAULT_DIGITS),
+                   help=f"significant digits of numbers in text output (default {DEFAULT_DIGITS}, 1 to 17)")

@@ -9,8 +9,8 @@ from .. import catalog
 from ..errors import InputError
 from ..locking import display_form, report
 from ..symbols import nu, r
-from ..output import CAUTION, parse_number
-from .common import add_output_args, print_json
+from ..output import CAUTION, check_digits, num, parse_number
+from .common import add_digits_arg, add_output_args, print_json
 
 NAME = "locking"
 HELP = ("closed-form bending ratio theta_element/theta_continuum of a 2a x 2b rectangle in pure bending, "
@@ -24,18 +24,19 @@ EXAMPLE = ("examples:\n"
 
 
 def add_arguments(p) -> None:
-    p.add_argument("element", help="catalogue element (" + ", ".join(catalog.ELEMENTS) + ")")
+    p.add_argument("element", help="catalogue name (" + ", ".join(catalog.ELEMENTS) + ") or a spec .toml file")
     p.add_argument("--variant", default="full", help="formulation variant (default: full); see `derive list`")
     p.add_argument("--state", default="plane-stress", help="plane-stress (default) or plane-strain")
     p.add_argument("--aspect", help="evaluate at this aspect ratio r = a/b (a along the bending axis)")
     p.add_argument("--nu", help="Poisson's ratio: one value (0.3), a list (0,0.2,0.3) or a range lo:hi[:steps] "
-                                "(0:0.45 gives 10 steps); a list or range is used by --tolerance")
+                                "of steps + 1 values, both ends included (0:0.45 gives 10 steps, 11 values: "
+                                "0, 0.045, ..., 0.45); a list or range is used by --tolerance")
     p.add_argument("--tolerance", help="largest aspect ratio with |ratio - 1| <= TOLERANCE, e.g. 0.05")
     p.add_argument("--distortion", help="also the ratio of a distorted shape: skew=DEGREES, taper=FRACTION "
                                         "(depth varying along the element) or trapezoid=FRACTION (leaning ends); "
                                         "at --aspect and --nu (defaults 1 and 0.3)")
-    p.add_argument("--format", choices=("text", "latex", "json"), default="text", help="output format (default text)")
-    add_output_args(p, formats=False)
+    add_output_args(p)
+    add_digits_arg(p)
 
 
 def parse_nus(text: str | None) -> list[float] | None:
@@ -62,6 +63,7 @@ def parse_nus(text: str | None) -> list[float] | None:
 
 def run(args) -> int:
     fmt = "json" if args.json else args.format
+    digits = check_digits(args.digits)
     nus = parse_nus(args.nu)
     aspect = None
     if args.aspect is not None:
@@ -90,13 +92,13 @@ def run(args) -> int:
             expr = sp.sympify(res["formula"], locals={"r": r, "nu": nu})
             print(r"\frac{\theta_{e}}{\theta_{c}} = " + sp.latex(display_form(expr)))
         return 0
-    for line in text_lines(res):
+    for line in text_lines(res, digits):
         print(line)
     print(CAUTION)
     return 0
 
 
-def text_lines(res: dict) -> list[str]:
+def text_lines(res: dict, digits: int = 6) -> list[str]:
     out = [f"{res['element']} {res['variant']}, {res['state']}: bending rotation ratio theta_element/theta_continuum",
            "  (one 2a x 2b rectangular element in pure bending; r = a/b, a along the bending axis)"]
     if res["zero_energy"]:
@@ -104,14 +106,23 @@ def text_lines(res: dict) -> list[str]:
         return out
     out.append(f"  ratio = {res['formula_display']}")
     if res.get("ratio") is not None:
-        out.append(f"  at r = {res['aspect']:g}, nu = {res['nu']:g}: {res['ratio']:.6g}")
+        out.append(f"  at r = {res['aspect']:g}, nu = {res['nu']:g}: {num(res['ratio'], digits)}")
     for v, val in res.get("ratios", []):
-        out.append(f"  at r = {res['aspect']:g}, nu = {v:g}: {val:.6g}")
+        out.append(f"  at r = {res['aspect']:g}, nu = {v:g}: {num(val, digits)}")
     st = res.get("spurious_strain")
     if st:
         out.append(f"  strains against the continuum: {st['summary']}")
+        parts = max(len(d.get("element_parts", [])) for d in st["components"].values())
+        if parts > 1:
+            out.append("    (the rectangle is two triangles split along the diagonal from (-a, -b) to (a, b); "
+                       "their strain fields differ and are shown apart)")
         for comp, d in st["components"].items():
-            out.append(f"    {comp:<8} element {d['element']:<40} continuum {d['continuum']}")
+            if len(d.get("element_parts", [])) > 1:
+                out.append(f"    {comp:<8} continuum {d['continuum']}")
+                for part in d["element_parts"]:
+                    out.append(f"    {'':<8}   element, {part['part']}: {part['field']}")
+            else:
+                out.append(f"    {comp:<8} element {d['element']:<40} continuum {d['continuum']}")
         out.append(f"    ({st['units']})")
     tol = res.get("tolerance")
     if tol:
@@ -119,18 +130,18 @@ def text_lines(res: dict) -> list[str]:
         for lim in tol["limits"]:
             val = lim["aspect_limit"]
             txt = "unlimited" if val is not None and math.isinf(val) else (
-                "none" if not val else f"r <= {val:.4g}")
+                "none" if not val else f"r <= {num(val, digits)}")
             extra = f"; closed form r* = {lim['closed_form']}" if lim.get("closed_form") else f" ({lim['method']})"
             out.append(f"    nu = {lim['nu']:g}: {txt}{extra}")
     vol = res.get("volumetric")
     if vol:
         verdict = "locks (goes to zero)" if vol["locks"] else "stays finite"
         out.append(f"  volumetric index (plane strain): ratio as nu -> 1/2 = {vol['limit']} ({verdict}); "
-                   f"at r = {vol['aspect']:g}: " + ", ".join(f"nu={v:g}: {x:.4g}" for v, x in vol["curve"]))
+                   f"at r = {vol['aspect']:g}: " + ", ".join(f"nu={v:g}: {num(x, digits)}" for v, x in vol["curve"]))
     dist = res.get("distortion")
     if dist:
-        val = "zero-energy mode" if dist["ratio"] is None else f"{dist['ratio']:.6g}"
-        base = "zero-energy mode" if dist["undistorted_ratio"] is None else f"{dist['undistorted_ratio']:.6g}"
+        val = "zero-energy mode" if dist["ratio"] is None else num(dist["ratio"], digits)
+        base = "zero-energy mode" if dist["undistorted_ratio"] is None else num(dist["undistorted_ratio"], digits)
         out.append(f"  distortion {dist['kind']}={dist['value']:g} ({dist['shape']}) at r = {dist['aspect']:g}, "
                    f"nu = {dist['nu']:g}: {val} (undistorted {base}; {dist['method']})")
         if dist.get("formula"):

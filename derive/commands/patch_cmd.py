@@ -16,7 +16,7 @@ EXAMPLE = ("examples:\n"
 
 
 def add_arguments(p) -> None:
-    p.add_argument("element", help="catalogue element (" + ", ".join(catalog.ELEMENTS) + ")")
+    p.add_argument("element", help="catalogue name (" + ", ".join(catalog.ELEMENTS) + ") or a spec .toml file")
     p.add_argument("--variant", default="full", help="formulation variant (default: full); see `derive list`")
     p.add_argument("--state", default="plane-stress", choices=("plane-stress", "plane-strain"),
                    help="plane-stress (default; the published stresses 1333/1333/400) or plane-strain")

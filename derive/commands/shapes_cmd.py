@@ -3,8 +3,10 @@ from __future__ import annotations
 
 import sympy as sp
 
-from ..output import display, matrix_latex
-from .common import add_element_args, add_output_args, output_format, print_json, resolve_element
+from ..output import CAUTION, check_digits, display, matrix_latex, num
+from .common import (add_digits_arg, add_element_args, add_output_args, output_format, print_json,
+                     resolve_element)
+from .stiffness_cmd import describe_geometry, parse_nodes
 
 NAME = "shapes"
 HELP = "shape functions with partition-of-unity, Kronecker-delta and completeness checks"
@@ -17,14 +19,17 @@ EXAMPLE = ("examples:\n  derive shapes Q8\n  derive shapes T6 --format latex\n"
 def add_arguments(p) -> None:
     add_element_args(p, variant=False, state=False)
     p.add_argument("--geometry", choices=("rectangle", "parallelogram", "general"),
-                   help="also print the isoparametric map, Jacobian and det J for this geometry")
+                   help="also print the isoparametric map, Jacobian and det J for this geometry (rectangle "
+                        "2a x 2b; for triangles the right triangle with legs 2a, 2b, the rectangle's lower-left half)")
     p.add_argument("--nodes", help='numeric nodal coordinates "x1,y1 x2,y2 ...": map, J and a validity report '
                    "(det J over the element and at the rule's points)")
     add_output_args(p)
+    add_digits_arg(p)
 
 
 def run(args) -> int:
     el = resolve_element(args.element)
+    digits = check_digits(args.digits)
     sh = el.shapes
     checks = sh.checks()
     fmt = output_format(args)
@@ -33,7 +38,6 @@ def run(args) -> int:
             "checks": checks}
     imap = None
     if args.nodes:
-        from .stiffness_cmd import parse_nodes
         nodes = parse_nodes(args.nodes)
         data["validity"] = el.validity(nodes)
         imap = el.map(nodes)
@@ -42,11 +46,13 @@ def run(args) -> int:
                        "det_jacobian": str(display(imap.det))}
     elif args.geometry:
         imap = el.map(args.geometry)
-        data["map"] = {"geometry": args.geometry, "x": str(imap.x), "y": str(imap.y),
+        data["map"] = {"geometry": args.geometry,
+                       "geometry_description": describe_geometry(args.geometry, sh.domain),
+                       "x": str(imap.x), "y": str(imap.y),
                        "jacobian": [[str(display(v)) for v in row] for row in imap.jacobian.tolist()],
                        "det_jacobian": str(display(imap.det))}
     if fmt == "json":
-        print_json(data)
+        print_json({**data, "caution": CAUTION})
         return 0
     if fmt == "latex":
         for i, f in enumerate(sh.functions, start=1):
@@ -54,6 +60,7 @@ def run(args) -> int:
         if imap is not None:
             print(matrix_latex(imap.jacobian.applyfunc(display), "J"))
             print(f"\\det J = {sp.latex(display(imap.det))}")
+        print(f"% {CAUTION}")
         return 0
     print(f"{el.name}: {el.info.description} on the {sh.domain} reference domain")
     print("basis: {" + ", ".join(map(str, sh.basis)) + "}")
@@ -64,11 +71,14 @@ def run(args) -> int:
     print(f"  Kronecker delta at the nodes:     {'yes' if checks['kronecker_delta'] else 'NO'}")
     print(f"  completeness degree:              {checks['completeness']}")
     if imap is not None:
-        print(f"map ({args.geometry or 'nodes'}): x = {imap.x}, y = {imap.y}")
+        shape = describe_geometry(args.geometry, sh.domain) if args.geometry else "the given nodal coordinates"
+        print(f"map ({shape}): x = {imap.x}, y = {imap.y}")
         print(f"J = {imap.jacobian.applyfunc(display).tolist()}")
         print(f"det J = {display(imap.det)}")
     if "validity" in data:
         v = data["validity"]
-        print(f"validity: valid; area {v['area']:.6g}; det J over the element {v['det_min']:.6g} .. {v['det_max']:.6g}; "
-              f"at the full rule's points {v['det_at_points_min']:.6g} .. {v['det_at_points_max']:.6g}")
+        print(f"validity: valid; area {num(v['area'], digits)}; det J over the element {num(v['det_min'], digits)} .. "
+              f"{num(v['det_max'], digits)}; at the full rule's points {num(v['det_at_points_min'], digits)} .. "
+              f"{num(v['det_at_points_max'], digits)}")
+    print(CAUTION)
     return 0

@@ -5,10 +5,11 @@ import sympy as sp
 
 from ..errors import InputError
 from ..material import D as D_matrix
-from ..output import (check_unknown, matrix_latex, matrix_text, numeric_text, parse_number, parse_set,
+from ..output import (check_digits, check_unknown, matrix_latex, matrix_text, numeric_text, parse_number, parse_set,
                       to_float_matrix)
 from ..symbols import E, nu, t
-from .common import add_element_args, add_output_args, caution_line, output_format, print_json, resolve_element
+from .common import (add_digits_arg, add_element_args, add_output_args, caution_line, output_format, print_json,
+                     resolve_element)
 
 NAME = "stiffness"
 HELP = "element stiffness K (or B, D), closed form or as the element's rule computes it"
@@ -23,13 +24,16 @@ EXAMPLE = ("examples:\n"
 def add_arguments(p) -> None:
     add_element_args(p)
     p.add_argument("--geometry", default="rectangle", choices=("rectangle", "parallelogram", "general"),
-                   help="rectangle 2a x 2b (default), parallelogram (a, b, skew c), general (x1, y1, ...)")
+                   help="rectangle 2a x 2b (default; for triangles the right triangle with legs 2a, 2b, its "
+                        "lower-left half), parallelogram (a, b, skew c; triangles: its lower-left half), "
+                        "general (x1, y1, ...)")
     p.add_argument("--nodes", help='numeric nodal coordinates "x1,y1 x2,y2 ..." (overrides --geometry)')
     p.add_argument("--rule", default="element",
                    help="element (each term with its own rule, default), exact, or a rule such as gauss-3x3")
     p.add_argument("--what", default="K", choices=("K", "B", "D"), help="matrix to print (default K)")
     p.add_argument("--set", dest="values", help="numeric values, e.g. a=2,b=0.5,E=210e9,nu=0.3,t=0.01")
     add_output_args(p)
+    add_digits_arg(p)
 
 
 def parse_nodes(text: str) -> list[list[sp.Rational]]:
@@ -42,6 +46,37 @@ def parse_nodes(text: str) -> list[list[sp.Rational]]:
     if not rows:
         raise InputError("--nodes is empty; give \"x1,y1 x2,y2 ...\"")
     return rows
+
+
+def describe_geometry(kind: str, domain: str, axisymmetric: bool = False) -> str:
+    """What the geometry kind is for this element's domain (headers name the shape shown)."""
+    at = " centred at radius R" if axisymmetric else " centred at the origin"
+    if kind == "nodes":
+        return "the given nodal coordinates"
+    if kind == "general":
+        return "general (nodal coordinates x1, y1, ..., xn, yn)"
+    if domain == "triangle":
+        if kind == "rectangle":
+            return ("right triangle with legs 2a along x and 2b along y, right angle at (-a, -b) "
+                    "(the lower-left half of the 2a x 2b rectangle" + at + ")")
+        return ("triangle with base 2a along y = -b and apex skewed by c (the lower-left half of the "
+                "parallelogram x = aX + cY, y = bY" + at + ")")
+    if kind == "rectangle":
+        return "rectangle 2a x 2b" + at
+    return "parallelogram x = aX + cY, y = bY (skew parameter c)" + at
+
+
+def matrix_notes(label: str, state: str, rows: int, cols: int) -> list[str]:
+    """Header lines that describe the matrix printed: its shape, row/column meaning, symmetry."""
+    strains = "rr, zz, tt (hoop), rz" if state == "axisymmetric" else "xx, yy, xy (engineering shear)"
+    if label == "K":
+        return [f"{rows} x {cols}; rows and columns are the DOFs interleaved u1, v1, u2, v2, ...",
+                "symmetric: upper triangle shown (K[j,i] = K[i,j])"]
+    if label == "B":
+        return [f"{rows} x {cols}; rows are the strains {strains}; columns the DOFs interleaved u1, v1, u2, v2, ...",
+                "every entry shown (B is not symmetric)"]
+    return [f"{rows} x {cols} constitutive matrix; rows and columns are the stresses/strains {strains}",
+            "symmetric: upper triangle shown (D[j,i] = D[i,j])"]
 
 
 def run(args) -> int:
@@ -64,25 +99,39 @@ def run(args) -> int:
         M = M.subs(rest)
     numeric = not (M.free_symbols - {sp.Symbol("xi"), sp.Symbol("eta")}) and args.what != "B"
     fmt = output_format(args)
+    digits = check_digits(args.digits)
+    kind = "nodes" if args.nodes else args.geometry
+    geometry_text = describe_geometry(kind, el.shapes.domain, el.state == "axisymmetric")
+    notes = matrix_notes(label, el.state, M.rows, M.cols)
     header = {"element": el.name, "variant": el.variant, "state": el.state,
-              "geometry": "nodes" if args.nodes else args.geometry, "rule": args.rule, "matrix": label,
-              "dof_order": "interleaved u1, v1, u2, v2, ...", "shape": [M.rows, M.cols]}
+              "geometry": kind, "geometry_description": geometry_text, "rule": args.rule, "matrix": label,
+              "shape": [M.rows, M.cols], "layout": notes}
+    if label != "D":
+        header["dof_order"] = "interleaved u1, v1, u2, v2, ..."
+    title = f"{label} of {el.name} ({el.variant}, {el.state})" + ("" if label == "D" else
+                                                                 f", geometry: {geometry_text}, rule {args.rule}")
     if numeric:
         A = to_float_matrix(M)
         if fmt == "json":
             print_json({**header, "numeric": True, "values": A.tolist(), "caution": caution_line()})
         else:
-            print(f"# {label} of {el.name} ({el.variant}, {el.state}), numeric")
-            print(numeric_text(A))
+            print(f"# {title}, numeric ({digits} significant digits)")
+            print(f"# {notes[0]}; full matrix shown")
+            print(numeric_text(A, digits))
+            if fmt == "text":
+                print("# " + caution_line())
         return 0
     if fmt == "json":
         print_json({**header, "numeric": False, "entries": [[str(v) for v in row] for row in M.tolist()],
                     "symbols": sorted(s.name for s in M.free_symbols), "caution": caution_line()})
     elif fmt == "latex":
-        print(matrix_latex(M, label))
+        print(matrix_latex(M, label, title=title, notes=notes[:1], symmetric=label != "B"))
+        print(f"% {caution_line()}")
     else:
-        print(f"# {label} of {el.name} ({el.variant}, {el.state}), geometry {header['geometry']}, rule {args.rule}")
-        print("# DOFs interleaved u1, v1, u2, v2, ...; symmetric, upper triangle shown")
+        print(f"# {title}")
+        for line in notes:
+            print("# " + line)
         print("# index-base: 0")
         print(matrix_text(M, label, symmetric=(label != "B")))
+        print("# " + caution_line())
     return 0
