@@ -17,18 +17,17 @@ Problems (the data are in the constants below; notes/verification.md states the 
 """
 from __future__ import annotations
 
-import io
 import math
 from pathlib import Path
 
 import numpy as np
 
-from . import catalog
+from . import catalog, plotting
 from . import mesh as M
 from .analysis import analyse
 from .errors import InputError
 from .output import CAUTION, Progress, write_atomic
-from .problems import CANTILEVER, COOK, COOK_CONVERGED, COOK_CONVERGED_METHOD, CYLINDER
+from .problems import CANTILEVER, COOK, COOK_CONVERGED, COOK_CONVERGED_METHOD, COOK_SOURCE, CYLINDER
 
 PROBLEMS = ("cantilever", "membrane", "cylinder", "locking-mesh")
 CANTILEVER_MESHES = ("rectangular", "trapezoidal", "parallelogram")
@@ -230,7 +229,7 @@ def run_membrane(element: str, variant: str = "full", n: int = 16, provider=None
     sol = analyse(mesh, f, fixed, variant, "plane-stress", c["E"], c["nu"], c["t"], provider)
     corner = sol.displacement_at(*c["corner"])[1]
     mid = sol.displacement_at(*c["mid"])[1]
-    ref = COOK_CONVERGED["mid"] or c["quoted_mid"]
+    ref = COOK_CONVERGED["mid"]
     return {"problem": "membrane", "element": mesh.element, "variant": variant, "mesh": f"{n} x {n}", "n": n,
             "value": mid, "corner": corner, "mid": mid, "reference": ref, "normalized": mid / ref,
             "reference_corner": COOK_CONVERGED["corner"], **_warn(sol), "_solution": sol}
@@ -318,7 +317,7 @@ def membrane_study(element: str, variant: str = "full", levels=(2, 4, 8, 16, 32)
         r, sol = _attempt(run_membrane, element, variant, n)
         if r is None:
             r = {"problem": "membrane", "element": element, "variant": variant, "mesh": f"{n} x {n}", "n": n,
-                 "value": None, "corner": None, "mid": None, "reference": COOK_CONVERGED["mid"] or COOK["quoted_mid"],
+                 "value": None, "corner": None, "mid": None, "reference": COOK_CONVERGED["mid"],
                  "normalized": None, "reliable": False, "note": MECHANISM}
         last = sol or last
         rows.append(r)
@@ -357,7 +356,10 @@ def membrane_study(element: str, variant: str = "full", levels=(2, 4, 8, 16, 32)
     for key, sl in rates.items():
         if sl is not None:
             lines.append(f"convergence rate ({key}): error ~ h^{sl:.2f} against {refs[key]:.4f}")
-    lines.append(f"often-quoted converged value (mid-edge, from memory): {COOK['quoted_mid']}")
+    lines.append(f"reference values: corner {COOK_CONVERGED['corner']}, mid-edge {COOK_CONVERGED['mid']} = "
+                 f"{COOK_CONVERGED_METHOD}")
+    lines.append(f"problem, load and the mid-edge output point (48, 52): {COOK_SOURCE}; the mid-edge value usually "
+                 f"quoted for it, {COOK['quoted_mid']} (recalled, not from a table), agrees with ours to 0.01")
     lines += _warning_lines(rows)
     out["lines"] = lines
     out["warnings"] = study_warnings(rows)
@@ -475,127 +477,183 @@ def locking_mesh_study(element: str, variant: str = "full", depths=(1, 2, 4), as
 # ---------------------------------------------------------------------------------------------
 # plots and tables
 
-def _figure():
-    import matplotlib
-    matplotlib.use("Agg")
-    import matplotlib.pyplot as plt
-    return plt
-
-
-PLOT_FORMATS = ("png", "svg", "pdf")
-
-
 def plot_format(path) -> str:
     """Image format from the file suffix; InputError for anything but .png, .svg, .pdf."""
-    fmt = Path(path).suffix.lstrip(".").lower()
-    if fmt not in PLOT_FORMATS:
-        raise InputError(f"plot file {str(path)!r}: use a .png, .svg or .pdf file name")
-    return fmt
-
-
-def _save(fig, path) -> Path:
-    plt = _figure()
-    buf = io.BytesIO()
-    try:
-        fmt = plot_format(path)
-    except InputError:
-        plt.close(fig)
-        raise
-    fig.savefig(buf, format=fmt, dpi=120, bbox_inches="tight")
-    plt.close(fig)
-    return write_atomic(path, buf.getvalue())
+    return plotting.plot_format(path)
 
 
 def _v(x) -> float:
     return float("nan") if x is None else float(x)
 
 
-def plot_study(study: dict, path) -> Path:
+def _h_ticks(ax, ns) -> None:
+    """Mesh-size axis in h = 1 / N: ticks at the meshes, labelled 1/2, 1/4, ... (no minor labels)."""
+    from matplotlib.ticker import FixedFormatter, FixedLocator, NullFormatter, NullLocator
+    ns = sorted(set(ns))
+    ax.xaxis.set_major_locator(FixedLocator([1.0 / n for n in ns]))
+    ax.xaxis.set_major_formatter(FixedFormatter([f"1/{n}" for n in ns]))
+    ax.xaxis.set_minor_locator(NullLocator())
+    ax.xaxis.set_minor_formatter(NullFormatter())
+
+
+def _log_error_axis(ax) -> None:
+    """Decades only on a log error axis (minor labels off: they overlap on short ranges)."""
+    from matplotlib.ticker import LogLocator, NullFormatter
+    ax.yaxis.set_major_locator(LogLocator(base=10, numticks=8))
+    ax.yaxis.set_minor_formatter(NullFormatter())
+
+
+def _legend(ax, fontsize: float = 7) -> None:
+    ax.legend(fontsize=fontsize, loc="best", handlelength=3.0)
+
+
+def _curves(ax, xs, ys_list, labels, plot="plot"):
+    """Plot curves with distinct colour, line style and marker; coinciding curves get staggered
+    markers (every legend entry visible).  Returns the labels of the coinciding groups."""
+    lines = []
+    for k, (ys, lab) in enumerate(zip(ys_list, labels)):
+        x = xs[k] if isinstance(xs[0], (list, tuple, np.ndarray)) else xs
+        st = plotting.style(k, len(x))
+        st["markevery"] = None
+        line, = getattr(ax, plot)(x, ys, label=lab, **st)
+        lines.append(line)
+    groups = plotting.coinciding(ys_list) if len({len(y) for y in ys_list}) == 1 else []
+    for g in groups:
+        # few points: offset the coinciding markers sideways by size instead of by position
+        for i, k in enumerate(g):
+            lines[k].set_markersize(4.5 + 2.5 * (len(g) - 1 - i))
+            lines[k].set_markerfacecolor("none" if i < len(g) - 1 else lines[k].get_color())
+    return [[labels[k] for k in g] for g in groups]
+
+
+def _same_note(groups) -> str:
+    return ("curves on top of each other (markers drawn in decreasing sizes): " +
+            "; ".join(" = ".join(g) for g in groups)) if groups else ""
+
+
+def plot_study(study: dict, path, dpi: int = plotting.DEFAULT_DPI) -> Path:
+    """Write the chart of a study (:func:`study_figure`) as PNG, SVG or PDF."""
+    return plotting.save(study_figure(study), path, dpi)
+
+
+def study_figure(study: dict):
     """Chart of a study: membrane/cylinder convergence (value and log-log error), cantilever bars,
     locking-mesh normalized deflection against aspect ratio."""
-    plt = _figure()
     prob = study["problem"]
     title = f"{prob}: {study['element']} {study['variant']}"
+    notes = []
     if prob == "membrane":
-        fig, (a1, a2) = plt.subplots(1, 2, figsize=(10, 4))
-        ns = [r["n"] for r in study["results"]]
-        for key, lab in (("corner", "top corner (48, 60)"), ("mid", "mid-edge (48, 52)")):
-            a1.plot(ns, [_v(r[key]) for r in study["results"]], "o-", label=lab)
-            ref = study["converged_reference"].get(key)
+        fig = plotting.figure(11, 4.6)
+        a1, a2 = fig.subplots(1, 2)
+        rows = study["results"]
+        ns = [r["n"] for r in rows]
+        labels = {"corner": "top corner (48, 60)", "mid": "mid-edge (48, 52)"}
+        notes.append(_same_note(_curves(a1, ns, [[_v(r[k]) for r in rows] for k in labels], list(labels.values()))))
+        refs = study["converged_reference"]
+        for j, (key, lab) in enumerate(labels.items()):
+            ref = refs.get(key)
             if ref is not None:
-                a1.axhline(ref, ls=":", lw=0.8, color="grey")
-                errs = [abs(_v(r[key]) - ref) for r in study["results"]]
-                a2.loglog([1.0 / n for n in ns], [max(e, 1e-16) for e in errs], "o-",
-                          label=f"{lab}, slope {study['rates'].get(key) or float('nan'):.2f}")
+                a1.axhline(ref, ls=":", lw=0.9, color=plotting.COLOURS[j],
+                           label=f"converged {key} {ref:.3f} (derive: Q9/Q8 to 256 x 256, Richardson)")
+        errs, elabs = [], []
+        for key, lab in labels.items():
+            ref = refs.get(key)
+            if ref is not None:
+                errs.append([max(abs(_v(r[key]) - ref), 1e-16) for r in rows])
+                elabs.append(f"{lab}, slope {study['rates'].get(key) or float('nan'):.2f}")
+        if errs:
+            _curves(a2, [1.0 / n for n in ns], errs, elabs, plot="loglog")
         a1.set_xscale("log", base=2)
-        a1.set_xticks(ns)
-        a1.set_xticklabels([str(n) for n in ns])
-        a1.set_xlabel("elements per side")
+        plotting.integer_ticks(a1, ns)
+        a1.set_xlabel("elements per side N")
         a1.set_ylabel("vertical displacement")
-        a1.legend()
-        a2.set_xlabel("h (1 / elements per side)")
+        _legend(a1)
+        _h_ticks(a2, ns)
+        _log_error_axis(a2)
+        a2.set_xlabel("h = 1 / N")
         a2.set_ylabel("|v - converged|")
-        a2.legend()
+        _legend(a2)
         fig.suptitle(title)
     elif prob == "cylinder":
-        fig, (a1, a2) = plt.subplots(1, 2, figsize=(10, 4))
+        fig = plotting.figure(11, 4.6)
+        a1, a2 = fig.subplots(1, 2)
         nus = sorted({r["nu"] for r in study["results"]})
-        for nu in nus:
-            sub = [r for r in study["results"] if r["nu"] == nu]
-            a1.plot([r["n"] for r in sub], [_v(r["normalized"]) for r in sub], "o-", label=f"nu = {nu}")
-            a2.loglog([1.0 / r["n"] for r in sub], [max(abs(_v(r["error"])), 1e-16) for r in sub], "o-",
-                      label=f"nu = {nu}, slope {study['rates'].get(str(nu)) or float('nan'):.2f}")
-        a1.axhline(1.0, ls=":", color="grey")
+        subs = [[r for r in study["results"] if r["nu"] == nu] for nu in nus]
+        groups = _curves(a1, [[r["n"] for r in sub] for sub in subs], [[_v(r["normalized"]) for r in sub] for sub in subs],
+                         [f"nu = {nu}" for nu in nus])
+        notes.append(_same_note(groups))
+        _curves(a2, [[1.0 / r["n"] for r in sub] for sub in subs],
+                [[max(abs(_v(r["error"])), 1e-16) for r in sub] for sub in subs],
+                [f"nu = {nu}, slope {study['rates'].get(str(nu)) or float('nan'):.2f}" for nu in nus], plot="loglog")
+        a1.axhline(1.0, ls=":", color="grey", label="Lamé solution (ratio 1)")
         a1.set_xscale("log", base=2)
         levels = sorted({r["n"] for r in study["results"]})
-        a1.set_xticks(levels)
-        a1.set_xticklabels([str(n) for n in levels])
-        a1.set_xlabel("elements per side (radial = hoop)")
-        a1.set_ylabel("bore displacement / Lame")
-        a1.legend()
-        a2.set_xlabel("h (1 / elements per side)")
+        plotting.integer_ticks(a1, levels)
+        a1.set_xlabel("elements per side N (radial = hoop)")
+        a1.set_ylabel("bore displacement / Lamé")
+        _legend(a1)
+        _h_ticks(a2, levels)
+        _log_error_axis(a2)
+        a2.set_xlabel("h = 1 / N")
         a2.set_ylabel("|relative error|")
-        a2.legend()
+        _legend(a2)
         fig.suptitle(title)
     elif prob == "locking-mesh":
-        fig, ax = plt.subplots(figsize=(6, 4))
-        for ny in sorted({r["depth_elements"] for r in study["results"]}):
-            sub = [r for r in study["results"] if r["depth_elements"] == ny]
-            ax.semilogx([r["aspect"] for r in sub], [_v(r["normalized"]) for r in sub], "o-", label=f"{ny} through depth")
-        ax.axhline(1.0, ls=":", color="grey")
-        ax.axhline(study["accuracy"], ls="--", lw=0.8, color="grey")
-        ax.set_xlabel("element aspect ratio (length / depth)")
-        ax.set_ylabel("tip deflection / Timoshenko theory")
+        fig = plotting.figure(7.5, 4.6)
+        ax = fig.add_subplot()
+        notes.append(_locking_mesh_axes(ax, study))
         ax.set_title(title)
-        ax.legend()
     else:
-        fig, ax = plt.subplots(figsize=(6, 4))
+        fig = plotting.figure(7.5, 4.6)
+        ax = fig.add_subplot()
         labels = [f"{r['mesh']}\n{r['load']}" for r in study["results"]]
-        ax.bar(range(len(labels)), [_v(r["normalized"]) for r in study["results"]])
-        ax.axhline(1.0, ls=":", color="grey")
+        ax.bar(range(len(labels)), [_v(r["normalized"]) for r in study["results"]], color="0.55",
+               label="value / reference")
+        ax.axhline(1.0, ls=":", color="grey", label="reference (MacNeal & Harder 1985)")
         ax.set_xticks(range(len(labels)))
         ax.set_xticklabels(labels, fontsize=8)
         ax.set_ylabel("value / reference")
         ax.set_title(title)
-    return _save(fig, path)
+        _legend(ax)
+    plotting.set_note(fig, "; ".join(n for n in notes if n) or None)
+    return fig
 
 
-def plot_locking_comparison(studies: list[dict], path) -> Path:
+def _locking_mesh_axes(ax, study: dict) -> str:
+    """Normalized deflection against aspect ratio, one curve per depth; the reference lines labelled."""
+    depths = sorted({r["depth_elements"] for r in study["results"]})
+    subs = [[r for r in study["results"] if r["depth_elements"] == ny] for ny in depths]
+    groups = _curves(ax, [[r["aspect"] for r in sub] for sub in subs], [[_v(r["normalized"]) for r in sub] for sub in subs],
+                     [f"{ny} through depth" for ny in depths], plot="semilogx")
+    ax.axhline(1.0, ls=":", color="grey", label="Timoshenko beam theory")
+    ax.axhline(study["accuracy"], ls="--", lw=0.8, color="grey", label=f"accuracy target {study['accuracy']:g}")
+    plotting.integer_ticks(ax, sorted({r["aspect"] for r in study["results"]}))
+    ax.set_xlabel("element aspect ratio (length / depth)")
+    ax.set_ylabel("tip deflection / Timoshenko theory")
+    _legend(ax)
+    return _same_note(groups)
+
+
+def plot_locking_comparison(studies: list[dict], path, dpi: int = plotting.DEFAULT_DPI) -> Path:
+    """Write :func:`comparison_figure` as PNG, SVG or PDF."""
+    return plotting.save(comparison_figure(studies), path, dpi)
+
+
+def comparison_figure(studies: list[dict]):
     """Locking-mesh charts of several variants side by side (shared axes)."""
-    plt = _figure()
     n = len(studies)
-    fig, axes = plt.subplots(1, n, figsize=(4.2 * n, 3.8), sharey=True, squeeze=False)
+    fig = plotting.figure(4.6 * n, 4.4)
+    axes = fig.subplots(1, n, sharey=True, squeeze=False)
+    notes = []
     for ax, study in zip(axes[0], studies):
-        for ny in sorted({r["depth_elements"] for r in study["results"]}):
-            sub = [r for r in study["results"] if r["depth_elements"] == ny]
-            ax.semilogx([r["aspect"] for r in sub], [_v(r["normalized"]) for r in sub], "o-", label=f"{ny} through depth")
-        ax.axhline(1.0, ls=":", color="grey")
-        ax.axhline(study["accuracy"], ls="--", lw=0.8, color="grey")
+        note = _locking_mesh_axes(ax, study)
+        if note:
+            notes.append(f"{study['variant']}: {note}")
         ax.set_title(f"{study['element']} {study['variant']}", fontsize=10)
-        ax.set_xlabel("element aspect ratio")
-    axes[0][0].set_ylabel("tip deflection / Timoshenko theory")
-    axes[0][0].legend(fontsize=8)
-    return _save(fig, path)
+    for ax in axes[0][1:]:
+        ax.set_ylabel("")
+    plotting.set_note(fig, "; ".join(notes) or None)
+    return fig
 
 
 def table_text(study: dict) -> str:
@@ -617,6 +675,23 @@ def _fmt(v) -> str:
 
 # ---------------------------------------------------------------------------------------------
 # demo section: the transfer beam
+
+def tb3_figure(rows, cands, beam: float, meshes):
+    """The demo's mesh study: midspan deflection against the number of elements along the span."""
+    fig = plotting.figure(7.5, 4.6)
+    ax = fig.add_subplot()
+    subs = [[r for r in rows if (r[0], r[1]) == (el, var)] for el, var in cands]
+    groups = _curves(ax, [[r[2] for r in sub] for sub in subs], [[r[4] * 1e3 for r in sub] for sub in subs],
+                     [f"{el} {var}" for el, var in cands], plot="semilogx")
+    ax.axhline(beam * 1e3, ls=":", color="grey", label="beam theory (with shear)")
+    plotting.integer_ticks(ax, [nx for nx, _ in meshes])
+    ax.set_xlabel("elements along the span (meshes 6 x 1, 12 x 2, 24 x 4, 48 x 8)")
+    ax.set_ylabel("midspan deflection (mm)")
+    ax.set_title("TB-3 mesh study")
+    _legend(ax, 8)
+    plotting.set_note(fig, _same_note(groups) or None)
+    return fig
+
 
 def demo_section(outdir: Path) -> dict:
     """Transfer beam TB-3 (invented): mesh study of the midspan deflection and patch tests."""
@@ -656,17 +731,8 @@ def demo_section(outdir: Path) -> dict:
         lines.append(f"{cands[-1][0]} {cands[-1][1]} Richardson estimate of the converged deflection: "
                      f"{ext['value'] * 1e3:.4f} mm (observed order {ext['order']:.2f}); a 12 x 2 Q4 full mesh is "
                      f"{[r[4] for r in rows if r[:4] == ('Q4', 'full', 12, 2)][0] / ext['value']:.3f} of it")
-    plt = _figure()
-    fig, ax = plt.subplots(figsize=(6, 4))
-    for el, var in cands:
-        sub = [r for r in rows if (r[0], r[1]) == (el, var)]
-        ax.semilogx([r[2] for r in sub], [r[4] * 1e3 for r in sub], "o-", label=f"{el} {var}")
-    ax.axhline(beam * 1e3, ls=":", color="grey", label="beam theory (with shear)")
-    ax.set_xlabel("elements along the span")
-    ax.set_ylabel("midspan deflection (mm)")
-    ax.set_title("TB-3 mesh study")
-    ax.legend(fontsize=8)
-    files.append(_save(fig, outdir / "tb3-mesh-study.png").name)
+    fig = tb3_figure(rows, cands, beam, meshes)
+    files.append(plotting.save(fig, outdir / "tb3-mesh-study.png").name)
     if last is not None:
         files.append(M.write_vtu(outdir / "tb3-q8-48x8.vtu", last, scale=100.0).name)
     for el, var in cands:

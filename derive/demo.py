@@ -32,7 +32,7 @@ SCENARIO = {
 #: "module:function" of each section; later capabilities append theirs here.
 SECTIONS = [
     "derive.demo:core_section",
-    "derive.locking:demo_section",
+    "derive.charts:demo_section",
     "derive.benchmarks:demo_section",
     "derive.check:demo_section",
     "derive.codegen.demo:demo_section",

@@ -878,53 +878,6 @@ def report(name: str, variant: str = "full", state: str = "plane-stress", aspect
     return out
 
 
-def demo_section(outdir) -> dict:
-    """Locking of the candidate elements at the transfer beam's aspect ratio, with charts."""
-    from pathlib import Path
-
-    from . import charts
-    from .demo import SCENARIO
-    from .output import emit_json, write_atomic
-    outdir = Path(outdir)
-    nu_b = SCENARIO["nu"]
-    aspect = 2.0  # 0.6 m x 0.3 m elements of the 12 x 4 candidate mesh: a/b = 2
-    lines, table = [], []
-    for name, variant in (("Q4", "full"), ("Q4", "incompatible-centred"), ("Q4", "eas4"), ("Q4", "hybrid5"),
-                          ("Q4", "reduced"), ("Q8", "full"), ("Q9", "full")):
-        an = analyse(name, variant, "plane-stress")
-        val = evaluate(name, variant, "plane-stress", aspect, nu_b)
-        lim = aspect_limit(name, variant, "plane-stress", nu_b, 0.05)
-        table.append({"element": name, "variant": variant, "formula": an.formula, "ratio": val, "limit_5pct": lim})
-        if val is None:
-            lines.append(f"{name} {variant}: bending is a zero-energy (hourglass) mode: unusable alone")
-        else:
-            lim_txt = "any aspect ratio" if lim.get("unlimited") else (
-                "none" if lim["aspect_limit"] == 0 else f"a/b <= {lim['aspect_limit']:.3g}")
-            lines.append(f"{name} {variant}: theta/theta_exact = {an.display()}; at a/b = {aspect:g}, nu = {nu_b}: "
-                         f"{val:.4f}; within 5 %: {lim_txt}")
-    for variant in ("incompatible-centred", "eas4", "hybrid5"):
-        d = distortion("Q4", variant, "plane-stress", "taper", 0.3, aspect, nu_b)
-        lines.append(f"Q4 {variant} on a tapered element (depth varying by +-30 % along it, a/b = {aspect:g}): "
-                     f"{d['ratio']:.3f} (a patch-test-passing 4-node element locks when tapered: MacNeal, 1987)")
-    q4 = analyse("Q4", "full", "plane-stress")
-    if q4.strain:
-        lines.append(f"Q4 full spurious strain in bending: {q4.strain['summary']}")
-    files = [write_atomic(outdir / "locking-table.json", emit_json(table) + "\n")]
-    files.append(charts.save(charts.locking_chart([("Q4", "full"), ("Q4", "incompatible-centred"), ("Q8", "full")],
-                                                  "plane-stress", [0.0, nu_b, 0.49], (1.0, 20.0), 0.05),
-                             outdir / "locking-ratio.png"))
-    files.append(charts.save(charts.contour_chart("Q4", "full", "plane-strain", (1.0, 20.0), (0.0, 0.499)),
-                             outdir / "locking-contour-q4-plane-strain.png"))
-    files.append(charts.save(charts.distortion_chart([("Q4", "full"), ("Q4", "incompatible"),
-                                                      ("Q4", "incompatible-centred"), ("Q4", "eas4"), ("Q8", "full")],
-                                                     "plane-stress", "taper", (0.0, 0.6), 1.0, nu_b),
-                             outdir / "locking-distortion-taper.png"))
-    lines.append("charts: ratio vs aspect (Q4 full / incompatible-centred / Q8), contour of Q4 full in plane strain, "
-                 "taper sensitivity of the Q4 variants")
-    return {"title": "Bending locking and the choice of element", "lines": lines,
-            "files": [str(Path(f).name) for f in files]}
-
-
 def _clear_caches() -> None:
     from . import stiffness
     for fn in (_solve_exact, analyse, ratio_function, distortion_expression, skew_formula, compliance, element,

@@ -13,14 +13,11 @@ mesh (hourglassing); none means neighbouring elements suppress the element's mod
 """
 from __future__ import annotations
 
-import io
-
 import numpy as np
 
 from . import mesh as M
 from .errors import InputError
 from .kinematics import rigid_body_modes
-from .output import write_atomic
 
 GEOMETRIES = ("square", "rectangle", "parallelogram", "distorted")
 
@@ -162,13 +159,16 @@ def _outline_lines(name: str, n: int = 24):
     return lines
 
 
-def plot_modes(result: dict, path) -> str:
-    """Deformed shapes of the zero-energy modes (rigid first, then spurious) into an image file."""
-    from .plotting import plot_format
-    fmt = plot_format(path)
-    import matplotlib
-    matplotlib.use("Agg")
-    import matplotlib.pyplot as plt
+def plot_modes(result: dict, path, dpi: int | None = None) -> str:
+    """Write :func:`modes_figure` into an image file (.png, .svg, .pdf)."""
+    from . import plotting
+    plotting.plot_format(path)
+    return str(plotting.save(modes_figure(result), path, plotting.DEFAULT_DPI if dpi is None else dpi))
+
+
+def modes_figure(result: dict):
+    """Deformed shapes of the zero-energy modes (rigid first, then spurious)."""
+    from . import plotting
     name = result["element"]
     ref = M.ref_element(name)
     nodes = np.array(result["nodes"])
@@ -177,7 +177,10 @@ def plot_modes(result: dict, path) -> str:
     n = len(modes)
     cols = min(n, 4)
     rows = (n + cols - 1) // cols
-    fig, axes = plt.subplots(rows, cols, figsize=(3.2 * cols, 3.0 * rows), squeeze=False)
+    fig = plotting.figure(3.2 * cols, 3.0 * rows + 0.6,
+                          "grey dashed: undeformed element; blue: rigid-body mode; red: spurious mode "
+                          "(amplitude scaled to 20 % of the element size)")
+    axes = fig.subplots(rows, cols, squeeze=False)
     size = max(np.ptp(nodes[:, 0]), np.ptp(nodes[:, 1]))
     lines = _outline_lines(name)
     for k, (kind, vec) in enumerate(modes):
@@ -198,10 +201,7 @@ def plot_modes(result: dict, path) -> str:
     comm = " (communicable)" if result.get("communicable") else ""
     fig.suptitle(f"{name} {result['variant']}: {result['zero_energy']} zero-energy modes, "
                  f"{result['rigid']} rigid, {result['spurious']} spurious{comm}", fontsize=10)
-    buf = io.BytesIO()
-    fig.savefig(buf, format=fmt, dpi=110, bbox_inches="tight")
-    plt.close(fig)
-    return str(write_atomic(path, buf.getvalue()))
+    return fig
 
 
 def summary_lines(result: dict) -> list[str]:

@@ -18,6 +18,8 @@ import math
 import textwrap
 from pathlib import Path
 
+import numpy as np
+
 from .errors import InputError
 from .output import CAUTION, write_atomic
 
@@ -42,7 +44,7 @@ def plot_format(path, what: str = "plot file") -> str:
     """Image format from the file suffix; InputError for anything but .png, .svg, .pdf."""
     fmt = FORMATS.get(Path(path).suffix.lower())
     if fmt is None:
-        raise InputError(f"{what} {str(path)!r}: the name must end in {', '.join(FORMATS)}")
+        raise InputError(f"{what} {str(path)!r}: the extension must be one of {', '.join(FORMATS)}")
     return fmt
 
 
@@ -58,19 +60,28 @@ def check_dpi(dpi) -> int:
     return int(value)
 
 
-def _footer_text(note: str | None) -> str:
+def _footer_text(note: str | None, width_inch: float) -> str:
+    """The note and the caution, wrapped to the figure's width (about 22 characters of the
+    6-point footer font per inch)."""
+    chars = max(40, int(width_inch * 22))
     parts = [p for p in (note, CAUTION) if p]
-    return "\n".join(textwrap.fill(p, 160) for p in parts)
+    return "\n".join(textwrap.fill(p, chars) for p in parts)
+
+
+def _reserve(fig, text: str) -> None:
+    """Keep a band at the bottom of the figure free for the footer's lines."""
+    n_lines = text.count("\n") + 1
+    height = fig.get_figheight()
+    bottom = min(0.4, (n_lines * _FOOTER_LINE_INCH + 0.06) / height)
+    fig.get_layout_engine().set(rect=(0, bottom, 1, 1 - bottom))
 
 
 def figure(width: float = 7.5, height: float = 5.0, note: str | None = None):
     """A Figure with the footer (``note``, then the caution) written below the axes."""
     from matplotlib.figure import Figure
-    text = _footer_text(note)
-    n_lines = text.count("\n") + 1
+    text = _footer_text(note, width)
     fig = Figure(figsize=(width, height), layout="constrained")
-    bottom = min(0.4, (n_lines * _FOOTER_LINE_INCH + 0.08) / height)
-    fig.get_layout_engine().set(rect=(0, bottom, 1, 1 - bottom))
+    _reserve(fig, text)
     footer = fig.text(0.01, 0.005, text, fontsize=FOOTER_FONTSIZE, color="0.3", ha="left", va="bottom")
     footer.set_gid("footer")
     return fig
@@ -78,9 +89,11 @@ def figure(width: float = 7.5, height: float = 5.0, note: str | None = None):
 
 def set_note(fig, note: str | None) -> None:
     """Replace the figure's footer text (the caution stays)."""
+    text = _footer_text(note, fig.get_figwidth())
     for t in fig.texts:
         if t.get_gid() == "footer":
-            t.set_text(_footer_text(note))
+            t.set_text(text)
+    _reserve(fig, text)
 
 
 def footer_text(fig) -> str:
@@ -88,17 +101,48 @@ def footer_text(fig) -> str:
     return next((t.get_text() for t in fig.texts if t.get_gid() == "footer"), "")
 
 
-def style(k: int, n_curves: int = 1, n_points: int = 200, colour: int | None = None, line: int | None = None,
+def style(k: int, n_points: int = 200, colour: int | None = None, line: int | None = None,
           marker: int | None = None) -> dict:
-    """Plot keywords of curve ``k`` of ``n_curves``: its colour, line style and marker, and a
-    marker spacing staggered by ``k`` so coinciding curves show every marker type."""
+    """Plot keywords of curve ``k``: its colour, line style and marker (by default all three
+    indexed by ``k``), markers every ``n_points // 8`` points."""
     every = max(n_points // 8, 1)
-    start = (k * every) // max(n_curves, 1) if n_curves > 1 else 0
     return {"color": COLOURS[(k if colour is None else colour) % len(COLOURS)],
             "ls": STYLES[(k if line is None else line) % len(STYLES)],
             "marker": MARKERS[(k if marker is None else marker) % len(MARKERS)],
-            "markevery": (start, every) if n_points > 1 else None, "ms": 4.5, "lw": 1.5,
-            "markerfacecolor": "none" if (k // len(MARKERS)) % 2 else None}
+            "markevery": (0, every), "ms": 4.5, "lw": 1.5}
+
+
+def stagger(lines, n_points: int) -> None:
+    """Shift the markers of curves that lie on top of each other so each curve's markers sit at
+    their own points (every legend entry stays visible)."""
+    m = len(lines)
+    every = max(n_points // 8, m, 1)
+    for i, line in enumerate(lines):
+        line.set_markevery((i * every // m, every))
+
+
+def coinciding(curves, rtol: float = 1e-9) -> list[list[int]]:
+    """Index groups (two or more) of the curves ``[y0, y1, ...]`` whose values agree to ``rtol``
+    at every point (NaN equal to NaN)."""
+    groups: list[list[int]] = []
+    arrays = [np.asarray(y, dtype=float) for y in curves]
+    for i, y in enumerate(arrays):
+        for g in groups:
+            y0 = arrays[g[0]]
+            if y0.shape == y.shape and np.allclose(y, y0, rtol=rtol, atol=0, equal_nan=True):
+                g.append(i)
+                break
+        else:
+            groups.append([i])
+    return [g for g in groups if len(g) > 1]
+
+
+def plain_log_ticks(ax, lo: float, hi: float, axis: str = "x") -> None:
+    """Ticks of a log axis at 1, 2, 5 x 10^k within [lo, hi], labelled as plain numbers
+    (1, 2, 5, 10, 20, not 10^0, 10^1)."""
+    vals = [m * 10.0 ** e for e in range(math.floor(math.log10(lo)) - 1, math.ceil(math.log10(hi)) + 1)
+            for m in (1, 2, 5) if lo * (1 - 1e-12) <= m * 10.0 ** e <= hi * (1 + 1e-12)]
+    integer_ticks(ax, vals or [lo, hi], axis)
 
 
 def integer_ticks(ax, values, axis: str = "x") -> None:
@@ -117,15 +161,18 @@ def save(fig, path, dpi: int = DEFAULT_DPI, what: str = "plot file") -> Path:
     """Write the figure as PNG, SVG or PDF (by the extension), atomically; returns the path."""
     fmt = plot_format(path, what)
     dpi = check_dpi(dpi)
+    if CAUTION not in footer_text(fig).replace("\n", " "):
+        raise ValueError("derive figures carry the caution in their footer: make them with plotting.figure")
     buf = io.BytesIO()
     fig.savefig(buf, format=fmt, dpi=dpi, metadata=_metadata(fmt))
     return write_atomic(path, buf.getvalue())
 
 
 def _metadata(fmt: str) -> dict:
-    # fixed metadata so repeated runs write identical files (no creation dates)
+    """Fixed metadata (no creation dates: repeated runs write identical files), the caution
+    included, so it travels with the file even when the footer is cropped away."""
     if fmt == "png":
-        return {"Software": "derive"}
+        return {"Software": "derive", "Disclaimer": CAUTION}
     if fmt == "svg":
-        return {"Date": None, "Creator": "derive"}
-    return {"CreationDate": None, "Creator": "derive", "Producer": "derive"}
+        return {"Date": None, "Creator": "derive", "Description": CAUTION}
+    return {"CreationDate": None, "Creator": "derive", "Producer": "derive", "Subject": CAUTION}

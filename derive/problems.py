@@ -24,8 +24,12 @@ COOK = {"corners": ((0.0, 0.0), (48.0, 44.0), (48.0, 60.0), (0.0, 44.0)), "E": 1
 #: Q8: 25.18922 / 23.96774); see notes/verification.md
 COOK_CONVERGED = {"corner": 25.189, "mid": 23.968}
 #: how COOK_CONVERGED was obtained (printed with the membrane study)
-COOK_CONVERGED_METHOD = ("derive's own converged value: Q9 and Q8 full, structured N x N meshes up to "
-                         "256 x 256, Richardson extrapolation of 64, 128, 256 (notes/verification.md)")
+COOK_CONVERGED_METHOD = ("derive's own converged computation: Q9 and Q8 full on structured N x N meshes of the "
+                         "panel up to 256 x 256, Richardson extrapolation of N = 64, 128, 256; Q9 and Q8 agree to "
+                         "1e-4 (notes/verification.md)")
+#: the published source of the problem and of its output points
+COOK_SOURCE = ("Cook, R. D. (1974), Improved two-dimensional finite element, J. Struct. Div. ASCE 100 (ST9), "
+               "from memory")
 
 #: thick-walled cylinder under internal pressure, plane strain (dimensions as in MacNeal & Harder 1985)
 CYLINDER = {"inner": 3.0, "outer": 9.0, "E": 1000.0, "p": 1.0, "t": 1.0,

@@ -139,7 +139,7 @@ def test_chart_cli(tmp_path, capsys):
 
 
 def test_demo_section_writes_its_files(tmp_path):
-    res = L.demo_section(tmp_path)
+    res = charts.demo_section(tmp_path)
     assert res["title"] and any("Q4 full" in line for line in res["lines"])
     for name in res["files"]:
         assert (tmp_path / name).stat().st_size > 100

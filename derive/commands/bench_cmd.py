@@ -2,7 +2,7 @@
 from __future__ import annotations
 
 from .. import benchmarks as B
-from .. import catalog
+from .. import catalog, plotting
 from ..errors import InputError
 from ..mesh import write_vtu
 from ..output import CAUTION, check_output_file, parse_number, write_atomic
@@ -38,6 +38,8 @@ def add_arguments(p) -> None:
     p.add_argument("--accuracy", default="0.95",
                    help="locking-mesh: target fraction of beam theory for the mesh advice (default 0.95)")
     p.add_argument("--plot", metavar="FILE", help="write a chart (.png, .svg, .pdf)")
+    p.add_argument("--dpi", default=str(plotting.DEFAULT_DPI),
+                   help=f"resolution of a .png --plot in dots per inch (default {plotting.DEFAULT_DPI})")
     p.add_argument("--table", metavar="FILE", help="write the result table (Markdown)")
     p.add_argument("--vtu", metavar="FILE", help="write the deformed mesh of the (finest) run as VTK .vtu")
     p.add_argument("--scale", default="1", help="deformation scale for --vtu (default 1)")
@@ -71,6 +73,7 @@ def run(args) -> int:
     prob = args.problem
     if args.plot:
         B.plot_format(args.plot)          # refuse a bad file name before the runs
+    dpi = plotting.check_dpi(args.dpi)
     for option in ("plot", "table", "vtu"):
         if getattr(args, option):
             check_output_file(getattr(args, option), f"--{option}", args.force)
@@ -118,9 +121,9 @@ def run(args) -> int:
     files = {}
     if args.plot:
         if res.get("_studies"):
-            files["plot"] = str(B.plot_locking_comparison(res["_studies"], args.plot))
+            files["plot"] = str(B.plot_locking_comparison(res["_studies"], args.plot, dpi))
         else:
-            files["plot"] = str(B.plot_study(res, args.plot))
+            files["plot"] = str(B.plot_study(res, args.plot, dpi))
     if args.table:
         files["table"] = str(write_atomic(args.table, B.table_text(res)))
     if args.vtu:

@@ -3,7 +3,7 @@ from __future__ import annotations
 
 from pathlib import Path
 
-from .. import charts
+from .. import charts, plotting
 from ..errors import InputError
 from ..output import CAUTION, check_output_file, parse_number
 from .common import add_force_arg, add_output_args, output_format, print_json
@@ -37,6 +37,9 @@ def add_arguments(p) -> None:
                    help="distortion chart: KIND=lo:hi with KIND skew (degrees), taper or trapezoid (default taper=0:0.6)")
     p.add_argument("-o", "--output", required=True,
                    help="chart file to write: .png, .svg or .pdf (its folder must exist)")
+    p.add_argument("--dpi", default=str(plotting.DEFAULT_DPI),
+                   help=f"resolution of a .png chart in dots per inch (default {plotting.DEFAULT_DPI}, print quality; "
+                        f"{plotting.DPI_RANGE[0]}-{plotting.DPI_RANGE[1]})")
     add_force_arg(p, "replace an existing chart file")
     add_output_args(p, formats=False)
 
@@ -53,6 +56,7 @@ def run(args) -> int:
     if out.suffix.lower() not in charts.FORMATS:
         raise InputError(f"-o {args.output!r}: the chart file must end in {', '.join(charts.FORMATS)}")
     check_output_file(out, "-o", args.force)
+    dpi = plotting.check_dpi(args.dpi)
     tol = None if args.tolerance.strip().lower() == "none" else float(parse_number(args.tolerance, "--tolerance"))
     specs = charts.parse_specs(args.elements)
     if args.kind == "locking":
@@ -79,10 +83,10 @@ def run(args) -> int:
         fig = charts.distortion_chart(specs, args.state, kind, values, aspect, nu)
         meta = {"nu": nu, "aspect": aspect, "distortion": kind, "range": list(values)}
     data = charts.series(fig)
-    path = charts.save(fig, out)
+    path = charts.save(fig, out, dpi=dpi)
     summary = {"chart": args.kind, "output": str(path), "format": charts.FORMATS[out.suffix.lower()],
                "elements": [f"{n}:{v}" for n, v in specs], "state": args.state, **meta,
-               "series": [d["gid"] for d in data], "bytes": path.stat().st_size, "caution": CAUTION}
+               "series": [d["gid"] for d in data], "dpi": dpi, "bytes": path.stat().st_size, "caution": CAUTION}
     if output_format(args) == "json":
         print_json(summary)
         return 0

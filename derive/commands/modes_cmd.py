@@ -1,7 +1,7 @@
 """`derive modes ELEMENT`: zero-energy modes (rigid-body and spurious) and whether they spread."""
 from __future__ import annotations
 
-from .. import catalog
+from .. import catalog, plotting
 from ..modes import GEOMETRIES, plot_modes, summary_lines, zero_energy_modes
 from ..output import CAUTION, check_output_file, parse_number
 from .common import add_force_arg, add_output_args, output_format, print_json
@@ -27,21 +27,23 @@ def add_arguments(p) -> None:
     p.add_argument("--nu", default="0.3", help="Poisson's ratio used for the eigenvalues (default 0.3; E = 1, t = 1)")
     p.add_argument("--tol", default="1e-8", help="zero threshold relative to the largest eigenvalue (default 1e-8)")
     p.add_argument("--plot", metavar="FILE", help="write the deformed shapes of the zero-energy modes (.png, .svg, .pdf)")
+    p.add_argument("--dpi", default=str(plotting.DEFAULT_DPI),
+                   help=f"resolution of a .png --plot in dots per inch (default {plotting.DEFAULT_DPI})")
     add_force_arg(p, "replace an existing --plot file (its folder must exist)")
     add_output_args(p, formats=False)
 
 
 def run(args) -> int:
     if args.plot:
-        from ..plotting import plot_format
-        plot_format(args.plot)            # refuse a bad file name before the analysis
+        plotting.plot_format(args.plot)   # refuse a bad file name before the analysis
         check_output_file(args.plot, "--plot", args.force)
+    dpi = plotting.check_dpi(args.dpi)
     nu = float(parse_number(args.nu, "--nu"))
     tol = float(parse_number(args.tol, "--tol"))
     nodes = [[float(u), float(v)] for u, v in parse_nodes(args.nodes)] if args.nodes else None
     res = zero_energy_modes(args.element, args.variant, args.state, nodes=nodes, geometry=args.geometry, nu=nu, tol=tol)
     if args.plot:
-        res["plot"] = plot_modes(res, args.plot)
+        res["plot"] = plot_modes(res, args.plot, dpi)
     if output_format(args) == "json":
         print_json({**res, "caution": CAUTION})
         return 0
