@@ -11,7 +11,9 @@ import stat
 import subprocess
 import sys
 import time
+import warnings
 
+import compilers
 import numpy as np
 import pytest
 
@@ -19,18 +21,15 @@ from derive import catalog
 from derive.cli import main
 from derive.codegen import committed, emit, loader
 from derive.codegen.ir import build
-from derive.errors import InputError, SpecError
+from derive.errors import GeometryError, InputError, SpecError
 from derive.spec import load_spec
 
-HAVE = {lang: loader.find_compiler(lang) is not None for lang in ("c", "fortran")}
-NEED = {"c": "gcc (Debian package gcc)", "fortran": "gfortran (Debian package gfortran)"}
 #: generous hang guard for work that must be refused quickly (not a timing assertion)
 HANG = 60
 
 
 def _need(lang):
-    if lang != "numpy" and not HAVE[lang]:
-        pytest.skip(f"no {lang} compiler on this machine; install {NEED[lang]}")
+    compilers.need(lang)        # skip with the reason, or fail under CI
 
 
 Q4_NODES = "[[-1, -1], [1, -1], [1, 1], [-1, 1]]"
@@ -292,3 +291,212 @@ def test_the_shipped_specs_are_within_the_limits():
     from derive.spec import shipped_specs
     for p in shipped_specs():
         load_spec(p)
+
+
+# ---------------------------------------------------------------------------------------------
+# 4. a damaged cached library is detected by its checksum and rebuilt (never SIGBUS)
+
+RUN_Q4_C = """
+import warnings, numpy as np, derive
+warnings.simplefilter("always")
+k = derive.kernel("Q4", lang="c")
+X = np.array([[[0.0, 0.0], [2.0, 0.0], [2.0, 1.0], [0.0, 1.0]]])
+print(k.lang, repr(float(k(X, 1.0, 0.25, 1.0)[0, 0, 0])))
+"""
+#: K[0, 0] of the 2 x 1 rectangle, E = 1, nu = 1/4, t = 1: E t / (1 - nu^2) (b/(3a) + (1 - nu) a/(6b))
+#: with a = 1, b = 1/2 (closed form of the bilinear rectangle, e.g. Cook et al., Concepts and
+#: Applications of FEA, 4th ed.)
+K00 = (1 / 6 + 0.75 / 3) / (1 - 0.25 ** 2)
+
+
+def _run(script, cache, umask=None):
+    env = dict(os.environ, DERIVE_CACHE_DIR=str(cache))
+    pre = f"import os; os.umask({umask:#o})\n" if umask is not None else ""
+    return subprocess.run([sys.executable, "-c", pre + script], capture_output=True, text=True, env=env,
+                          timeout=600, cwd=os.path.dirname(os.path.dirname(os.path.abspath(__file__))))
+
+
+def _libs(cache):
+    return sorted((cache / "kernels").glob("q4_full_plane_stress-c-*.so"))
+
+
+@pytest.mark.parametrize("damage", ["truncated", "random-bytes", "checksum-missing"])
+def test_damaged_cached_library_is_rebuilt(tmp_path, damage):
+    _need("c")
+    cache = tmp_path / "cache"
+    first = _run(RUN_Q4_C, cache)
+    assert first.returncode == 0, first.stderr
+    (lib,) = _libs(cache)
+    data = lib.read_bytes()
+    if damage == "truncated":
+        lib.write_bytes(data[: len(data) // 3])
+    elif damage == "random-bytes":
+        lib.write_bytes(np.random.default_rng(7).bytes(len(data)))
+    else:
+        (lib.parent / (lib.name + ".sha256")).unlink()
+    res = _run(RUN_Q4_C, cache)
+    assert res.returncode == 0, (res.returncode, res.stderr[-2000:])      # SIGBUS would be -7
+    if damage == "checksum-missing":      # a library built before checksums were recorded: rebuilt quietly
+        assert "damaged" not in res.stderr
+    else:
+        assert "damaged" in res.stderr and "rebuilding" in res.stderr
+    lang, value = res.stdout.split()
+    assert lang == "c"
+    np.testing.assert_allclose(float(value), K00, rtol=1e-12, atol=0)
+    assert lib.read_bytes() != b"" and (lib.parent / (lib.name + ".sha256")).exists()
+
+
+# ---------------------------------------------------------------------------------------------
+# 5. cache permissions
+
+def test_cache_is_private_whatever_the_umask(tmp_path):
+    _need("c")
+    cache = tmp_path / "cache"
+    res = _run(RUN_Q4_C, cache, umask=0)
+    assert res.returncode == 0 and res.stdout.startswith("c "), res.stderr
+    for d in (cache, cache / "kernels"):
+        assert stat.S_IMODE(os.stat(d).st_mode) == 0o700
+    (lib,) = _libs(cache)
+    for f in (lib, lib.parent / (lib.name + ".sha256")):
+        assert stat.S_IMODE(os.stat(f).st_mode) == 0o600
+
+
+def _fresh_kernel(monkeypatch, cache):
+    monkeypatch.setenv("DERIVE_CACHE_DIR", str(cache))
+    loader._kernel.cache_clear()
+    try:
+        with pytest.warns(loader.KernelWarning) as rec:
+            k = loader.kernel("Q4", lang="c")
+    finally:
+        loader._kernel.cache_clear()
+    return k, " ".join(str(w.message) for w in rec)
+
+
+@pytest.mark.parametrize("case", ["folder-world-writable", "folder-other-owner", "library-group-writable",
+                                  "library-other-owner", "folder-cannot-be-created", "folder-read-only"])
+def test_unsafe_or_unusable_cache_falls_back_to_numpy(tmp_path, monkeypatch, case):
+    _need("c")
+    cache = tmp_path / "cache"
+    kdir = cache / "kernels"
+    if case.startswith("library"):
+        assert _run(RUN_Q4_C, cache).returncode == 0
+        (lib,) = _libs(cache)
+        if case == "library-group-writable":
+            os.chmod(lib, 0o660)
+        else:
+            if os.getuid() != 0:
+                pytest.skip("changing a file's owner needs root")
+            os.chown(lib, 65534, 65534)
+    elif case == "folder-world-writable":
+        kdir.mkdir(parents=True)
+        os.chmod(kdir, 0o777)
+    elif case == "folder-other-owner":
+        if os.getuid() != 0:
+            pytest.skip("changing a folder's owner needs root")
+        kdir.mkdir(parents=True)
+        os.chmod(kdir, 0o700)
+        os.chown(kdir, 65534, 65534)
+    elif case == "folder-cannot-be-created":
+        (tmp_path / "file").write_text("")
+        cache = tmp_path / "file" / "cache"
+    else:   # read-only: every write into the cache fails (root ignores mode bits, so simulated)
+        kdir.mkdir(parents=True, mode=0o700)
+
+        def refuse(*a, **kw):
+            raise PermissionError(13, "Permission denied")
+        monkeypatch.setattr(loader.tempfile, "TemporaryDirectory", refuse)
+    k, msg = _fresh_kernel(monkeypatch, cache)
+    assert k.lang == "numpy" and k.requested == "c"
+    expect = {"folder-world-writable": "writable by group or others", "library-group-writable":
+              "writable by group or others", "folder-other-owner": "another user", "library-other-owner":
+              "another user", "folder-cannot-be-created": "cannot be created", "folder-read-only": "cannot build"}
+    assert expect[case] in msg and "NumPy" in msg
+    X = np.array([[[0.0, 0.0], [2.0, 0.0], [2.0, 1.0], [0.0, 1.0]]])
+    np.testing.assert_allclose(k(X, 1.0, 0.25, 1.0)[0, 0, 0], K00, rtol=1e-12, atol=0)
+
+
+# ---------------------------------------------------------------------------------------------
+# 6. out=: writeable, C-contiguous float64 of the exact shape, or InputError (before native code)
+
+def _outs(tmp_path):
+    ro = np.zeros((3, 8, 8))
+    ro.flags.writeable = False
+    path = tmp_path / "k.bin"
+    np.zeros((3, 8, 8)).tofile(path)
+    mm = np.memmap(path, dtype=np.float64, mode="r", shape=(3, 8, 8))
+    return {"read-only ndarray": ro, "read-only memmap": mm, "float32": np.zeros((3, 8, 8), np.float32),
+            "fortran order": np.zeros((3, 8, 8), order="F"), "wrong shape": np.zeros((3, 8, 7)),
+            "strided view": np.zeros((6, 8, 8))[::2], "list": [[0.0] * 8] * 8,
+            "big-endian": np.zeros((3, 8, 8), dtype=">f8")}
+
+
+@pytest.mark.parametrize("lang", ["numpy", "c", "fortran"])
+def test_out_must_be_writeable_contiguous_float64(lang, tmp_path):
+    _need(lang)
+    k = loader.kernel("Q4", lang=lang)
+    X = np.tile(np.array([[0.0, 0.0], [2.0, 0.0], [2.0, 1.0], [0.0, 1.0]]), (3, 1, 1))
+    for what, out in _outs(tmp_path).items():
+        with pytest.raises(InputError, match="out must be a writeable, C-contiguous float64"):
+            k(X, 1.0, 0.25, 1.0, out=out)
+        if isinstance(out, np.ndarray):
+            assert not np.any(out), what                      # nothing written into it
+    buf = np.zeros(3 * 8 * 8 + 3 * 4 * 2)
+    with pytest.raises(InputError, match="overlaps xy"):
+        k(buf[:24].reshape(3, 4, 2), 1.0, 0.25, 1.0, out=buf[:192].reshape(3, 8, 8))
+    good = np.zeros((3, 8, 8))
+    assert k(X, 1.0, 0.25, 1.0, out=good) is good
+    np.testing.assert_allclose(good[:, 0, 0], K00, rtol=1e-12, atol=0)
+
+
+def test_standalone_numpy_kernel_refuses_a_read_only_out():
+    import types
+    mod = types.ModuleType("q4")
+    exec(compile((committed.repo_generated_dir() / "numpy" / "q4_full_plane_stress.py").read_text(), "q4", "exec"),
+         mod.__dict__)
+    ro = np.zeros((1, 8, 8))
+    ro.flags.writeable = False
+    X = np.array([[[0.0, 0.0], [2.0, 0.0], [2.0, 1.0], [0.0, 1.0]]])
+    with pytest.raises(ValueError, match="writeable"):
+        mod.stiffness(X, 1.0, 0.25, 1.0, out=ro)
+    assert not np.any(ro)
+
+
+# ---------------------------------------------------------------------------------------------
+# 7. the checked call: invalid elements by index, non-real arguments refused
+
+GOOD = [[0.0, 0.0], [2.0, 0.0], [2.0, 1.0], [0.0, 1.0]]
+BAD = {"clockwise": [[0.0, 0.0], [0.0, 1.0], [2.0, 1.0], [2.0, 0.0]],
+       "bow-tie": [[0.0, 0.0], [2.0, 1.0], [2.0, 0.0], [0.0, 1.0]],
+       "all-zero": [[0.0, 0.0]] * 4,
+       "1e200": [[0.0, 0.0], [2e200, 0.0], [2e200, 1e200], [0.0, 1e200]]}
+
+
+@pytest.mark.parametrize("lang", ["numpy", "c", "fortran"])
+@pytest.mark.parametrize("what", list(BAD))
+def test_checked_call_names_invalid_elements_by_index(lang, what):
+    _need(lang)
+    k = loader.kernel("Q4", lang=lang)
+    X = np.array([GOOD, GOOD, BAD[what], GOOD, BAD[what]])
+    with pytest.raises(GeometryError, match=r"2 Q4 element\(s\).*index 2, 4"):
+        k(X, 1.0, 0.25, 1.0)
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore")                       # overflow in the 1e200 element
+        K = k(X, 1.0, 0.25, 1.0, screen=False)                # the caller opted out for speed
+    np.testing.assert_allclose(K[0, 0, 0], K00, rtol=1e-12, atol=0)
+    np.testing.assert_allclose(k(X[[0, 1, 3]], 1.0, 0.25, 1.0)[:, 0, 0], K00, rtol=1e-12, atol=0)
+
+
+@pytest.mark.parametrize("arg,value", [("E", True), ("E", "200"), ("E", 1 + 0j), ("E", np.complex128(1.0)),
+                                       ("nu", np.bool_(False)), ("t", "1"), ("t", b"1"),
+                                       ("xy", "bool"), ("xy", "complex"), ("xy", "str"), ("xy", "object-str")])
+def test_non_real_arguments_are_refused(arg, value):
+    k = loader.kernel("Q4", lang="numpy")
+    X = np.array([GOOD])
+    kw = {"xy": X, "E": 1.0, "nu": 0.25, "t": 1.0}
+    if arg == "xy":
+        kw["xy"] = {"bool": X > 0, "complex": X + 0j, "str": X.astype(str),
+                    "object-str": np.array(X.tolist(), dtype=object).astype(str).astype(object)}[value]
+    else:
+        kw[arg] = value
+    with pytest.raises(InputError, match=arg):
+        k(kw["xy"], kw["E"], kw["nu"], kw["t"])

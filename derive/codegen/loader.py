@@ -30,6 +30,8 @@ import numpy as np
 from .. import catalog
 from ..errors import GeometryError, InputError
 from ..material import STATES, check_material
+from . import cache as kcache
+from .cache import CacheUnusable, cache_dir  # noqa: F401  (cache_dir: public name)
 from .emit import LANGS, generate
 
 #: GNU compilers: -fno-tree-slp-vectorize avoids a pathological compile time in the RTL
@@ -54,17 +56,6 @@ _LOCK = threading.Lock()
 
 class KernelWarning(UserWarning):
     """A native kernel was requested but could not be built; NumPy is used instead."""
-
-
-def cache_dir() -> Path:
-    """Per-user cache folder for compiled kernels (never inside the repository)."""
-    env = os.environ.get("DERIVE_CACHE_DIR")
-    if env:
-        base = Path(env)
-    else:
-        xdg = os.environ.get("XDG_CACHE_HOME")
-        base = (Path(xdg) if xdg else Path.home() / ".cache") / "derive"
-    return base / "kernels"
 
 
 @lru_cache(maxsize=None)
@@ -104,7 +95,12 @@ def _machine_id() -> str:
 
 
 def build_shared(sources: dict, lang: str, stem: str) -> Path:
-    """Compile sources {file name: text} into a shared library in the cache; return its path."""
+    """Compile sources {file name: text} into a shared library in the cache; return its path.
+
+    The cache must be private (:mod:`.cache`); a cached library is verified against the
+    checksum recorded when it was built and rebuilt (with a KernelWarning) when damaged.
+    Raises :class:`CacheUnusable` when the cache cannot be used safely.
+    """
     comp = find_compiler(lang)
     if comp is None:
         raise FileNotFoundError(f"no {'C' if lang == 'c' else 'Fortran'} compiler found")
@@ -115,25 +111,33 @@ def build_shared(sources: dict, lang: str, stem: str) -> Path:
         h.update(name.encode() + b"\0" + sources[name].encode() + b"\0")
     h.update(" ".join(flags).encode() + version.encode() + _machine_id().encode())
     key = h.hexdigest()[:20]
-    folder = cache_dir()
+    folder = kcache.private_folder()
     lib = folder / f"{stem}-{lang}-{key}.so"
-    if lib.exists():
-        return lib
-    folder.mkdir(parents=True, exist_ok=True)
-    with tempfile.TemporaryDirectory(prefix=f".build-{stem}-", dir=str(folder)) as tmp:
-        main = None
-        for name, text in sources.items():
-            (Path(tmp) / name).write_text(text, encoding="utf-8")
-            if name.endswith((".c", ".f90")):
-                main = name
-        out = Path(tmp) / "k.so"
-        cmd = [exe, *flags, main, "-o", str(out)]
-        if lang == "fortran":
-            cmd.insert(1, "-J" + tmp)
-        res = subprocess.run(cmd, cwd=tmp, capture_output=True, text=True)
-        if res.returncode != 0:
-            raise RuntimeError(f"compiling {stem} ({lang}) failed: {res.stderr.strip()[:2000]}")
-        os.replace(out, lib)
+    with kcache.locked(folder):
+        why = kcache.verify(lib)
+        if why is None:
+            return lib
+        if why not in ("missing", "no checksum recorded"):      # the latter: built before checksums
+            warnings.warn(f"derive.kernel: cached library {lib.name} is damaged ({why}); rebuilding it",
+                          KernelWarning, stacklevel=4)
+        try:
+            kcache.discard(lib)
+            with tempfile.TemporaryDirectory(prefix=f".build-{stem}-", dir=str(folder)) as tmp:
+                main = None
+                for name, text in sources.items():
+                    (Path(tmp) / name).write_text(text, encoding="utf-8")
+                    if name.endswith((".c", ".f90")):
+                        main = name
+                out = Path(tmp) / "k.so"
+                cmd = [exe, *flags, main, "-o", str(out)]
+                if lang == "fortran":
+                    cmd.insert(1, "-J" + tmp)
+                res = subprocess.run(cmd, cwd=tmp, capture_output=True, text=True)
+                if res.returncode != 0:
+                    raise RuntimeError(f"compiling {stem} ({lang}) failed: {res.stderr.strip()[:2000]}")
+                kcache.install(out, lib)
+        except OSError as exc:
+            raise CacheUnusable(f"cannot build into the cache folder {folder} ({exc.strerror or exc})") from None
     return lib
 
 
@@ -172,10 +176,7 @@ class Kernel:
 
     # ---------------------------------------------------------------- checks
     def _xy(self, xy) -> np.ndarray:
-        try:
-            arr = np.asarray(xy, dtype=np.float64)
-        except (TypeError, ValueError):
-            raise InputError("xy must be an array of numbers of shape (n, nodes, 2)") from None
+        arr = _real_array("xy", xy, f"(n, {self.nodes}, 2)")
         if arr.ndim == 2 and arr.shape == (self.nodes, 2):
             raise InputError(f"xy must have shape (n, {self.nodes}, 2) (a batch); for one element use xy[None]")
         if arr.ndim != 3 or arr.shape[1:] != (self.nodes, 2):
@@ -189,10 +190,8 @@ class Kernel:
         for name, v in (("E", E), ("nu", nu)) + ((("t", t),) if t is not None else ()):
             if not np.ndim(v) == 0:
                 raise InputError(f"{name} must be a scalar (one material per call)")
-            try:
-                float(v)
-            except (TypeError, ValueError):
-                raise InputError(f"{name} must be a number, got {v!r}") from None
+            if not _is_real_scalar(v):
+                raise InputError(f"{name} must be a real number (not a bool, complex number or string), got {v!r}")
         E, nu = float(E), float(nu)
         # exactly derive.material.check_material's rule: -1 < nu <= 0.5 in plane stress
         # (D = E / (1 - nu^2) [...] is finite at nu = 1/2), nu < 0.5 in the other states
@@ -203,47 +202,77 @@ class Kernel:
                 raise InputError(f"thickness t = {t} is not allowed; t must be a finite number > 0")
         return E, nu, t
 
+    def _out(self, out, n: int, xy: np.ndarray) -> np.ndarray:
+        shape = (n, self.ndof, self.ndof)
+        if out is None:
+            return empty_aligned(shape)
+        want = f"out must be a writeable, C-contiguous float64 array of shape {shape}"
+        if not isinstance(out, np.ndarray):
+            raise InputError(f"{want}; got {type(out).__name__}")
+        if out.dtype != np.float64 or out.shape != shape:
+            raise InputError(f"{want}; got {out.dtype} of shape {out.shape}")
+        if not out.flags.writeable:
+            raise InputError(f"{want}; this one is read-only")
+        if not (out.flags.c_contiguous and out.flags.aligned):
+            raise InputError(f"{want}; this one is not C-contiguous (or not aligned)")
+        if np.may_share_memory(out, xy):
+            raise InputError(f"{want}; this one overlaps xy")
+        return out
+
+    def _screen(self, d: np.ndarray) -> None:
+        """GeometryError naming (by index) elements with det J <= 0 or not finite at a point."""
+        bad = np.flatnonzero(~(np.isfinite(d) & (d > 0)))
+        if not bad.size:
+            return
+        shown = ", ".join(str(int(i)) for i in bad[:10]) + (" ..." if bad.size > 10 else "")
+        over = np.flatnonzero(~np.isfinite(d[bad]))
+        why = ("inverted (clockwise), bow-tie, degenerate or all-zero" if not over.size else
+               "det J not finite (coordinates too large for float64) or inverted, bow-tie, degenerate")
+        raise GeometryError(f"{bad.size} {self.element} element(s) with det J <= 0 or not finite at a quadrature point "
+                            f"({why}): index {shown}; first min det J = {d[bad[0]]:.6g}")
+
     # ---------------------------------------------------------------- calls
-    def __call__(self, xy, E, nu, t=1.0, out=None):
+    def __call__(self, xy, E, nu, t=1.0, out=None, *, screen: bool = True):
+        """Stiffness (n, ndof, ndof).  ``screen`` (default True) first runs the validity
+        kernel and refuses inverted, bow-tie, degenerate and overflowing elements by index,
+        and refuses a non-finite K; ``screen=False`` skips both for speed."""
         arr = self._xy(xy)
         E, nu, t = self._material(E, nu, t)
         n = arr.shape[0]
-        if out is None:
-            out = empty_aligned((n, self.ndof, self.ndof))
-        elif (not isinstance(out, np.ndarray) or out.shape != (n, self.ndof, self.ndof) or out.dtype != np.float64
-              or not out.flags.c_contiguous):
-            raise InputError(f"out must be a C-contiguous float64 array of shape ({n}, {self.ndof}, {self.ndof})")
+        out = self._out(out, n, arr)
+        if n and screen:
+            self._screen(self._validity(arr))
         if n:
             self._impl.stiffness(arr, E, nu, t, out)
+        if n and screen:
+            bad = np.flatnonzero(~np.isfinite(out.reshape(n, -1)).all(axis=1))
+            if bad.size:
+                shown = ", ".join(str(int(i)) for i in bad[:10]) + (" ..." if bad.size > 10 else "")
+                raise GeometryError(f"stiffness not finite for {bad.size} {self.element} element(s) (coordinates too "
+                                    f"large or too small for float64; rescale them): index {shown}")
         return out
 
     stiffness = __call__
 
-    def validity(self, xy) -> np.ndarray:
-        arr = self._xy(xy)
+    def _validity(self, arr: np.ndarray) -> np.ndarray:
         out = np.empty(arr.shape[0])
         if arr.shape[0]:
             self._impl.validity(arr, out)
         return out
 
+    def validity(self, xy) -> np.ndarray:
+        return self._validity(self._xy(xy))
+
     def check(self, xy) -> np.ndarray:
         """min det J per element; GeometryError naming the inverted/degenerate elements."""
         d = self.validity(xy)
-        bad = np.flatnonzero(~(d > 0))
-        if bad.size:
-            shown = ", ".join(str(int(i)) for i in bad[:10]) + (" ..." if bad.size > 10 else "")
-            raise GeometryError(f"{bad.size} {self.element} element(s) with det J <= 0 at a quadrature point "
-                                f"(inverted, clockwise or degenerate): index {shown}; first min det J = "
-                                f"{d[bad[0]]:.6g}")
+        self._screen(d)
         return d
 
     def recovery(self, xy, u, E, nu):
         arr = self._xy(xy)
         E, nu, _ = self._material(E, nu)
-        try:
-            U = np.ascontiguousarray(np.asarray(u, dtype=np.float64))
-        except (TypeError, ValueError):
-            raise InputError("u must be an array of numbers") from None
+        U = np.ascontiguousarray(_real_array("u", u, f"({arr.shape[0]}, {self.ndof})"))
         if U.shape != (arr.shape[0], self.ndof):
             raise InputError(f"u must have shape ({arr.shape[0]}, {self.ndof}); got {U.shape}")
         if not np.all(np.isfinite(U)):
@@ -256,6 +285,35 @@ class Kernel:
         return strain, stress
 
 
+def _is_real_scalar(v) -> bool:
+    """A real number: int or float (Python or NumPy), or another numbers.Real; never a bool,
+    complex number, string or bytes (float() would accept "2" or True silently)."""
+    import numbers
+    if isinstance(v, (bool, np.bool_, str, bytes, complex, np.complexfloating)):
+        return False
+    if isinstance(v, np.ndarray):
+        return v.dtype.kind in "iuf"
+    return isinstance(v, (numbers.Real, np.integer, np.floating))
+
+
+def _real_array(name: str, value, shape: str) -> np.ndarray:
+    """``value`` as a float64 array, refusing bool, complex, string and other non-real entries."""
+    try:
+        raw = np.asarray(value)
+    except (TypeError, ValueError):
+        raise InputError(f"{name} must be an array of real numbers of shape {shape}") from None
+    kind = raw.dtype.kind
+    if kind == "O" and all(_is_real_scalar(v) for v in raw.flat):
+        kind = "f"
+    if kind not in "iuf":
+        what = {"b": "booleans", "c": "complex numbers", "U": "strings", "S": "bytes"}.get(kind, "non-numbers")
+        raise InputError(f"{name} must be an array of real numbers of shape {shape}; it holds {what}")
+    try:
+        return np.asarray(raw, dtype=np.float64)
+    except (TypeError, ValueError, OverflowError):
+        raise InputError(f"{name} must be an array of real numbers of shape {shape}") from None
+
+
 class _NumpyImpl:
     def __init__(self, text: str, name: str):
         mod = types.ModuleType(f"derive_kernel_{name}")
@@ -263,14 +321,19 @@ class _NumpyImpl:
         exec(compile(text, mod.__file__, "exec"), mod.__dict__)
         self.mod = mod
 
+    # overflow on absurd coordinates gives inf/nan, which the checked call reports by index;
+    # NumPy's RuntimeWarnings would only add noise on stderr
     def stiffness(self, xy, E, nu, t, out):
-        self.mod.stiffness(xy, E, nu, t, out=out)
+        with np.errstate(all="ignore"):
+            self.mod.stiffness(xy, E, nu, t, out=out)
 
     def validity(self, xy, out):
-        out[:] = self.mod.validity(xy)
+        with np.errstate(all="ignore"):
+            out[:] = self.mod.validity(xy)
 
     def recovery(self, xy, u, E, nu, strain, stress):
-        s, t = self.mod.recovery(xy, u, E, nu)
+        with np.errstate(all="ignore"):
+            s, t = self.mod.recovery(xy, u, E, nu)
         strain[:] = s
         stress[:] = t
 
@@ -281,7 +344,10 @@ def _ptr(a: np.ndarray):
 
 class _NativeImpl:
     def __init__(self, lib_path: Path, prefix: str, suffix: str):
-        self.lib = ctypes.CDLL(str(lib_path))
+        try:
+            self.lib = ctypes.CDLL(str(lib_path))
+        except OSError as exc:
+            raise CacheUnusable(f"cached library {lib_path.name} cannot be loaded ({exc})") from None
         L, P, D = ctypes.c_long, ctypes.c_void_p, ctypes.c_double
         self.k = getattr(self.lib, f"{prefix}_stiffness_batch{suffix}")
         self.k.argtypes = [L, P, D, D, D, P]
@@ -326,7 +392,7 @@ def _kernel(name: str, variant: str, state: str, lang: str) -> Kernel:
         prefix = f"derive_{kset.stem}"
         impl = _NativeImpl(lib, prefix, "_f" if lang == "fortran" else "")
         return Kernel(kset, lang, lang, impl)
-    except FileNotFoundError as exc:
+    except (FileNotFoundError, CacheUnusable) as exc:
         warnings.warn(f"derive.kernel: {exc}; using the NumPy kernel for {kset.element} {kset.variant} "
                       f"{kset.state} instead of {lang}", KernelWarning, stacklevel=3)
         np_kernel = _kernel(name, variant, state, "numpy")

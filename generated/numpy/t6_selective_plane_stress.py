@@ -755,6 +755,9 @@ def stiffness(xy, E, nu, t, out=None):
     n = xy.shape[0]
     if out is None:
         out = np.empty((n, NDOF, NDOF))
+    elif (not isinstance(out, np.ndarray) or out.shape != (n, NDOF, NDOF) or out.dtype != np.float64
+          or not out.flags.c_contiguous or not out.flags.writeable):
+        raise ValueError(f"out must be a writeable, C-contiguous float64 array of shape ({n}, {NDOF}, {NDOF})")
     mat = _material(float(E), float(nu), float(t))
     for s in range(0, n, _CHUNK):
         e = min(n, s + _CHUNK)
