@@ -20,7 +20,7 @@ from .errors import DeriveError
 from .output import CAUTION
 
 COMMANDS = ("list", "shapes", "stiffness", "locking", "chart", "kernel", "modes", "patch", "bench", "check",
-            "perf", "demo")
+            "perf", "demo", "samples")
 
 
 class _Parser(argparse.ArgumentParser):

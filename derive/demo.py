@@ -21,7 +21,7 @@ import numpy as np
 import sympy as sp
 
 from .element import element
-from .output import CAUTION, OutputFolder, Progress, emit_json, matrix_latex, matrix_text, write_atomic
+from .output import CAUTION, OutputFolder, emit_json, matrix_latex, matrix_text, working, write_atomic
 from .symbols import E, a, b, nu, t
 
 SCENARIO = {
@@ -78,20 +78,18 @@ def run_demo(outdir: str | Path, show_progress: bool | None = None, force: bool 
     folder = OutputFolder(outdir, "-o", force=force)
     outdir = folder.path
     started = time.time()
-    progress = Progress(len(SECTIONS), "demo", enabled=show_progress)
     results = []
     try:
-        for spec in SECTIONS:
+        for k, spec in enumerate(SECTIONS, start=1):
             module, func = spec.split(":")
             fn = getattr(importlib.import_module(module), func)
-            progress.step(f"running {module.rsplit('.', 1)[-1]}")
-            res = fn(outdir)
+            with working(f"demo section {k}/{len(SECTIONS)} ({module.rsplit('.', 1)[-1]})", enabled=show_progress,
+                         after=0.5):
+                res = fn(outdir)
             results.append(res)
             if on_section is not None:
-                progress.clear()
                 on_section(res)
     finally:
-        progress.close()
         folder.adopt(started)
     report = [f"# derive demo: {SCENARIO['beam']}", "", f"> {CAUTION}", "",
               "Scenario (invented): checking the in-house solver used for a deep floor-slab transfer beam, "

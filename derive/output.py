@@ -6,6 +6,9 @@ import math
 import os
 import sys
 import tempfile
+import threading
+import time
+from contextlib import contextmanager
 from pathlib import Path
 from typing import Iterable
 
@@ -542,6 +545,58 @@ def _umask() -> int:
     mask = os.umask(0)
     os.umask(mask)
     return mask
+
+
+@contextmanager
+def working(label: str, enabled: bool | None = None, after: float = 2.0):
+    """Show ``label ... N s`` on a terminal while the block runs, for work without steps to
+    count (a long derivation, a chart, a plot, a benchmark section).
+
+    Nothing appears for blocks shorter than ``after`` seconds, under --json (callers pass
+    ``enabled=False``) or when stderr is not a terminal; the line is erased at the end.
+    Use :class:`Progress` where the steps can be counted.
+    """
+    enabled = _stderr_tty() if enabled is None else enabled
+    if not enabled:
+        yield
+        return
+    stop = threading.Event()
+    shown = threading.Event()
+    t0 = time.monotonic()
+
+    def tick():
+        if stop.wait(after):
+            return
+        while True:
+            try:
+                sys.stderr.write(f"\r{label[:60]} ... {time.monotonic() - t0:.0f} s ")
+                sys.stderr.flush()
+            except (OSError, ValueError):
+                return
+            shown.set()
+            if stop.wait(1.0):
+                return
+
+    thread = threading.Thread(target=tick, name="derive-progress", daemon=True)
+    thread.start()
+    try:
+        yield
+    finally:
+        stop.set()
+        thread.join()
+        if shown.is_set():
+            try:
+                sys.stderr.write("\r" + " " * 80 + "\r")
+                sys.stderr.flush()
+            except (OSError, ValueError):
+                pass
+
+
+def _stderr_tty() -> bool:
+    try:
+        return sys.stderr.isatty()
+    except (AttributeError, ValueError):
+        return False
 
 
 class Progress:

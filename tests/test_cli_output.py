@@ -348,3 +348,42 @@ def test_large_latex_matrix_is_a_list_a_document_can_include(capsys):
     assert len(entries) == 16 * 17 // 2 and all("&=" in line for line in entries)  # upper triangle of 16 x 16
     code, out, _ = run(["stiffness", "Q4", "--format", "latex"], capsys)
     assert "K = \\frac{E t}{24 a b \\left(1 - \\nu^{2}\\right)} \\begin{bmatrix}" in out
+
+
+# --- progress -------------------------------------------------------------------------------------
+
+def test_progress_quiet_when_not_a_terminal_and_shown_on_one(capsys):
+    import time
+    with output.working("long job"):             # pytest's stderr is not a terminal
+        time.sleep(0.05)
+    assert capsys.readouterr().err == ""
+    with output.working("long job", enabled=False, after=0):
+        time.sleep(0.05)
+    assert capsys.readouterr().err == ""
+    with output.working("long job", enabled=True, after=0):
+        time.sleep(1.5)                           # generous: the first tick is immediate
+    err = capsys.readouterr().err
+    assert "long job ... " in err and err.endswith("\r")    # the line is erased at the end
+
+
+def test_demo_json_is_quiet_on_stderr_refusal(tmp_path, monkeypatch, capsys):
+    monkeypatch.chdir(tmp_path)
+    Path("taken").mkdir()
+    (Path("taken") / "x").write_text("")
+    code, out, err = run(["demo", "-o", "taken", "--json"], capsys)
+    assert code == 2 and out == "" and err.count("\n") == 1
+
+
+# --- samples --------------------------------------------------------------------------------------
+
+def test_samples_are_copied_and_never_overwritten_without_force(tmp_path, monkeypatch, capsys):
+    monkeypatch.chdir(tmp_path)
+    code, out, _ = run(["samples"], capsys)
+    assert code == 0 and sorted(p.name for p in tmp_path.iterdir()) == ["my-k.txt", "solver-k.csv"]
+    Path("my-k.txt").write_text("mine")
+    code, _, err = run(["samples"], capsys)
+    assert code == 2 and "file exists" in err and Path("my-k.txt").read_text() == "mine"
+    code, _, _ = run(["samples", "--force"], capsys)
+    assert code == 0 and Path("my-k.txt").read_text().startswith("# My hand derivation")
+    code, _, err = run(["samples", "-o", "nowhere"], capsys)
+    assert code == 2 and "does not exist" in err

@@ -5,7 +5,7 @@ from pathlib import Path
 
 from .. import charts, plotting
 from ..errors import InputError
-from ..output import CAUTION, check_output_file, parse_number
+from ..output import CAUTION, check_output_file, parse_number, working
 from .common import add_force_arg, add_output_args, output_format, print_json
 from .locking_cmd import parse_nus
 
@@ -59,6 +59,23 @@ def run(args) -> int:
     dpi = plotting.check_dpi(args.dpi)
     tol = None if args.tolerance.strip().lower() == "none" else float(parse_number(args.tolerance, "--tolerance"))
     specs = charts.parse_specs(args.elements)
+    with working(f"{args.kind} chart", enabled=False if output_format(args) == "json" else None):
+        fig, meta = _figure(args, specs, tol)
+        data = charts.series(fig)
+        path = charts.save(fig, out, dpi=dpi)
+    summary = {"chart": args.kind, "output": str(path), "format": charts.FORMATS[out.suffix.lower()],
+               "elements": [f"{n}:{v}" for n, v in specs], "state": args.state, **meta,
+               "series": [d["gid"] for d in data], "dpi": dpi, "bytes": path.stat().st_size, "caution": CAUTION}
+    if output_format(args) == "json":
+        print_json(summary)
+        return 0
+    print(f"{args.kind} chart written to {path} ({summary['bytes']} bytes, {len(data)} data lines)")
+    print(CAUTION)
+    return 0
+
+
+def _figure(args, specs, tol):
+    """The chart's figure and the parameters it was drawn for."""
     if args.kind == "locking":
         nus = parse_nus(args.nu) if args.nu else [0.0, 0.3, 0.49]
         aspect = _pair(args.aspect, "--aspect") if args.aspect else (1.0, 20.0)
@@ -82,14 +99,4 @@ def run(args) -> int:
         aspect = float(parse_number(args.aspect, "--aspect")) if args.aspect else 1.0
         fig = charts.distortion_chart(specs, args.state, kind, values, aspect, nu)
         meta = {"nu": nu, "aspect": aspect, "distortion": kind, "range": list(values)}
-    data = charts.series(fig)
-    path = charts.save(fig, out, dpi=dpi)
-    summary = {"chart": args.kind, "output": str(path), "format": charts.FORMATS[out.suffix.lower()],
-               "elements": [f"{n}:{v}" for n, v in specs], "state": args.state, **meta,
-               "series": [d["gid"] for d in data], "dpi": dpi, "bytes": path.stat().st_size, "caution": CAUTION}
-    if output_format(args) == "json":
-        print_json(summary)
-        return 0
-    print(f"{args.kind} chart written to {path} ({summary['bytes']} bytes, {len(data)} data lines)")
-    print(CAUTION)
-    return 0
+    return fig, meta

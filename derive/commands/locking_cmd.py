@@ -9,7 +9,7 @@ from .. import catalog
 from ..errors import InputError
 from ..locking import display_form, report
 from ..symbols import nu, r
-from ..output import CAUTION, check_digits, num, parse_number
+from ..output import CAUTION, check_digits, num, parse_number, working
 from .common import add_digits_arg, add_output_args, print_json
 
 NAME = "locking"
@@ -76,8 +76,9 @@ def run(args) -> int:
         if not 0 < tolerance < 1:
             raise InputError(f"--tolerance must be between 0 and 1, e.g. 0.05; got {args.tolerance}")
     single_nu = nus[0] if nus and len(nus) == 1 else None
-    res = report(args.element, args.variant, args.state, aspect=aspect, nu_value=single_nu, tolerance=tolerance,
-                 nus=nus, distortion_spec=args.distortion)
+    with working(f"locking of {args.element}", enabled=False if fmt == "json" else None):
+        res = report(args.element, args.variant, args.state, aspect=aspect, nu_value=single_nu, tolerance=tolerance,
+                     nus=nus, distortion_spec=args.distortion)
     if nus and len(nus) > 1 and aspect is not None and not res["zero_energy"]:
         from ..locking import evaluate
         res["ratios"] = [[v, evaluate(args.element, args.variant, args.state, aspect, v)] for v in nus]

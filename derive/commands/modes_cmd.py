@@ -3,7 +3,7 @@ from __future__ import annotations
 
 from .. import catalog, plotting
 from ..modes import GEOMETRIES, plot_modes, summary_lines, zero_energy_modes
-from ..output import CAUTION, check_output_file, parse_number
+from ..output import CAUTION, check_output_file, parse_number, working
 from .common import add_force_arg, add_output_args, output_format, print_json
 from .stiffness_cmd import parse_nodes
 
@@ -41,9 +41,13 @@ def run(args) -> int:
     nu = float(parse_number(args.nu, "--nu"))
     tol = float(parse_number(args.tol, "--tol"))
     nodes = [[float(u), float(v)] for u, v in parse_nodes(args.nodes)] if args.nodes else None
-    res = zero_energy_modes(args.element, args.variant, args.state, nodes=nodes, geometry=args.geometry, nu=nu, tol=tol)
+    show = False if output_format(args) == "json" else None
+    with working(f"modes of {args.element}", enabled=show):
+        res = zero_energy_modes(args.element, args.variant, args.state, nodes=nodes, geometry=args.geometry, nu=nu,
+                                tol=tol)
     if args.plot:
-        res["plot"] = plot_modes(res, args.plot, dpi)
+        with working(f"plotting {res.get('zero_energy', '')} mode shapes", enabled=show):
+            res["plot"] = plot_modes(res, args.plot, dpi)
     if output_format(args) == "json":
         print_json({**res, "caution": CAUTION})
         return 0

@@ -3,7 +3,7 @@ from __future__ import annotations
 
 import platform
 
-from ..output import emit_json
+from ..output import emit_json, working
 from ..perf import SECTIONS, run_section
 from .common import add_output_args, output_format, print_json
 
@@ -26,7 +26,8 @@ def run(args) -> int:
         chosen = list(SECTIONS)
     results = []
     for name in chosen:
-        res = run_section(name, quick=args.quick)
+        with working(f"perf {name}", enabled=False if output_format(args) == "json" else None):
+            res = run_section(name, quick=args.quick)
         results.append(res)
         if output_format(args) != "json":
             _print(res)

@@ -6,7 +6,7 @@ import sympy as sp
 from ..errors import InputError
 from ..material import D as D_matrix
 from ..output import (check_digits, check_unknown, matrix_latex, matrix_text, numeric_text, parse_number, parse_set,
-                      to_float_matrix)
+                      to_float_matrix, working)
 from ..symbols import E, nu, t
 from .common import (add_digits_arg, add_element_args, add_output_args, caution_line, output_format, print_json,
                      resolve_element)
@@ -84,15 +84,16 @@ def run(args) -> int:
     values = parse_set(args.values)
     geometry = parse_nodes(args.nodes) if args.nodes else args.geometry
     mat = {k: values.get(s) for k, s in (("E", E), ("nu", nu), ("t", t))}
-    if args.what == "D":
-        M = D_matrix(el.state, mat["E"] if mat["E"] is not None else E, mat["nu"] if mat["nu"] is not None else nu)
-        label = "D"
-    elif args.what == "B":
-        M = el.B(geometry)
-        label = "B"
-    else:
-        M = el.stiffness(geometry, rule=args.rule, E=mat["E"], nu=mat["nu"], t=mat["t"])
-        label = "K"
+    with working(f"deriving {args.what} of {el.name}", enabled=False if output_format(args) == "json" else None):
+        if args.what == "D":
+            M = D_matrix(el.state, mat["E"] if mat["E"] is not None else E, mat["nu"] if mat["nu"] is not None else nu)
+            label = "D"
+        elif args.what == "B":
+            M = el.B(geometry)
+            label = "B"
+        else:
+            M = el.stiffness(geometry, rule=args.rule, E=mat["E"], nu=mat["nu"], t=mat["t"])
+            label = "K"
     rest = {s: v for s, v in values.items() if s not in (E, nu, t)}
     check_unknown(values, M.free_symbols | {E, nu, t}, f"{label} of {el.name}")
     if rest:
