@@ -55,17 +55,86 @@ def shape(name: str, s: float, t: float):
         ds = np.array([-(4 * L1 - 1), 4 * L2 - 1, 0, 4 * (L1 - L2), 4 * L3, -4 * L3])
         dt = np.array([-(4 * L1 - 1), 0, 4 * L3 - 1, -4 * L2, 4 * L2, 4 * (L1 - L3)])
         return N, ds, dt
+    if name == "Q12":
+        return _q12(s, t)
+    if name == "T10":
+        return _t10(s, t)
     raise KeyError(name)
+
+
+#: Q12 nodes: corners, then two per edge at the thirds, counter-clockwise from the bottom edge
+Q12_NODES = [(-1, -1), (1, -1), (1, 1), (-1, 1), (-1 / 3, -1), (1 / 3, -1), (1, -1 / 3), (1, 1 / 3),
+             (1 / 3, 1), (-1 / 3, 1), (-1, 1 / 3), (-1, -1 / 3)]
+#: T10 nodes: corners, two per edge at the thirds (edges 1-2, 2-3, 3-1), the centroid
+T10_NODES = [(0, 0), (1, 0), (0, 1), (1 / 3, 0), (2 / 3, 0), (2 / 3, 1 / 3), (1 / 3, 2 / 3), (0, 2 / 3), (0, 1 / 3),
+             (1 / 3, 1 / 3)]
+
+
+def _q12(s: float, t: float):
+    """12-node cubic serendipity (Zienkiewicz & Taylor, The Finite Element Method, vol. 1, from
+    memory): corners (1/32)(1 + s si)(1 + t ti)(9 (s^2 + t^2) - 10); side nodes at si = +-1,
+    ti = +-1/3: (9/32)(1 + s si)(1 - t^2)(1 + 9 t ti), and the same with s and t exchanged."""
+    N = np.zeros(12); ds = np.zeros(12); dt = np.zeros(12)
+    for k, (a, b) in enumerate(Q12_NODES):
+        if abs(a) == 1 and abs(b) == 1:
+            g = 9 * (s * s + t * t) - 10
+            N[k] = (1 + s * a) * (1 + t * b) * g / 32
+            ds[k] = (1 + t * b) * (a * g + (1 + s * a) * 18 * s) / 32
+            dt[k] = (1 + s * a) * (b * g + (1 + t * b) * 18 * t) / 32
+        elif abs(a) == 1:
+            N[k] = 9 / 32 * (1 + s * a) * (1 - t * t) * (1 + 9 * t * b)
+            ds[k] = 9 / 32 * a * (1 - t * t) * (1 + 9 * t * b)
+            dt[k] = 9 / 32 * (1 + s * a) * (-2 * t * (1 + 9 * t * b) + 9 * b * (1 - t * t))
+        else:
+            N[k] = 9 / 32 * (1 + t * b) * (1 - s * s) * (1 + 9 * s * a)
+            ds[k] = 9 / 32 * (1 + t * b) * (-2 * s * (1 + 9 * s * a) + 9 * a * (1 - s * s))
+            dt[k] = 9 / 32 * b * (1 - s * s) * (1 + 9 * s * a)
+    return N, ds, dt
+
+
+def _t10(s: float, t: float):
+    """10-node cubic triangle in area coordinates L1 = 1 - s - t, L2 = s, L3 = t (Zienkiewicz &
+    Taylor, from memory): corners L (3L - 1)(3L - 2) / 2, the side node a third of the way from
+    node i towards j (9/2) Li Lj (3 Li - 1), the centroid 27 L1 L2 L3."""
+    L = np.array([1 - s - t, s, t])
+    dLs = np.array([-1.0, 1.0, 0.0]); dLt = np.array([-1.0, 0.0, 1.0])
+    N = np.zeros(10); gL = np.zeros((10, 3))
+    for i in range(3):
+        N[i] = L[i] * (3 * L[i] - 1) * (3 * L[i] - 2) / 2
+        gL[i, i] = (27 * L[i] ** 2 - 18 * L[i] + 2) / 2
+    # (node, i nearer, j): 1/3 along 1-2, 2/3 along 1-2, then 2-3 and 3-1 likewise
+    for k, (i, j) in enumerate([(0, 1), (1, 0), (1, 2), (2, 1), (2, 0), (0, 2)], start=3):
+        N[k] = 4.5 * L[i] * L[j] * (3 * L[i] - 1)
+        gL[k, i] = 4.5 * L[j] * (6 * L[i] - 1)
+        gL[k, j] = 4.5 * L[i] * (3 * L[i] - 1)
+    N[9] = 27 * L[0] * L[1] * L[2]
+    gL[9] = 27 * np.array([L[1] * L[2], L[0] * L[2], L[0] * L[1]])
+    return N, gL @ dLs, gL @ dLt
+
+
+def _duffy(n: int):
+    """n x n Gauss (numpy leggauss) collapsed onto the reference triangle (Duffy map): exact for
+    polynomials of total degree 2n - 2."""
+    g, w = np.polynomial.legendre.leggauss(n)
+    pts, wts = [], []
+    for u, wu in zip(g, w):
+        for v, wv in zip(g, w):
+            s = (1 + u) / 2
+            pts.append((s, (1 - s) * (1 + v) / 2))
+            wts.append(wu * wv * (1 - s) / 4)
+    return pts, wts
 
 
 def rule(name: str, full: bool = True):
     """(points, weights) of the element's textbook rule."""
-    if name in ("Q4", "Q8", "Q9"):
-        n = {"Q4": 2, "Q8": 3, "Q9": 3}[name] - (0 if full else 1)
+    if name in ("Q4", "Q8", "Q9", "Q12"):
+        n = {"Q4": 2, "Q8": 3, "Q9": 3, "Q12": 4}[name] - (0 if full else 1)
         g, w = np.polynomial.legendre.leggauss(n)
         pts = [(x, y) for y in g for x in g]
         wts = [wx * wy for wy in w for wx in w]
         return pts, wts
+    if name == "T10":          # degree 4 (full) / 3 (reduced), exact on straight-sided triangles
+        return _duffy(4 if full else 3)
     if name == "T3" or (name == "T6" and not full):
         return [(1 / 3, 1 / 3)], [0.5]
     return [(1 / 6, 1 / 6), (2 / 3, 1 / 6), (1 / 6, 2 / 3)], [1 / 6] * 3
@@ -102,6 +171,8 @@ REF_NODES = {
     "Q9": [(-1, -1), (1, -1), (1, 1), (-1, 1), (0, -1), (1, 0), (0, 1), (-1, 0), (0, 0)],
     "T3": [(0, 0), (1, 0), (0, 1)],
     "T6": [(0, 0), (1, 0), (0, 1), (0.5, 0), (0.5, 0.5), (0, 0.5)],
+    "Q12": Q12_NODES,
+    "T10": T10_NODES,
 }
 
 
