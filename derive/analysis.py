@@ -22,20 +22,27 @@ __all__ = ["analyse", "element_spurious_modes", "spurious_mode_warning"]
 
 def analyse(mesh: Mesh, f: np.ndarray, fixed: dict[int, float], variant: str = "full",
             state: str = "plane-stress", E: float = 1.0, nu: float = 0.3, t: float = 1.0,
-            provider: Provider | None = None, check: bool = True) -> Solution:
+            provider: Provider | None = None, check: bool = True, stage=None) -> Solution:
     """Assemble, solve and return a :class:`Solution`.
+
+    ``stage`` (optional) is called with "assembly", "solve" and "check" as each begins (the
+    progress display of long runs).
 
     With ``check`` (default) the solution carries the element-mode warning of the variant
     (:func:`spurious_mode_warning`) and the result of :func:`derive.mesh.mechanism_check`; a detected
     near-mechanism sets ``Solution.reliable = False`` and adds a warning.
     """
+    note = stage or (lambda _: None)
+    note("assembly")
     asm = assemble(mesh, variant, state, E, nu, t, provider)
     diag: dict = {}
+    note("solve")
     u, reactions, secs = solve(asm.K, f, fixed, diag)
     warnings = list(diag.get("warnings", []))
     reliable, checks = True, {}
     secs_check = 0.0
     if check:
+        note("check")
         t0 = time.perf_counter()
         elem = spurious_mode_warning(mesh.element, variant, state)
         if elem:

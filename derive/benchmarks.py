@@ -145,6 +145,68 @@ def cylinder_mesh(element: str, n_r: int, n_theta: int | None = None) -> M.Mesh:
 
 
 # ---------------------------------------------------------------------------------------------
+# size limits
+
+#: default memory limit of one benchmark run in GB (override: ``memory_limit=`` / ``--memory-limit``)
+MEMORY_LIMIT_GB = 8.0
+#: peak resident memory per element-matrix entry (n_elements x (2 x nodes)^2) of a run: element
+#: matrices, COO/CSR assembly, sparse LU with fill, solution and checks.  Measured (2-core machine,
+#: `/usr/bin/time -f %M derive bench membrane --mesh N --json`): Q4 128: 110 B, Q4 256: 181 B,
+#: Q4 512: 245 B, Q9 128: 152 B, Q9 256: 195 B per entry over a 150 MB interpreter; the
+#: estimate uses 250 B so that it errs on the safe side up to 512 x 512.
+BYTES_PER_ENTRY = 250.0
+BASE_BYTES = 150e6
+
+
+def _cells_to_elements(element: str, cells: int) -> int:
+    info = catalog.element_info(element)
+    return cells * (2 if info.domain == "triangle" else 1)
+
+
+def estimate(element: str, n_elements: int) -> dict:
+    """Memory estimate of one mesh run: elements, element-matrix entries, bytes (see BYTES_PER_ENTRY)."""
+    nde = 2 * catalog.element_info(element).n_nodes
+    entries = int(n_elements) * nde * nde
+    return {"elements": int(n_elements), "entries": entries, "bytes": BASE_BYTES + BYTES_PER_ENTRY * entries}
+
+
+def _machine_bytes() -> float | None:
+    try:
+        import os
+        return float(os.sysconf("SC_PHYS_PAGES") * os.sysconf("SC_PAGE_SIZE"))
+    except (ValueError, OSError, AttributeError):
+        return None
+
+
+def check_memory_limit(limit_gb) -> float:
+    """A memory limit in GB: a finite number > 0 (None: the default :data:`MEMORY_LIMIT_GB`)."""
+    if limit_gb is None:
+        return MEMORY_LIMIT_GB
+    try:
+        v = float(limit_gb)
+    except (TypeError, ValueError):
+        raise InputError(f"--memory-limit {limit_gb!r}: give a number of GB > 0, e.g. 16") from None
+    if not (math.isfinite(v) and v > 0):
+        raise InputError(f"--memory-limit {limit_gb!r}: give a number of GB > 0, e.g. 16")
+    return v
+
+
+def check_size(what: str, element: str, n_elements: int, limit_gb=None) -> dict:
+    """Refuse a run whose memory estimate exceeds the limit (InputError naming the estimate, the
+    limit and the override); returns the estimate."""
+    limit = check_memory_limit(limit_gb)
+    est = estimate(element, n_elements)
+    gb = est["bytes"] / 1e9
+    if gb > limit:
+        machine = _machine_bytes()
+        where = f"; this machine has {machine / 1e9:.0f} GB" if machine else ""
+        raise InputError(f"{what} with {element}: about {gb:.1f} GB of memory estimated ({est['elements']} elements, "
+                         f"{BYTES_PER_ENTRY:g} bytes per element-matrix entry), more than the limit of {limit:g} GB; "
+                         f"give --memory-limit {math.ceil(gb)} to run it anyway{where}")
+    return est
+
+
+# ---------------------------------------------------------------------------------------------
 # single runs
 
 def _element(element: str, variant: str, state: str):
@@ -201,16 +263,18 @@ def _marked(r: dict, key: str, fmt: str) -> str:
 
 
 def run_cantilever(element: str, variant: str = "full", kind: str = "rectangular", load: str = "shear",
-                   refine: int = 1, provider=None, nx=None, ny=None) -> dict:
+                   refine: int = 1, provider=None, nx=None, ny=None, memory_limit=None, stage=None) -> dict:
     _element(element, variant, "plane-stress")
     if load not in ("shear", "extension"):
         raise InputError(f"unknown cantilever load {load!r}; allowed: shear, extension")
     c = CANTILEVER
+    cells = (c["nx"] if nx is None else nx) * (1 if ny is None else ny) * M._count(refine, "refine") ** 2
+    check_size(f"cantilever {kind} refine {refine}", element, _cells_to_elements(element, cells), memory_limit)
     mesh = cantilever_mesh(element, kind, refine, nx, ny)
     total = (0.0, 1.0) if load == "shear" else (1.0, 0.0)
     f = M.uniform_edge_force(mesh, "right", total, "plane-stress", c["t"])
     fixed = M.fix(mesh, "left", "uv")
-    sol = analyse(mesh, f, fixed, variant, "plane-stress", c["E"], c["nu"], c["t"], provider)
+    sol = analyse(mesh, f, fixed, variant, "plane-stress", c["E"], c["nu"], c["t"], provider, stage=stage)
     tip = np.nonzero(mesh.side("right"))[0]
     comp = 1 if load == "shear" else 0
     value = float(sol.U[tip, comp].mean())
@@ -220,13 +284,16 @@ def run_cantilever(element: str, variant: str = "full", kind: str = "rectangular
             **_warn(sol), "_solution": sol}
 
 
-def run_membrane(element: str, variant: str = "full", n: int = 16, provider=None) -> dict:
+def run_membrane(element: str, variant: str = "full", n: int = 16, provider=None, memory_limit=None,
+                 stage=None) -> dict:
     _element(element, variant, "plane-stress")
     c = COOK
+    n = M._count(n, "membrane mesh")
+    check_size(f"membrane {n} x {n}", element, _cells_to_elements(element, n * n), memory_limit)
     mesh = membrane_mesh(element, n)
     f = M.uniform_edge_force(mesh, "right", (0.0, c["load"]), "plane-stress", c["t"])
     fixed = M.fix(mesh, "left", "uv")
-    sol = analyse(mesh, f, fixed, variant, "plane-stress", c["E"], c["nu"], c["t"], provider)
+    sol = analyse(mesh, f, fixed, variant, "plane-stress", c["E"], c["nu"], c["t"], provider, stage=stage)
     corner = sol.displacement_at(*c["corner"])[1]
     mid = sol.displacement_at(*c["mid"])[1]
     ref = COOK_CONVERGED["mid"]
@@ -236,13 +303,16 @@ def run_membrane(element: str, variant: str = "full", n: int = 16, provider=None
 
 
 def run_cylinder(element: str, variant: str = "full", n: int = 8, nu: float = 0.4999, provider=None,
-                 n_theta: int | None = None) -> dict:
+                 n_theta: int | None = None, memory_limit=None, stage=None) -> dict:
     _element(element, variant, "plane-strain")
     c = CYLINDER
+    n = M._count(n, "cylinder mesh")
+    nt = n if n_theta is None else M._count(n_theta, "cylinder hoop elements")
+    check_size(f"cylinder {n} x {nt}", element, _cells_to_elements(element, n * nt), memory_limit)
     mesh = cylinder_mesh(element, n, n_theta)
     f = M.pressure_load(mesh, "left", c["p"], "plane-strain", c["t"])
     fixed = {**M.fix(mesh, "bottom", "v"), **M.fix(mesh, "top", "u")}
-    sol = analyse(mesh, f, fixed, variant, "plane-strain", c["E"], nu, c["t"], provider)
+    sol = analyse(mesh, f, fixed, variant, "plane-strain", c["E"], nu, c["t"], provider, stage=stage)
     bore = np.nonzero(mesh.side("left"))[0]
     P = mesh.nodes[bore]
     ur = (sol.U[bore, 0] * P[:, 0] + sol.U[bore, 1] * P[:, 1]) / np.hypot(P[:, 0], P[:, 1])
@@ -256,8 +326,28 @@ def run_cylinder(element: str, variant: str = "full", n: int = 8, nu: float = 0.
 # ---------------------------------------------------------------------------------------------
 # studies
 
+class _Stages:
+    """Progress of a study on a terminal: one step per stage (assembly, solve, check) of each run."""
+
+    STAGES = 3
+
+    def __init__(self, runs: int, label: str, show):
+        self.pr = Progress(runs * self.STAGES, label, enabled=show)
+        self.run = ""
+
+    def step(self, what: str) -> None:
+        """A new run begins (shown with its first stage)."""
+        self.run = what
+
+    def __call__(self, stage: str) -> None:
+        self.pr.step(f"{self.run}: {stage}")
+
+    def close(self) -> None:
+        self.pr.close()
+
+
 def _progress(total, label, show):
-    return Progress(total, label, enabled=show)
+    return _Stages(total, label, show)
 
 
 MECHANISM = "mechanism (singular stiffness)"
@@ -278,13 +368,16 @@ def _num(v, fmt: str) -> str:
 
 
 def cantilever_study(element: str, variant: str = "full", meshes=CANTILEVER_MESHES, loads=("shear", "extension"),
-                     refine: int = 1, show_progress=False) -> dict:
+                     refine: int = 1, show_progress=False, memory_limit=None) -> dict:
     rows, last = [], None
+    check_size(f"cantilever refine {refine}", element,
+               _cells_to_elements(element, CANTILEVER["nx"] * M._count(refine, "refine") ** 2), memory_limit)
     pr = _progress(len(meshes) * len(loads), "cantilever", show_progress)
     for kind in meshes:
         for load in loads:
             pr.step(f"{kind} {load}")
-            r, sol = _attempt(run_cantilever, element, variant, kind, load, refine)
+            r, sol = _attempt(run_cantilever, element, variant, kind, load, refine, memory_limit=memory_limit,
+                              stage=pr)
             if r is None:
                 r = {"problem": "cantilever", "element": element, "variant": variant, "mesh": kind, "load": load,
                      "refine": refine, "value": None, "reference": CANTILEVER["reference"][load], "normalized": None,
@@ -308,13 +401,16 @@ def _headline(row: dict) -> dict:
     return out
 
 
-def membrane_study(element: str, variant: str = "full", levels=(2, 4, 8, 16, 32), show_progress=False) -> dict:
+def membrane_study(element: str, variant: str = "full", levels=(2, 4, 8, 16, 32), show_progress=False,
+                   memory_limit=None) -> dict:
     levels = [M._count(n, "membrane mesh") for n in levels]
+    big = max(levels)
+    check_size(f"membrane {big} x {big}", element, _cells_to_elements(element, big * big), memory_limit)
     rows, last = [], None
     pr = _progress(len(levels), "membrane", show_progress)
     for n in levels:
         pr.step(f"{n} x {n}")
-        r, sol = _attempt(run_membrane, element, variant, n)
+        r, sol = _attempt(run_membrane, element, variant, n, memory_limit=memory_limit, stage=pr)
         if r is None:
             r = {"problem": "membrane", "element": element, "variant": variant, "mesh": f"{n} x {n}", "n": n,
                  "value": None, "corner": None, "mid": None, "reference": COOK_CONVERGED["mid"],
@@ -369,14 +465,16 @@ def membrane_study(element: str, variant: str = "full", levels=(2, 4, 8, 16, 32)
 
 
 def cylinder_study(element: str, variant: str = "full", levels=(2, 4, 8, 16), nus=CYLINDER["nus"],
-                   show_progress=False) -> dict:
+                   show_progress=False, memory_limit=None) -> dict:
     levels = [M._count(n, "cylinder mesh") for n in levels]
+    big = max(levels)
+    check_size(f"cylinder {big} x {big}", element, _cells_to_elements(element, big * big), memory_limit)
     rows, last = [], None
     pr = _progress(len(levels) * len(nus), "cylinder", show_progress)
     for nu in nus:
         for n in levels:
             pr.step(f"nu {nu} {n} x {n}")
-            r, sol = _attempt(run_cylinder, element, variant, n, nu)
+            r, sol = _attempt(run_cylinder, element, variant, n, nu, memory_limit=memory_limit, stage=pr)
             if r is None:
                 r = {"problem": "cylinder", "element": element, "variant": variant, "mesh": f"{n} x {n}", "n": n,
                      "nu": nu, "value": None,
@@ -419,7 +517,7 @@ LOCKING_ASPECTS = (1, 2, 3, 5, 10, 15, 30)
 
 
 def locking_mesh_study(element: str, variant: str = "full", depths=(1, 2, 4), aspects=LOCKING_ASPECTS,
-                       accuracy: float = 0.95, show_progress=False) -> dict:
+                       accuracy: float = 0.95, show_progress=False, memory_limit=None) -> dict:
     """Tip deflection / Timoshenko beam theory against element aspect ratio (length / depth of an element)."""
     c = CANTILEVER
     slender = c["length"] / c["depth"]
@@ -431,6 +529,8 @@ def locking_mesh_study(element: str, variant: str = "full", depths=(1, 2, 4), as
     for ar in aspects:
         if not (isinstance(ar, (int, float)) and ar > 0):
             raise InputError(f"aspect ratios must be positive numbers; got {ar!r}")
+    most = max(slender * ny / ar * ny for ny in depths for ar in aspects)
+    check_size("locking-mesh", element, _cells_to_elements(element, int(math.ceil(most))), memory_limit)
     pr = _progress(len(depths) * len(aspects), "locking-mesh", show_progress)
     for ny in depths:
         for ar in aspects:
@@ -440,7 +540,8 @@ def locking_mesh_study(element: str, variant: str = "full", depths=(1, 2, 4), as
                                  f"number of elements along the length (L/h = {slender:g})")
             nx = int(round(nx))
             pr.step(f"{ny} deep, aspect {ar}")
-            r, sol = _attempt(run_cantilever, element, variant, "rectangular", "shear", 1, nx=nx, ny=ny)
+            r, sol = _attempt(run_cantilever, element, variant, "rectangular", "shear", 1, nx=nx, ny=ny,
+                              memory_limit=memory_limit, stage=pr)
             last = sol or last
             value = r["value"] if r else None
             row = {"problem": "locking-mesh", "element": element, "variant": variant,

@@ -5,7 +5,7 @@ from .. import benchmarks as B
 from .. import catalog, plotting
 from ..errors import InputError
 from ..mesh import write_vtu
-from ..output import CAUTION, check_output_file, parse_number, write_atomic
+from ..output import CAUTION, Progress, check_output_file, parse_number, write_atomic
 from .common import add_force_arg, add_output_args, output_format, print_json
 
 NAME = "bench"
@@ -38,6 +38,9 @@ def add_arguments(p) -> None:
     p.add_argument("--accuracy", default="0.95",
                    help="locking-mesh: target fraction of beam theory for the mesh advice (default 0.95)")
     p.add_argument("--plot", metavar="FILE", help="write a chart (.png, .svg, .pdf)")
+    p.add_argument("--memory-limit", metavar="GB",
+                   help=f"refuse runs whose memory estimate exceeds GB (default {B.MEMORY_LIMIT_GB:g}; the estimate "
+                        f"is {B.BYTES_PER_ENTRY:g} bytes per element-matrix entry, measured)")
     p.add_argument("--dpi", default=str(plotting.DEFAULT_DPI),
                    help=f"resolution of a .png --plot in dots per inch (default {plotting.DEFAULT_DPI})")
     p.add_argument("--table", metavar="FILE", help="write the result table (Markdown)")
@@ -78,6 +81,8 @@ def run(args) -> int:
         if getattr(args, option):
             check_output_file(getattr(args, option), f"--{option}", args.force)
     scale = float(parse_number(args.scale, "--scale"))
+    limit = B.check_memory_limit(None if args.memory_limit is None else parse_number(args.memory_limit,
+                                                                                      "--memory-limit"))
     if prob == "cantilever":
         meshes = B.CANTILEVER_MESHES if args.mesh in (None, "all") else (args.mesh,)
         for m in meshes:
@@ -85,14 +90,15 @@ def run(args) -> int:
                 raise InputError(f"--mesh {m!r} for the cantilever; allowed: {', '.join(B.CANTILEVER_MESHES)}, all")
         loads = ("shear", "extension") if args.load == "both" else (args.load,)
         refine = _int(args.refine or 1, "--refine", 1, 64)
-        res = B.cantilever_study(args.element, args.variant, meshes, loads, refine, show_progress=show)
+        res = B.cantilever_study(args.element, args.variant, meshes, loads, refine, show_progress=show,
+                                 memory_limit=limit)
     elif prob == "membrane":
         if args.mesh:
             levels = (_int(args.mesh, "--mesh"),)
         else:
             k = _int(args.refine or 5, "--refine", 1, 10)
             levels = tuple(2 ** i for i in range(1, k + 1))
-        res = B.membrane_study(args.element, args.variant, levels, show_progress=show)
+        res = B.membrane_study(args.element, args.variant, levels, show_progress=show, memory_limit=limit)
     elif prob == "cylinder":
         if args.mesh:
             levels = (_int(args.mesh, "--mesh", 1, 1024),)
@@ -100,14 +106,15 @@ def run(args) -> int:
             k = _int(args.refine or 4, "--refine", 1, 9)
             levels = tuple(2 ** i for i in range(1, k + 1))
         nus = _floats(args.nu, "--nu") if args.nu else B.CYLINDER["nus"]
-        res = B.cylinder_study(args.element, args.variant, levels, nus, show_progress=show)
+        res = B.cylinder_study(args.element, args.variant, levels, nus, show_progress=show, memory_limit=limit)
     else:
         depths = [_int(d, "--depths", 1, 64) for d in str(args.depths).split(",") if d.strip()]
         acc = float(parse_number(args.accuracy, "--accuracy"))
         variants = [v.strip() for v in args.variant.split(",") if v.strip()]
         if not variants:
             raise InputError("--variant is empty")
-        studies = [B.locking_mesh_study(args.element, v, depths, accuracy=acc, show_progress=show) for v in variants]
+        studies = [B.locking_mesh_study(args.element, v, depths, accuracy=acc, show_progress=show, memory_limit=limit)
+                   for v in variants]
         if len(studies) == 1:
             res = studies[0]
         else:
@@ -119,7 +126,9 @@ def run(args) -> int:
                    "warnings": list(dict.fromkeys(w for st in studies for w in st.get("warnings", []))),
                    "_studies": studies, **{k: studies[-1][k] for k in ("mesh", "value", "reference", "normalized")}}
     files = {}
+    writing = Progress(1, "bench", enabled=show)
     if args.plot:
+        writing.step(f"writing the plot {args.plot}")
         if res.get("_studies"):
             files["plot"] = str(B.plot_locking_comparison(res["_studies"], args.plot, dpi))
         else:
@@ -131,6 +140,7 @@ def run(args) -> int:
         if sol is None:
             raise InputError("--vtu: no run produced a solution (every mesh was a mechanism)")
         files["vtu"] = str(write_vtu(args.vtu, sol, scale))
+    writing.close()
     out = {k: v for k, v in res.items() if not k.startswith("_") and k != "lines"}
     out.setdefault("warnings", [])
     # results flagged by the mesh solve's mechanism check are marked, never plain numbers
