@@ -1,6 +1,6 @@
 """derive: derive, audit and generate finite element routines.
 
-Public contract (see README and DESIGN.md):
+Public contract (see README and notes/architecture.md):
   derive.element(name, variant="full", state="plane-stress") -> Element
   derive.locking_ratio(name, variant, state) -> sympy expression in r, nu
   derive.kernel(name, variant="full", state="plane-stress", lang="numpy") -> callable

@@ -1,7 +1,7 @@
 """The canonical sympy symbols of derive.
 
 All symbols are plain ``sympy.Symbol`` objects with no assumptions and with the exact
-names of the conventions (README, DESIGN.md), so printed output parses back with sympy
+names of the conventions (README, notes/architecture.md), so printed output parses back with sympy
 (``sympy.parse_expr(text, local_dict=derive.symbols.by_name())``) and with derive's own
 safe parser.  Do not create same-named symbols with assumptions elsewhere: sympy treats
 ``Symbol('a')`` and ``Symbol('a', positive=True)`` as different objects.
