@@ -467,8 +467,8 @@ def _candidates(target: Target, K: sp.Matrix) -> list:
         if callable(cand):
             try:
                 cand = cand()
-            except InputError:
-                continue
+            except (InputError, ValueError, ArithmeticError):
+                continue  # the mistake cannot be made here (e.g. a rule too weak for the enhanced modes)
         out.append((code, why, cand))
     return out
 

@@ -191,7 +191,7 @@ def test_hostile_files_rejected_with_exit_2(tmp_path, capsys, payload):
     t0 = time.perf_counter()
     code, data, err = run_check(tmp_path, "evil.txt", text, ["--element", "Q4"], capsys)
     assert code == 2 and "Traceback" not in err and len(err.strip().splitlines()) == 1
-    assert time.perf_counter() - t0 < 10  # bounded time (common practice, no source)
+    assert time.perf_counter() - t0 < 60  # hang guard only: speed belongs in derive perf (common practice, no source)
     assert not sentinel.exists()  # nothing executed
 
 
