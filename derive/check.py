@@ -145,6 +145,25 @@ def number_text(v: float) -> str:
     return f"{float(v):.{NUMBER_DIGITS}g}"
 
 
+def _finite_float(v) -> float | None:
+    """float(v), or None where it does not fit a float (an exact value beyond 1e308)."""
+    try:
+        f = float(v)
+    except (OverflowError, ValueError, TypeError):
+        return None
+    return f if np.isfinite(f) else None
+
+
+def _value_text(v) -> str:
+    """An exact or 50-digit value in the form of number_text, also beyond the float range."""
+    f = _finite_float(v)
+    if f is not None:
+        return number_text(f)
+    if isinstance(v, Fraction):
+        v = sp.Rational(v.numerator, v.denominator)
+    return str(sp.Float(v, NUMBER_DIGITS))
+
+
 def _detail_numeric(i: int, j: int, e: float, g: float, norm: float) -> dict:
     d = float(g) - float(e)
     return {"entry": [i, j], "expected": number_text(e), "given": number_text(g), "difference": d,
@@ -171,11 +190,10 @@ def _details_symbolic(K: sp.Matrix, entries: dict, mismatched, comparer: Compare
         for pt, ve, vg in zip(comparer.points, comparer.values(e), comparer.values(g)):
             if ve is None or vg is None or not values_differ(ve, vg):
                 continue
-            fe, fg = float(ve), float(vg)
             row["at_point"] = {"point": {k.name: str(v) for k, v in pt.items()
                                          if k in e.free_symbols | g.free_symbols},
-                               "expected": number_text(fe), "given": number_text(fg)}
-            row["relative_difference"] = (fg - fe) / abs(fe) if fe != 0 else None
+                               "expected": _value_text(ve), "given": _value_text(vg)}
+            row["relative_difference"] = _finite_float((vg - ve) / abs(ve)) if ve != 0 else None
             break
         out.append(row)
     return out
@@ -416,7 +434,10 @@ def _probe(M: sp.Matrix, comparer: Comparer) -> np.ndarray | None:
     for k in range(len(comparer.points)):
         vals = [comparer.values(M[i, j])[k] for i in range(M.rows) for j in range(M.cols)]
         if all(v is not None for v in vals):
-            return np.array([float(v) for v in vals], dtype=float).reshape(M.rows, M.cols)
+            floats = [_finite_float(v) for v in vals]
+            if any(f is None for f in floats):
+                return None  # beyond the float range: no numeric probe
+            return np.array(floats, dtype=float).reshape(M.rows, M.cols)
     return None
 
 

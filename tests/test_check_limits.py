@@ -75,6 +75,15 @@ def test_a_large_entry_equal_to_derives_is_accepted_at_the_points(tmp_path):
     assert data["match"] is True and "random rational points for 1" in data["method"]
 
 
+def test_values_beyond_the_float_range_are_reported_not_crashed(tmp_path):
+    text = "K[1,1] = ((a+b+c+E)^64+1)^14\n"  # degree 896: about 1e1400 at the sample point
+    code, out, err = derive_cli("check", _file(tmp_path, "k.txt", text), "--element", "Q4", "--json")
+    assert code == 1, err
+    data = json.loads(out, parse_constant=lambda c: pytest.fail(f"non-JSON constant {c}"))  # strict JSON
+    row = data["entries"][0]
+    assert row["relative_difference"] is None and "e+14" in row["at_point"]["given"]  # common practice, no source
+
+
 def test_an_entry_of_absurd_degree_is_refused(tmp_path):
     text = "K[1,1] = (((a+1)^64+1)^64+1)^2\n"  # degree 8192
     code, out, err = derive_cli("check", _file(tmp_path, "k.txt", text), "--element", "Q4")

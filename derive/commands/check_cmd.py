@@ -159,8 +159,9 @@ def _print_text(el, args, result, given) -> None:
 def _detail_line(row: dict) -> str:
     i, j = row["entry"]
     rel = row["relative_difference"]
-    rel_text = "n/a (expected 0)" if rel is None else f"{rel:.3g}"
+    rel_text = "n/a" if rel is None else f"{rel:.3g}"
     if isinstance(row["difference"], float):  # numeric input
+        rel_text = "n/a (expected 0)" if rel is None else rel_text
         return (f"[{i},{j}]  expected {row['expected']}   given {row['given']}   "
                 f"difference {row['difference']:.3g}   relative {rel_text}")
     text = f"[{i},{j}]  expected {row['expected']}   given {row['given']}"

@@ -111,7 +111,8 @@ Files (``load_matrix_file``): ``.npy`` (``allow_pickle=False``; 2-D integer/floa
 entries are sympy Integer/Float and ``array`` keeps the values), ``.csv`` (comma-separated
 form 1; numbers are exact rationals), ``.tex`` (LaTeX), anything else auto-detected.  Text
 with numbers only has ``syntax == "numeric"`` and a float64 ``array``.  Missing, empty,
-binary or non-UTF-8 files raise InputError.
+binary or non-UTF-8 files raise InputError, and so do a path that is a directory, FIFO,
+device or socket (said as such; never opened) and an unreadable file.
 
 Limits (constants in :mod:`derive.userinput._core`, checked before heavy work)
 -----------------------------------------------------------------------------
@@ -136,6 +137,11 @@ MAX_SECONDS                 5.0   wall-clock budget of one public call, checked 
                                   building steps (a safety net; the limits above keep
                                   ordinary and hostile inputs far below it)
 ======================  ========  ==================================================
+
+The comparison in ``derive check`` adds its own bounds (derive.check_equality,
+derive.bounded): an entry's estimated degree at most ``MAX_DEGREE`` (1000), symbolic proof
+only below ``MAX_PROOF_TERMS`` estimated terms (else equality at random exact points), and
+the comparison under a CPU-time and memory limit (``--time-limit``, ``--memory-limit``).
 
 Results that are infinite, undefined (``1/0``, ``log(0)``) or complex (``sqrt(-1)``,
 ``acos(3)``) are rejected.  Resulting powers obey the exponent limit too: ``(x^64)^64``
