@@ -235,7 +235,8 @@ class Kernel:
     def __call__(self, xy, E, nu, t=1.0, out=None, *, screen: bool = True):
         """Stiffness (n, ndof, ndof).  ``screen`` (default True) first runs the validity
         kernel and refuses inverted, bow-tie, degenerate and overflowing elements by index,
-        and refuses a non-finite K; ``screen=False`` skips both for speed."""
+        and refuses elements whose K has a non-finite diagonal; ``screen=False`` skips both
+        for speed."""
         arr = self._xy(xy)
         E, nu, t = self._material(E, nu, t)
         n = arr.shape[0]
@@ -245,7 +246,10 @@ class Kernel:
         if n:
             self._impl.stiffness(arr, E, nu, t, out)
         if n and screen:
-            bad = np.flatnonzero(~np.isfinite(out.reshape(n, -1)).all(axis=1))
+            # the diagonal only (a strided view, cheap next to the kernel): K is positive
+            # semi-definite on a valid element, |K_ij| <= sqrt(K_ii K_jj), and an overflow or
+            # NaN in the shared intermediates reaches the diagonal
+            bad = np.flatnonzero(~np.isfinite(np.diagonal(out, axis1=1, axis2=2)).all(axis=1))
             if bad.size:
                 shown = ", ".join(str(int(i)) for i in bad[:10]) + (" ..." if bad.size > 10 else "")
                 raise GeometryError(f"stiffness not finite for {bad.size} {self.element} element(s) (coordinates too "
