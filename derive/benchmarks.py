@@ -22,7 +22,7 @@ from pathlib import Path
 
 import numpy as np
 
-from . import catalog, plotting
+from . import catalog, mesh_io, plotting
 from . import mesh as M
 from .analysis import analyse
 from .errors import InputError
@@ -576,6 +576,160 @@ def locking_mesh_study(element: str, variant: str = "full", depths=(1, 2, 4), as
 
 
 # ---------------------------------------------------------------------------------------------
+# a user's own mesh (derive bench PROBLEM --mesh-file FILE)
+
+#: the problems' domains: bounding box (x0, x1, y0, y1) and area (the cylinder's quarter annulus
+#: with straight-sided elements is smaller than pi/4 (b^2 - a^2): the area check allows 2 %)
+DOMAINS = {
+    "cantilever": {"box": (0.0, CANTILEVER["length"], 0.0, CANTILEVER["depth"]),
+                   "area": CANTILEVER["length"] * CANTILEVER["depth"], "rtol": 1e-6},
+    "membrane": {"box": (0.0, 48.0, 0.0, 60.0), "area": 1440.0, "rtol": 1e-6},
+    "cylinder": {"box": (0.0, CYLINDER["outer"], 0.0, CYLINDER["outer"]),
+                 "area": math.pi / 4 * (CYLINDER["outer"] ** 2 - CYLINDER["inner"] ** 2), "rtol": 0.02},
+}
+DOMAINS["locking-mesh"] = DOMAINS["cantilever"]
+
+
+def mesh_area(mesh: M.Mesh) -> float:
+    """Area of a mesh: sum of w det J over the element's full rule."""
+    pts, wts = M.rule_points(mesh.ref.full_rule)
+    _, det, _ = M.b_matrices(mesh.element, "plane-stress", mesh.element_coords(), pts)
+    return float((det * wts[None, :]).sum())
+
+
+def check_domain(mesh: M.Mesh, problem: str) -> float:
+    """Refuse (InputError, one line) a user's mesh that is not the problem's domain; returns the
+    length scale used for the boundary tolerances."""
+    d = DOMAINS[problem]
+    x0, x1, y0, y1 = d["box"]
+    size = max(x1 - x0, y1 - y0)
+    lo, hi = mesh.nodes.min(axis=0), mesh.nodes.max(axis=0)
+    got = (lo[0], hi[0], lo[1], hi[1])
+    if any(abs(g - w) > 1e-6 * size for g, w in zip(got, d["box"])):
+        raise InputError(f"mesh {mesh.label!r} spans x {lo[0]:g}..{hi[0]:g}, y {lo[1]:g}..{hi[1]:g}; the {problem} "
+                         f"domain is x {x0:g}..{x1:g}, y {y0:g}..{y1:g} (see notes/verification.md)")
+    area = mesh_area(mesh)
+    if abs(area - d["area"]) > d["rtol"] * d["area"]:
+        raise InputError(f"mesh {mesh.label!r} covers an area of {area:.6g}; the {problem} domain has "
+                         f"{d['area']:.6g} (holes, overlaps or another shape)")
+    return size
+
+
+def _mask(mesh: M.Mesh, values, target: float, tol: float, what: str) -> np.ndarray:
+    m = np.abs(values - target) <= tol
+    if not m.any():
+        raise InputError(f"mesh {mesh.label!r}: no node on the {what}")
+    return m
+
+
+def run_on_mesh(problem: str, mesh: M.Mesh, variant: str = "full", load: str = "shear", nu: float | None = None,
+                memory_limit=None, stage=None) -> dict:
+    """One run of a benchmark problem on a user's mesh of its domain (supports, loads and output
+    points found by coordinates, as on derive's own meshes)."""
+    if problem not in DOMAINS:
+        raise InputError(f"unknown problem {problem!r}; allowed: {', '.join(DOMAINS)}")
+    check_size(f"{problem} on {mesh.label}", mesh.element, mesh.n_elements, memory_limit)
+    size = check_domain(mesh, problem)
+    tol = 1e-6 * size
+    x, y = mesh.nodes[:, 0], mesh.nodes[:, 1]
+    base = {"problem": problem, "element": mesh.element, "variant": variant, "mesh": mesh.label,
+            "elements": mesh.n_elements, "nodes": mesh.n_nodes}
+    if problem in ("cantilever", "locking-mesh"):
+        c = CANTILEVER
+        _element(mesh.element, variant, "plane-stress")
+        load = "shear" if problem == "locking-mesh" else load
+        if load not in ("shear", "extension"):
+            raise InputError(f"unknown cantilever load {load!r}; allowed: shear, extension")
+        root = _mask(mesh, x, 0.0, tol, "root x = 0")
+        tip = _mask(mesh, x, c["length"], tol, f"tip x = {c['length']:g}")
+        total = (0.0, 1.0) if load == "shear" else (1.0, 0.0)
+        f = M.uniform_edge_force(mesh, tip, total, "plane-stress", c["t"])
+        sol = analyse(mesh, f, M.fix(mesh, root, "uv"), variant, "plane-stress", c["E"], c["nu"], c["t"],
+                      stage=stage)
+        value = float(sol.U[tip, 1 if load == "shear" else 0].mean())
+        if problem == "locking-mesh":
+            ref = beam_tip_deflection(1.0, c["length"], c["depth"], c["t"], c["E"], c["nu"])
+            xy = mesh.element_coords()
+            ext = np.ptp(xy, axis=1)
+            aspect = float(np.mean(ext[:, 0] / ext[:, 1]))
+            row = {**base, "load": load, "aspect": aspect, "value": value, "reference": ref}
+        else:
+            ref = c["reference"][load]
+            row = {**base, "load": load, "value": value, "reference": ref}
+        row["normalized"] = value / ref
+    elif problem == "membrane":
+        c = COOK
+        _element(mesh.element, variant, "plane-stress")
+        clamp = _mask(mesh, x, 0.0, tol, "clamped edge x = 0")
+        edge = _mask(mesh, x, 48.0, tol, "loaded edge x = 48")
+        f = M.uniform_edge_force(mesh, edge, (0.0, c["load"]), "plane-stress", c["t"])
+        sol = analyse(mesh, f, M.fix(mesh, clamp, "uv"), variant, "plane-stress", c["E"], c["nu"], c["t"],
+                      stage=stage)
+        corner = sol.displacement_at(*c["corner"])[1]
+        mid = sol.displacement_at(*c["mid"])[1]
+        ref = COOK_CONVERGED["mid"]
+        row = {**base, "value": mid, "corner": corner, "mid": mid, "reference": ref, "normalized": mid / ref,
+               "reference_corner": COOK_CONVERGED["corner"]}
+    else:
+        c = CYLINDER
+        nu = 0.3 if nu is None else float(nu)
+        _element(mesh.element, variant, "plane-strain")
+        r = np.hypot(x, y)
+        bore = _mask(mesh, r, c["inner"], tol, f"bore r = {c['inner']:g}")
+        f = M.pressure_load(mesh, bore, c["p"], "plane-strain", c["t"])
+        fixed = {**M.fix(mesh, _mask(mesh, y, 0.0, tol, "symmetry edge y = 0"), "v"),
+                 **M.fix(mesh, _mask(mesh, x, 0.0, tol, "symmetry edge x = 0"), "u")}
+        sol = analyse(mesh, f, fixed, variant, "plane-strain", c["E"], nu, c["t"], stage=stage)
+        P = mesh.nodes[bore]
+        ur = (sol.U[bore, 0] * P[:, 0] + sol.U[bore, 1] * P[:, 1]) / np.hypot(P[:, 0], P[:, 1])
+        value = float(ur.mean())
+        ref = lame_bore(c["p"], c["inner"], c["outer"], c["E"], nu)
+        row = {**base, "nu": nu, "value": value, "reference": ref, "normalized": value / ref,
+               "error": value / ref - 1.0}
+    return {**row, **_warn(sol), "_solution": sol}
+
+
+def mesh_file_study(problem: str, mesh: M.Mesh, variant: str = "full", loads=("shear", "extension"), nus=None,
+                    show_progress=False, memory_limit=None) -> dict:
+    """The rows of a problem on one user mesh (cantilever: each load; cylinder: each nu)."""
+    if problem == "cantilever":
+        cases = [{"load": load} for load in loads]
+    elif problem == "cylinder":
+        cases = [{"nu": nu} for nu in (nus or CYLINDER["nus"])]
+    else:
+        cases = [{}]
+    pr = _progress(len(cases), problem, show_progress)
+    rows, last = [], None
+    for case in cases:
+        pr.step(f"{mesh.label} {' '.join(f'{k} {v}' for k, v in case.items())}")
+        r, sol = _attempt(run_on_mesh, problem, mesh, variant, memory_limit=memory_limit, stage=pr, **case)
+        if r is None:
+            r = {"problem": problem, "element": mesh.element, "variant": variant, "mesh": mesh.label, **case,
+                 "value": None, "reference": None, "normalized": None, "reliable": False, "note": MECHANISM}
+        last = sol or last
+        rows.append(r)
+    pr.close()
+    lines = [f"{problem} on the mesh file {mesh.label}: {mesh.element} {variant}, {mesh.n_elements} elements, "
+             f"{mesh.n_nodes} nodes (domain, supports and loads as on derive's own meshes, notes/verification.md)"]
+    for r in rows:
+        case = " ".join(f"{k} {r[k]}" for k in ("load", "nu") if k in r)
+        extra = ""
+        if problem == "membrane" and r.get("corner") is not None:
+            extra = f"  corner {r['corner']:.5f}"
+        if problem == "locking-mesh" and r.get("aspect") is not None:
+            extra = f"  mean element aspect ratio {r['aspect']:.3g}"
+        ref = f"{r['reference']:.6g}" if r.get("reference") is not None else "-"
+        lines.append(f"{case or problem:<16} value {_marked(r, 'value', '.6g')}  reference {ref}  normalized "
+                     f"{_marked(r, 'normalized', '.4f')}{extra}")
+    if problem == "membrane":
+        lines.append(f"reference: {COOK_CONVERGED_METHOD}; problem: {COOK_SOURCE}")
+    lines += _warning_lines(rows)
+    return {"problem": problem, "element": mesh.element, "variant": variant, "mesh_file": mesh.label,
+            "results": rows, "lines": lines, "warnings": study_warnings(rows), **_headline(rows[0]),
+            "_solution": last}
+
+
+# ---------------------------------------------------------------------------------------------
 # plots and tables
 
 def plot_format(path) -> str:
@@ -640,8 +794,9 @@ def plot_study(study: dict, path, dpi: int = plotting.DEFAULT_DPI) -> Path:
 def study_figure(study: dict):
     """Chart of a study: membrane/cylinder convergence (value and log-log error), cantilever bars,
     locking-mesh normalized deflection against aspect ratio."""
-    prob = study["problem"]
-    title = f"{prob}: {study['element']} {study['variant']}"
+    prob = "bars" if study.get("mesh_file") else study["problem"]
+    title = f"{study['problem']}: {study['element']} {study['variant']}" + \
+        (f" on {study['mesh_file']}" if study.get("mesh_file") else "")
     notes = []
     if prob == "membrane":
         fig = plotting.figure(11, 4.6)
@@ -707,10 +862,11 @@ def study_figure(study: dict):
     else:
         fig = plotting.figure(7.5, 4.6)
         ax = fig.add_subplot()
-        labels = [f"{r['mesh']}\n{r['load']}" for r in study["results"]]
+        labels = [f"{r['mesh']}\n{r['load'] if 'load' in r else ('nu ' + str(r['nu']) if 'nu' in r else '')}"
+                  for r in study["results"]]
         ax.bar(range(len(labels)), [_v(r["normalized"]) for r in study["results"]], color="0.55",
                label="value / reference")
-        ax.axhline(1.0, ls=":", color="grey", label="reference (MacNeal & Harder 1985)")
+        ax.axhline(1.0, ls=":", color="grey", label=_REFERENCE_LABELS.get(study["problem"], "reference"))
         ax.set_xticks(range(len(labels)))
         ax.set_xticklabels(labels, fontsize=8)
         ax.set_ylabel("value / reference")
@@ -718,6 +874,11 @@ def study_figure(study: dict):
         _legend(ax)
     plotting.set_note(fig, "; ".join(n for n in notes if n) or None)
     return fig
+
+
+_REFERENCE_LABELS = {"cantilever": "reference (MacNeal & Harder 1985)",
+                     "membrane": "derive's converged mid-edge value", "cylinder": "Lamé solution",
+                     "locking-mesh": "Timoshenko beam theory"}
 
 
 def _locking_mesh_axes(ax, study: dict) -> str:
@@ -835,7 +996,7 @@ def demo_section(outdir: Path) -> dict:
     fig = tb3_figure(rows, cands, beam, meshes)
     files.append(plotting.save(fig, outdir / "tb3-mesh-study.png").name)
     if last is not None:
-        files.append(M.write_vtu(outdir / "tb3-q8-48x8.vtu", last, scale=100.0).name)
+        files.append(mesh_io.write_vtu(outdir / "tb3-q8-48x8.vtu", last).name)
     for el, var in cands:
         res = patch_test(el, var)
         lines.append(f"patch test {el} {var}: {'passed' if res['passed'] else 'FAILED'} "

@@ -1,4 +1,4 @@
-"""Meshes of catalogue elements: generation, sparse assembly, loads, supports, solve, stresses, VTK export.
+"""Meshes of catalogue elements: generation, sparse assembly, loads, supports, solve, stresses.
 
 What is here
   * :class:`Mesh`: nodal coordinates (N, 2), connectivity (n_elements, nodes per element) in
@@ -28,8 +28,8 @@ What is here
     that survive the supports, near-mechanisms; run by :func:`derive.analysis.analyse`, which
     also warns when the element variant has spurious zero-energy modes),
     stresses at the rule's points (:meth:`Solution.point_stresses`) and averaged at the
-    nodes (:meth:`Solution.nodal_stresses`), and VTK XML ``.vtu`` export of the deformed
-    mesh (:func:`write_vtu`).
+    nodes (:meth:`Solution.nodal_stresses`); mesh files (VTU out, a user's mesh in) are
+    :mod:`derive.mesh_io`.
 
 Stresses are D times the strain the formulation works with, at the element's full rule
 points (or a rule you name): when the formulation declares a recovery operator
@@ -41,7 +41,6 @@ from __future__ import annotations
 
 import math
 import time
-import xml.sax.saxutils as _xml
 from dataclasses import dataclass, field
 from functools import lru_cache
 from typing import Callable, Sequence
@@ -55,7 +54,6 @@ from . import catalog, quadrature
 from .errors import GeometryError, InputError
 from .material import D as D_matrix
 from .material import check_material
-from .output import write_atomic
 from .problems import COOK
 from .symbols import eta, xi
 
@@ -1099,72 +1097,6 @@ def von_mises(sig: np.ndarray, state: str, nu: float) -> np.ndarray:
     sx, sy, txy = sig[..., 0], sig[..., 1], sig[..., 2]
     sz = nu * (sx + sy) if state == "plane-strain" else 0.0 * sx
     return np.sqrt(0.5 * ((sx - sy) ** 2 + (sy - sz) ** 2 + (sz - sx) ** 2) + 3 * txy ** 2)
-
-
-# ---------------------------------------------------------------------------------------------
-# VTK export
-
-# VTK cell types: triangle 5, quad 9, quadratic triangle 22, quadratic quad 23, biquadratic quad 28
-_VTK_TYPES = {"T3": 5, "Q4": 9, "T6": 22, "Q8": 23, "Q9": 28}
-
-
-def vtu_text(sol: Solution, scale: float = 1.0) -> str:
-    """VTK XML UnstructuredGrid (ASCII) of the deformed mesh (points x + scale u), with the
-    displacement and averaged nodal stresses as point data and element-mean stresses as cell data."""
-    mesh = sol.mesh
-    ref = mesh.ref
-    ctype = _VTK_TYPES.get(mesh.element)
-    conn = mesh.conn
-    if ctype is None:  # other elements: their corner polygon
-        ctype = 5 if ref.n_corners == 3 else 9
-        conn = conn[:, :ref.n_corners]
-    pts = mesh.nodes + scale * sol.U
-    nod = sol.nodal_stresses()
-    _, sp_ = sol.point_stresses()
-    cell = sp_.mean(axis=1)
-    names = ["sigma_rr", "sigma_zz", "sigma_tt", "tau_rz"] if sol.state == "axisymmetric" else \
-        ["sigma_xx", "sigma_yy", "tau_xy"]
-
-    def arr(a, fmt="{:.9g}"):
-        return " ".join(fmt.format(v) for v in np.asarray(a).ravel())
-
-    n_pts, n_cells = len(pts), len(conn)
-    offsets = np.cumsum(np.full(n_cells, conn.shape[1]))
-    p3 = np.column_stack([pts, np.zeros(n_pts)])
-    d3 = np.column_stack([sol.U, np.zeros(n_pts)])
-    lines = ['<?xml version="1.0"?>',
-             '<VTKFile type="UnstructuredGrid" version="0.1" byte_order="LittleEndian">',
-             '  <UnstructuredGrid>',
-             f'    <Piece NumberOfPoints="{n_pts}" NumberOfCells="{n_cells}">',
-             '      <PointData Vectors="displacement">',
-             f'        <DataArray type="Float64" Name="displacement" NumberOfComponents="3" format="ascii">{arr(d3)}</DataArray>']
-    for k, nm in enumerate(names):
-        lines.append(f'        <DataArray type="Float64" Name="{nm}" format="ascii">{arr(nod[:, k])}</DataArray>')
-    lines.append(f'        <DataArray type="Float64" Name="von_mises" format="ascii">'
-                 f'{arr(von_mises(nod, sol.state, sol.nu))}</DataArray>')
-    lines.append('      </PointData>')
-    lines.append('      <CellData>')
-    for k, nm in enumerate(names):
-        lines.append(f'        <DataArray type="Float64" Name="{nm}_mean" format="ascii">{arr(cell[:, k])}</DataArray>')
-    lines += ['      </CellData>',
-              '      <Points>',
-              f'        <DataArray type="Float64" NumberOfComponents="3" format="ascii">{arr(p3)}</DataArray>',
-              '      </Points>',
-              '      <Cells>',
-              f'        <DataArray type="Int64" Name="connectivity" format="ascii">{arr(conn, "{:d}")}</DataArray>',
-              f'        <DataArray type="Int64" Name="offsets" format="ascii">{arr(offsets, "{:d}")}</DataArray>',
-              f'        <DataArray type="UInt8" Name="types" format="ascii">{arr(np.full(n_cells, ctype), "{:d}")}</DataArray>',
-              '      </Cells>',
-              '    </Piece>',
-              '  </UnstructuredGrid>',
-              f'  <!-- {_xml.escape(f"derive mesh: {mesh.element} {sol.variant} {sol.state}, deformation scale {scale:g}")} -->',
-              '</VTKFile>', '']
-    return "\n".join(lines)
-
-
-def write_vtu(path, sol: Solution, scale: float = 1.0):
-    """Write the deformed mesh as a .vtu file (atomically)."""
-    return write_atomic(path, vtu_text(sol, scale))
 
 
 # ---------------------------------------------------------------------------------------------

@@ -137,6 +137,47 @@ def mesh_check(name: str, variant: str, state: str = "plane-stress", E: float = 
 
 
 # ---------------------------------------------------------------------------------------------
+# a whole mesh (derive modes ELEMENT --mesh-file FILE)
+
+#: largest number of DOFs of an assembled mesh whose zero-energy modes are computed (dense
+#: eigen-solver: 3000 DOFs take about 10 s and 70 MB on the 2-core machine)
+MESH_MODES_MAX_DOFS = 3000
+
+
+def mesh_zero_energy_modes(mesh: M.Mesh, variant: str = "full", state: str = "plane-stress", E: float = 1.0,
+                           nu: float = 0.3, tol: float = 1e-8) -> dict:
+    """Zero-energy modes of a whole free-free mesh (e.g. a user's mesh file): eigenvalues of the
+    assembled stiffness below ``tol`` times the largest, beyond the rigid-body count, are
+    spurious global modes (hourglassing that this mesh does not suppress)."""
+    if not (0 < tol < 1):
+        raise InputError(f"--tol {tol:g}: give a number between 0 and 1 (exclusive), e.g. 1e-8")
+    if mesh.ndof > MESH_MODES_MAX_DOFS:
+        raise InputError(f"mesh {mesh.label!r} has {mesh.ndof} DOFs; zero-energy modes of an assembled mesh are "
+                         f"computed up to {MESH_MODES_MAX_DOFS} DOFs (dense eigen-solver); use a coarser mesh")
+    K = M.assemble(mesh, variant, state, E, nu, 1.0).K.toarray()
+    K = 0.5 * (K + K.T)
+    w, _, zero = _null_space(K, tol)
+    rigid = 1 if state == "axisymmetric" else 3
+    n_zero = int(zero.sum())
+    big = float(np.abs(w).max())
+    return {"element": mesh.element, "variant": variant, "state": state, "mesh_file": mesh.label,
+            "elements": mesh.n_elements, "nodes": mesh.n_nodes, "dofs": mesh.ndof, "nu": nu, "tolerance": tol,
+            "zero_energy": n_zero, "rigid": rigid, "spurious": max(n_zero - rigid, 0),
+            "lowest_eigenvalues_over_max": [float(v / big) for v in np.sort(np.abs(w))[:min(len(w), n_zero + 3)]]}
+
+
+def mesh_summary_lines(result: dict) -> list[str]:
+    lines = [f"{result['mesh_file']}: {result['elements']} {result['element']} {result['variant']} elements "
+             f"({result['state']}), {result['dofs']} DOFs, free-free: {result['zero_energy']} zero-energy modes, "
+             f"{result['rigid']} rigid-body, {result['spurious']} spurious"]
+    lines.append("smallest eigenvalues / largest: " + ", ".join(f"{v:.2e}" for v in result["lowest_eigenvalues_over_max"]))
+    if result["spurious"]:
+        lines.append(f"WARNING: {result['spurious']} spurious mode(s) survive assembly of this mesh: they can be "
+                     "excited by the loads (hourglassing); use another variant or suppress them with supports")
+    return lines
+
+
+# ---------------------------------------------------------------------------------------------
 # plot
 
 def _outline_lines(name: str, n: int = 24):

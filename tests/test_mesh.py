@@ -1,8 +1,7 @@
-"""derive.mesh: generation, assembly against a hand-assembled model, loads, supports, solve, stresses, VTU."""
+"""derive.mesh: generation, assembly against a hand-assembled model, loads, supports, solve, stresses (VTU: test_mesh_io.py)."""
 from __future__ import annotations
 
 import math
-import xml.etree.ElementTree as ET
 
 import numpy as np
 import pytest
@@ -175,24 +174,6 @@ def test_point_evaluation_and_corner_lifting():
     assert math.isclose(u, 1 + 2.6 - 0.7, rel_tol=1e-12) and math.isclose(v, 2.1, rel_tol=1e-12)
     with pytest.raises(InputError):
         sol.displacement_at(5.0, 5.0)
-
-
-def test_vtu_export(tmp_path):
-    for name, ctype in (("Q8", 23), ("T3", 5)):
-        m = M.structured(name, 3, 2, ((0, 0), (3, 0), (3, 1), (0, 1)))
-        sol = A.analyse(m, M.uniform_edge_force(m, "right", (1.0, 0.0)), M.fix(m, "left"), "full",
-                        "plane-stress", 100.0, 0.3)
-        path = M.write_vtu(tmp_path / f"{name}.vtu", sol, scale=2.0)
-        root = ET.parse(path).getroot()
-        piece = root.find("UnstructuredGrid/Piece")
-        assert int(piece.get("NumberOfPoints")) == m.n_nodes and int(piece.get("NumberOfCells")) == m.n_elements
-        types = piece.find("Cells/DataArray[@Name='types']").text.split()
-        assert set(types) == {str(ctype)}          # VTK file-format cell type numbers (VTK documentation)
-        pts = np.array(piece.find("Points/DataArray").text.split(), float).reshape(-1, 3)
-        # written with 9 significant digits ("{:.9g}"), so 1e-8 relative (common practice)
-        assert_allclose(pts[:, :2], m.nodes + 2.0 * sol.U, rtol=1e-8, atol=1e-12)
-        names = {d.get("Name") for d in piece.iter("DataArray")}
-        assert {"displacement", "sigma_xx", "von_mises"} <= names
 
 
 def test_provider_prefers_kernel(monkeypatch):

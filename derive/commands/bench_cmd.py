@@ -4,7 +4,7 @@ from __future__ import annotations
 from .. import benchmarks as B
 from .. import catalog, plotting
 from ..errors import InputError
-from ..mesh import write_vtu
+from ..mesh_io import write_vtu
 from ..output import CAUTION, Progress, check_output_file, parse_number, write_atomic
 from .common import add_force_arg, add_output_args, output_format, print_json
 
@@ -17,7 +17,8 @@ EXAMPLE = ("examples:\n"
            "  derive bench membrane --element Q4 --mesh 16 --vtu membrane-16.vtu\n"
            "  derive bench cylinder --element Q4 --variant bbar --nu 0.49,0.4999 --json\n"
            "  derive bench locking-mesh --element Q4 --plot locking-mesh.png --accuracy 0.9\n"
-           "  derive bench locking-mesh --element Q4 --variant full,incompatible-centred,eas4 --plot cmp.png")
+           "  derive bench locking-mesh --element Q4 --variant full,incompatible-centred,eas4 --plot cmp.png\n"
+           "  derive bench membrane --element Q8 --mesh-file my-panel.vtu --vtu result.vtu")
 
 
 def add_arguments(p) -> None:
@@ -27,6 +28,11 @@ def add_arguments(p) -> None:
     p.add_argument("--variant", default="full",
                    help="formulation variant (default: full); see `derive list`; locking-mesh accepts a "
                         "comma-separated list to compare variants on one chart")
+    p.add_argument("--mesh-file", metavar="FILE",
+                   help="run the problem on your own mesh of its domain instead of derive's meshes: a file "
+                        "meshio reads (.vtu, .xdmf), one cell type matching --element (triangle, triangle6, quad, "
+                        "quad8, quad9 for T3, T6, Q4, Q8, Q9); supports, loads and output points are found by "
+                        "coordinates (domains in notes/verification.md)")
     p.add_argument("--mesh", help="cantilever: rectangular, trapezoidal, parallelogram or all (default all); "
                                   "membrane / cylinder: N for a single N x N mesh instead of a refinement study")
     p.add_argument("--refine", help="cantilever: subdivide each of the 6 cells N x N (default 1); membrane / cylinder: "
@@ -44,8 +50,11 @@ def add_arguments(p) -> None:
     p.add_argument("--dpi", default=str(plotting.DEFAULT_DPI),
                    help=f"resolution of a .png --plot in dots per inch (default {plotting.DEFAULT_DPI})")
     p.add_argument("--table", metavar="FILE", help="write the result table (Markdown)")
-    p.add_argument("--vtu", metavar="FILE", help="write the deformed mesh of the (finest) run as VTK .vtu")
-    p.add_argument("--scale", default="1", help="deformation scale for --vtu (default 1)")
+    p.add_argument("--vtu", metavar="FILE",
+                   help="write the (finest) run as VTK .vtu: undeformed mesh, displacement and stresses as data")
+    p.add_argument("--scale", default="1",
+                   help="warp factor to use in the viewer for --vtu (printed with the file name; default 1); the "
+                        "file holds the undeformed mesh and the displacement")
     add_force_arg(p, "replace existing --plot / --table / --vtu files (their folders must exist)")
     add_output_args(p, formats=False)
 
@@ -83,7 +92,17 @@ def run(args) -> int:
     scale = float(parse_number(args.scale, "--scale"))
     limit = B.check_memory_limit(None if args.memory_limit is None else parse_number(args.memory_limit,
                                                                                       "--memory-limit"))
-    if prob == "cantilever":
+    if args.mesh_file:
+        if args.mesh or args.refine:
+            raise InputError("--mesh-file replaces --mesh and --refine; give one or the other")
+        from ..mesh_io import read_mesh
+        user_mesh = read_mesh(args.mesh_file, args.element)
+        loads = ("shear", "extension") if args.load == "both" else (args.load,)
+        nus = _floats(args.nu, "--nu") if args.nu else None
+        if "," in args.variant:
+            raise InputError("--mesh-file runs one variant; give --variant without a list")
+        res = B.mesh_file_study(prob, user_mesh, args.variant, loads, nus, show_progress=show, memory_limit=limit)
+    elif prob == "cantilever":
         meshes = B.CANTILEVER_MESHES if args.mesh in (None, "all") else (args.mesh,)
         for m in meshes:
             if m not in B.CANTILEVER_MESHES:
@@ -139,7 +158,7 @@ def run(args) -> int:
         sol = res.get("_solution")
         if sol is None:
             raise InputError("--vtu: no run produced a solution (every mesh was a mechanism)")
-        files["vtu"] = str(write_vtu(args.vtu, sol, scale))
+        files["vtu"] = str(write_vtu(args.vtu, sol))
     writing.close()
     out = {k: v for k, v in res.items() if not k.startswith("_") and k != "lines"}
     out.setdefault("warnings", [])
@@ -152,6 +171,8 @@ def run(args) -> int:
     for line in res["lines"]:
         print(line)
     for kind, path in files.items():
-        print(f"{kind} written to {path}")
+        how = (f" (undeformed mesh with the point data 'displacement': warp by it, factor {scale:g}, to see the "
+               "deformed shape)") if kind == "vtu" else ""
+        print(f"{kind} written to {path}{how}")
     print(CAUTION)
     return 0
