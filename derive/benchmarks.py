@@ -27,6 +27,7 @@ from . import mesh as M
 from .analysis import analyse
 from .errors import InputError
 from .output import CAUTION, Progress, write_atomic
+from .output import fmt as number
 from .problems import CANTILEVER, COOK, COOK_CONVERGED, COOK_CONVERGED_METHOD, COOK_SOURCE, CYLINDER
 
 PROBLEMS = ("cantilever", "membrane", "cylinder", "locking-mesh")
@@ -258,8 +259,8 @@ def _marked(r: dict, key: str, fmt: str) -> str:
     if v is None:
         return MECHANISM
     if r.get("reliable") is False:
-        return f"{format(v, fmt)} {UNRELIABLE}"
-    return format(v, fmt)
+        return f"{number(v, fmt)} {UNRELIABLE}"
+    return number(v, fmt)
 
 
 def run_cantilever(element: str, variant: str = "full", kind: str = "rectangular", load: str = "shear",
@@ -389,7 +390,7 @@ def cantilever_study(element: str, variant: str = "full", meshes=CANTILEVER_MESH
              "value = mean tip displacement along the load"]
     for r in rows:
         lines.append(f"{r['mesh']:<13} {r['load']:<9} value {_marked(r, 'value', '.6g')}  reference "
-                     f"{r['reference']:.6g}  normalized {_marked(r, 'normalized', '.4f')}")
+                     f"{number(r['reference'], '.6g')}  normalized {_marked(r, 'normalized', '.4f')}")
     lines += _warning_lines(rows)
     return {"problem": "cantilever", "element": element, "variant": variant, "results": rows, "lines": lines,
             "warnings": study_warnings(rows), **_headline(rows[0]), "_solution": last}
@@ -442,16 +443,17 @@ def membrane_study(element: str, variant: str = "full", levels=(2, 4, 8, 16, 32)
         if r["mid"] is None:
             lines.append(f"{r['mesh']:>9} {MECHANISM}")
         else:
-            lines.append(f"{r['mesh']:>9} {r['corner']:11.5f} {r['mid']:11.5f}"
+            lines.append(f"{r['mesh']:>9} {number(r['corner'], '11.5f'):>11} {number(r['mid'], '11.5f'):>11}"
                          + (f"  {UNRELIABLE}" if r.get("reliable") is False else ""))
     for key, e in extrap.items():
         if e["order"] is not None:
-            lines.append(f"Richardson ({key}, last three levels): {e['value']:.4f}, observed order {e['order']:.2f}")
+            lines.append(f"Richardson ({key}, last three levels): {number(e['value'], '.4f')}, observed order "
+                         f"{number(e['order'], '.2f')}")
         else:
             lines.append(f"Richardson ({key}): {e['note']}")
     for key, sl in rates.items():
         if sl is not None:
-            lines.append(f"convergence rate ({key}): error ~ h^{sl:.2f} against {refs[key]:.4f}")
+            lines.append(f"convergence rate ({key}): error ~ h^{number(sl, '.2f')} against {number(refs[key], '.4f')}")
     lines.append(f"reference values: corner {COOK_CONVERGED['corner']}, mid-edge {COOK_CONVERGED['mid']} = "
                  f"{COOK_CONVERGED_METHOD}")
     lines.append(f"problem, load and the mid-edge output point (48, 52): {COOK_SOURCE}; the mid-edge value usually "
@@ -497,7 +499,7 @@ def cylinder_study(element: str, variant: str = "full", levels=(2, 4, 8, 16), nu
                      (f"   h^{rate:.2f}" if rate is not None else ""))
     flagged = [r for r in rows if r.get("reliable") is False and r["normalized"] is not None]
     if flagged:
-        vals = ", ".join(f"{r['mesh']} nu {r['nu']}: {r['normalized']:.4g}" for r in flagged)
+        vals = ", ".join(f"{r['mesh']} nu {r['nu']}: {number(r['normalized'], '.4g')}" for r in flagged)
         lines.append(f"unreliable: the mesh solve found a spurious mode or near-mechanism; the values ({vals}) "
                      "are not results")
     lines += _warning_lines(rows)
@@ -510,7 +512,7 @@ def _cyl_cell(r: dict) -> str:
         return f"{'mechanism':>10}"
     if r.get("reliable") is False:
         return f"{'unreliable':>10}"
-    return f"{r['normalized']:10.4f}"
+    return f"{number(r['normalized'], '10.4f'):>10}"
 
 
 LOCKING_ASPECTS = (1, 2, 3, 5, 10, 15, 30)

@@ -17,6 +17,7 @@ import numpy as np
 
 from . import mesh as M
 from .errors import InputError
+from .output import fmt
 from .kinematics import rigid_body_modes
 
 GEOMETRIES = ("square", "rectangle", "parallelogram", "distorted")
@@ -250,7 +251,7 @@ def summary_lines(result: dict) -> list[str]:
              f"{result['zero_energy']} zero-energy modes: {result['rigid']} rigid-body, {result['spurious']} spurious"]
     nz = sorted(abs(v) for v in result["eigenvalues"])
     big = max(nz)
-    lines.append("smallest eigenvalues / largest: " + ", ".join(f"{v / big:.2e}" for v in nz[:min(len(nz), 8)]))
+    lines.append("smallest eigenvalues / largest: " + ", ".join(fmt(v / big, ".2e") for v in nz[:min(len(nz), 8)]))
     if result["spurious"]:
         mc = result["mesh_check"]
         for m in mc["meshes"]:

@@ -1,6 +1,7 @@
 """Rendering of derived objects (text, LaTeX, JSON), numeric substitution and atomic writes."""
 from __future__ import annotations
 
+import contextvars
 import json
 import math
 import os
@@ -290,6 +291,30 @@ def check_digits(n) -> int:
     if not 1 <= v <= MAX_DIGITS:
         raise InputError(f"--digits must be between 1 and {MAX_DIGITS}; got {v}")
     return v
+
+
+_DIGITS: contextvars.ContextVar[int | None] = contextvars.ContextVar("derive_digits", default=None)
+
+
+@contextmanager
+def digits_override(n: int | None):
+    """Within the block, :func:`fmt` prints every number with ``n`` significant digits (the
+    CLI's ``--digits``); ``None`` keeps each caller's own format."""
+    token = _DIGITS.set(n)
+    try:
+        yield
+    finally:
+        _DIGITS.reset(token)
+
+
+def fmt(v, spec: str) -> str:
+    """``format(v, spec)`` unless a ``--digits`` override is active (then ``.{n}g``), so the
+    report lines built in the library honour the option without knowing about it."""
+    n = _DIGITS.get()
+    try:
+        return format(float(v), f".{n}g") if n is not None else format(v, spec)
+    except (TypeError, ValueError):
+        return format(v, spec)
 
 
 def num(v, digits: int = DEFAULT_DIGITS) -> str:

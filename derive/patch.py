@@ -31,6 +31,7 @@ from . import catalog
 from . import mesh as M
 from .analysis import analyse
 from .errors import InputError
+from .output import fmt
 
 PATCH_CORNERS = ((0.0, 0.0), (0.24, 0.0), (0.24, 0.12), (0.0, 0.12))
 PATCH_INTERIOR = ((0.04, 0.02), (0.18, 0.03), (0.16, 0.08), (0.08, 0.08))
@@ -193,7 +194,7 @@ def patch_test(element: str, variant: str = "full", state: str = "plane-stress",
 
 
 def summary_lines(res: dict) -> list[str]:
-    err = "n/a" if res["max_error"] is None else f"{res['max_error']:.2e}"
+    err = "n/a" if res["max_error"] is None else fmt(res["max_error"], ".2e")
     lines = [f"{res['element']} {res['variant']} ({res['state']}): patch tests {'PASSED' if res['passed'] else 'FAILED'}"
              f", largest relative error {err}" + (" (a supported patch is a mechanism)" if res.get("mechanism") else "")]
     for t in res["tests"]:
@@ -201,9 +202,9 @@ def summary_lines(res: dict) -> list[str]:
             lines.append(f"  {t['patch']:<9} {t['order']:<8} {t['form'] + '-driven':<19} FAIL  {t['note']}")
             continue
         s = (f"  {t['patch']:<9} {t['order']:<8} {t['form'] + '-driven':<19} {'pass' if t['passed'] else 'FAIL'}  "
-             f"displacements {t['displacement_error']:.1e}  stresses {t['stress_error']:.1e}")
+             f"displacements {fmt(t['displacement_error'], '.1e')}  stresses {fmt(t['stress_error'], '.1e')}")
         if "stress_mean" in t:
             sx, sy, txy = t["stress_mean"]
-            s += f"  (mean sigma_x {sx:.2f}, sigma_y {sy:.2f}, tau_xy {txy:.2f})"
+            s += f"  (mean sigma_x {fmt(sx, '.2f')}, sigma_y {fmt(sy, '.2f')}, tau_xy {fmt(txy, '.2f')})"
         lines.append(s)
     return lines

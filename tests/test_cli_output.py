@@ -387,3 +387,21 @@ def test_samples_are_copied_and_never_overwritten_without_force(tmp_path, monkey
     assert code == 0 and Path("my-k.txt").read_text().startswith("# My hand derivation")
     code, _, err = run(["samples", "-o", "nowhere"], capsys)
     assert code == 2 and "does not exist" in err
+
+
+def test_digits_reach_the_library_reports(capsys):
+    code, out, _ = run(["patch", "Q4", "--digits", "3"], capsys)
+    # the published patch stresses sigma_x = sigma_y = 1333.33, tau_xy = 400 (MacNeal & Harder 1985, from memory)
+    assert code == 0 and "sigma_x 1.33e+03" in out and "tau_xy 400)" in out
+    code, out, _ = run(["patch", "Q4"], capsys)
+    assert "sigma_x 1333.33" in out                     # without --digits each report keeps its own format
+    code, out, _ = run(["modes", "Q4", "--variant", "reduced", "--digits", "2"], capsys)
+    assert code == 0 and ", 1\n" in out                  # the largest eigenvalue over itself: 1
+    code, _, err = run(["bench", "cantilever", "--digits", "99"], capsys)
+    assert code == 2 and "--digits" in err
+
+
+def test_rule_is_refused_where_it_cannot_apply(capsys):
+    for what in ("B", "D"):
+        code, out, err = run(["stiffness", "Q4", "--what", what, "--rule", "gauss-1x1"], capsys)
+        assert code == 2 and out == "" and "--rule applies to K only" in err

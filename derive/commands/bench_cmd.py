@@ -5,8 +5,8 @@ from .. import benchmarks as B
 from .. import catalog, plotting
 from ..errors import InputError
 from ..mesh_io import write_vtu
-from ..output import CAUTION, Progress, check_output_file, parse_number, write_atomic
-from .common import add_force_arg, add_output_args, output_format, print_json
+from ..output import CAUTION, Progress, check_digits, check_output_file, digits_override, parse_number, write_atomic
+from .common import add_digits_arg, add_force_arg, add_output_args, output_format, print_json
 
 NAME = "bench"
 HELP = "benchmark meshes: cantilever, membrane (tapered panel), thick cylinder, locking-mesh chart"
@@ -57,6 +57,7 @@ def add_arguments(p) -> None:
                         "file holds the undeformed mesh and the displacement")
     add_force_arg(p, "replace existing --plot / --table / --vtu files (their folders must exist)")
     add_output_args(p, formats=False)
+    add_digits_arg(p, default=None)
 
 
 def _int(text, what, low=1, high=4096):
@@ -80,6 +81,11 @@ def _floats(text, what):
 
 
 def run(args) -> int:
+    with digits_override(check_digits(args.digits) if args.digits else None):   # the report lines honour --digits
+        return _run(args)
+
+
+def _run(args) -> int:
     quiet = output_format(args) == "json"
     show = False if quiet else None
     prob = args.problem

@@ -61,7 +61,9 @@ def add_force_arg(p: argparse.ArgumentParser, what: str = "replace an existing o
     p.add_argument("--force", action="store_true", help=what)
 
 
-def add_digits_arg(p: argparse.ArgumentParser) -> None:
-    """``--digits N``: significant digits of the numbers in text output (default 7)."""
-    p.add_argument("--digits", default=str(DEFAULT_DIGITS),
-                   help=f"significant digits of numbers in text output (default {DEFAULT_DIGITS}, 1 to 17)")
+def add_digits_arg(p: argparse.ArgumentParser, default: int | None = DEFAULT_DIGITS) -> None:
+    """``--digits N``: significant digits of the numbers in text output.  ``default=None``: each
+    number keeps the report's own format unless the option is given."""
+    p.add_argument("--digits", default=None if default is None else str(default),
+                   help="significant digits of numbers in text output (1 to 17; default "
+                        + (f"{default})" if default is not None else "each report's own format)"))

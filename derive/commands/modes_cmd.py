@@ -4,8 +4,8 @@ from __future__ import annotations
 from .. import catalog, plotting
 from ..errors import InputError
 from ..modes import GEOMETRIES, plot_modes, summary_lines, zero_energy_modes
-from ..output import CAUTION, check_output_file, parse_number, working
-from .common import add_force_arg, add_output_args, output_format, print_json
+from ..output import CAUTION, check_digits, check_output_file, digits_override, parse_number, working
+from .common import add_digits_arg, add_force_arg, add_output_args, output_format, print_json
 from .stiffness_cmd import parse_nodes
 
 NAME = "modes"
@@ -37,6 +37,7 @@ def add_arguments(p) -> None:
                    help=f"resolution of a .png --plot in dots per inch (default {plotting.DEFAULT_DPI})")
     add_force_arg(p, "replace an existing --plot file (its folder must exist)")
     add_output_args(p, formats=False)
+    add_digits_arg(p, default=None)
 
 
 def run(args) -> int:
@@ -59,7 +60,9 @@ def run(args) -> int:
     if output_format(args) == "json":
         print_json({**res, "caution": CAUTION})
         return 0
-    for line in summary_lines(res):
+    with digits_override(check_digits(args.digits) if args.digits else None):
+        lines = summary_lines(res)
+    for line in lines:
         print(line)
     if args.plot:
         print(f"mode shapes written to {res['plot']}")

@@ -2,9 +2,9 @@
 from __future__ import annotations
 
 from .. import catalog
-from ..output import CAUTION, parse_number
+from ..output import CAUTION, check_digits, digits_override, parse_number
 from ..patch import FORMS, ORDERS, PATCHES, patch_test, summary_lines
-from .common import add_output_args, output_format, print_json
+from .common import add_digits_arg, add_output_args, output_format, print_json
 
 NAME = "patch"
 HELP = "patch tests on the published five-element patch (displacement- and force-driven); exit 1 on failure"
@@ -30,6 +30,7 @@ def add_arguments(p) -> None:
                         "test on the regular patch")
     p.add_argument("--tol", default="1e-6", help="relative tolerance for passing (default 1e-6)")
     add_output_args(p, formats=False)
+    add_digits_arg(p, default=None)
 
 
 def run(args) -> int:
@@ -41,7 +42,9 @@ def run(args) -> int:
     if output_format(args) == "json":
         print_json({**res, "caution": CAUTION})
     else:
-        for line in summary_lines(res):
+        with digits_override(check_digits(args.digits) if args.digits else None):
+            lines = summary_lines(res)
+        for line in lines:
             print(line)
         print(CAUTION)
     return 0 if res["passed"] else 1

@@ -83,6 +83,8 @@ def run(args) -> int:
     el = resolve_element(args.element, args.variant, args.state)
     values = parse_set(args.values)
     geometry = parse_nodes(args.nodes) if args.nodes else args.geometry
+    if args.what != "K" and args.rule != "element":
+        raise InputError(f"--rule applies to K only; --what {args.what} has no integration rule (drop --rule)")
     mat = {k: values.get(s) for k, s in (("E", E), ("nu", nu), ("t", t))}
     with working(f"deriving {args.what} of {el.name}", enabled=False if output_format(args) == "json" else None):
         if args.what == "D":
@@ -109,8 +111,8 @@ def run(args) -> int:
               "shape": [M.rows, M.cols], "layout": notes}
     if label != "D":
         header["dof_order"] = "interleaved u1, v1, u2, v2, ..."
-    title = f"{label} of {el.name} ({el.variant}, {el.state})" + ("" if label == "D" else
-                                                                 f", geometry: {geometry_text}, rule {args.rule}")
+    title = f"{label} of {el.name} ({el.variant}, {el.state})" + (
+        "" if label == "D" else f", geometry: {geometry_text}" + (f", rule {args.rule}" if label == "K" else ""))
     if numeric:
         A = to_float_matrix(M)
         if fmt == "json":
