@@ -21,7 +21,8 @@ import numpy as np
 import sympy as sp
 
 from .element import element
-from .output import CAUTION, OutputFolder, emit_json, matrix_latex, matrix_text, working, write_atomic
+from .output import (CAUTION, OutputFolder, display, emit_json, matrix_header, matrix_latex, matrix_text, working,
+                     write_atomic)
 from .symbols import E, a, b, nu, t
 
 SCENARIO = {
@@ -44,8 +45,12 @@ def core_section(outdir: Path) -> dict:
     files, lines = [], []
     q4 = element("Q4")
     K4 = q4.stiffness("rectangle")
-    files.append(write_atomic(outdir / "q4-rectangle-stiffness.txt", matrix_text(K4, "K", symmetric=True) + "\n"))
-    files.append(write_atomic(outdir / "q4-rectangle-stiffness.tex", matrix_latex(K4) + "\n"))
+    head = matrix_header(K4, "K", q4, "rectangle", "element")
+    files.append(write_atomic(outdir / "q4-rectangle-stiffness.txt",
+                              head + "\n# index-base: 0\n" + matrix_text(K4, "K", symmetric=True) + "\n"))
+    files.append(write_atomic(outdir / "q4-rectangle-stiffness.tex",
+                              matrix_header(K4, "K", q4, "rectangle", "element", comment="%", full=True) + "\n"
+                              + matrix_latex(K4) + "\n"))
     # candidate mesh: 12 x 4 Q4 elements over the 7.2 m x 1.2 m beam -> 0.6 m x 0.3 m elements
     half_w, half_h = 0.6 / 2, 0.3 / 2
     vals = {a: sp.Rational(3, 10), b: sp.Rational(3, 20), E: sp.Integer(32 * 10 ** 9), nu: sp.Rational(1, 5),
@@ -53,7 +58,7 @@ def core_section(outdir: Path) -> dict:
     Kn = np.array(K4.subs(vals).evalf().tolist(), dtype=float)
     eig = np.linalg.eigvalsh(Kn)
     zero = int(np.sum(np.abs(eig) < 1e-9 * np.abs(eig).max()))
-    lines.append(f"Q4 closed form: K[0,0] = {sp.factor(K4[0, 0])}")
+    lines.append(f"Q4 closed form: K[0,0] = {display(K4[0, 0])}")
     lines.append(f"candidate mesh 12 x 4 Q4 over 7.2 m x 1.2 m: elements {2 * half_w:.2f} m x {2 * half_h:.2f} m, "
                  f"aspect ratio a/b = {half_w / half_h:.1f}")
     lines.append(f"Q4 stiffness of one such element: {zero} zero eigenvalues (3 expected: rigid-body modes), "
@@ -62,8 +67,10 @@ def core_section(outdir: Path) -> dict:
         checks = element(name).shapes.checks()
         lines.append(f"{name} shape functions: partition of unity {checks['partition_of_unity']}, "
                      f"Kronecker delta {checks['kronecker_delta']}, completeness degree {checks['completeness']}")
-    K8 = element("Q8").stiffness("rectangle")
-    files.append(write_atomic(outdir / "q8-rectangle-stiffness.txt", matrix_text(K8, "K", symmetric=True) + "\n"))
+    q8 = element("Q8")
+    K8 = q8.stiffness("rectangle")
+    files.append(write_atomic(outdir / "q8-rectangle-stiffness.txt", matrix_header(K8, "K", q8, "rectangle", "element")
+                              + "\n# index-base: 0\n" + matrix_text(K8, "K", symmetric=True) + "\n"))
     return {"title": "Element matrices", "lines": lines, "files": [str(f.name) for f in files]}
 
 

@@ -206,6 +206,23 @@ def _larger_than(expr: sp.Expr, limit: int) -> bool:
     return False
 
 
+def matrix_header(M: sp.Matrix, label: str, element, geometry: str, rule: str | None = None,
+                  comment: str = "#", full: bool = False) -> str:
+    """Header lines (``comment``-prefixed) naming the matrix, its element, geometry and layout,
+    and the caution: for files derive writes, so they say what they hold (``full``: every entry
+    is written, not the upper triangle)."""
+    title = f"{label} of {element.name} ({element.variant}, {element.state})"
+    if label != "D":
+        title += f", geometry: {describe_geometry(geometry, element.shapes.domain, element.state == 'axisymmetric')}"
+        if label == "K" and rule:
+            title += f", rule {rule}"
+    notes = matrix_notes(label, element.state, M.rows, M.cols)
+    if full and label != "B":
+        notes = [notes[0], "symmetric; full matrix shown"]
+    lines = [title, *notes, CAUTION]
+    return "\n".join(f"{comment} {line}" for line in lines)
+
+
 def matrix_text(M: sp.Matrix, name: str = "K", symmetric: bool = False, pull_factor: bool = True) -> str:
     """``name[i,j] = expr`` lines (0-based; upper triangle when ``symmetric``), each entry in
     the natural sign.  With a common factor (see :func:`common_factor`) a header line names it
@@ -239,6 +256,37 @@ def _wrapped(e: sp.Expr, left: str, right: str, render) -> str:
     text = render(e)
     bare = text.lstrip()
     return f"{left}{text}{right}" if isinstance(e, sp.Add) or bare[:1] == "-" or bare[:1].isdigit() else text
+
+
+def describe_geometry(kind: str, domain: str, axisymmetric: bool = False) -> str:
+    """What the geometry kind is for this element's domain (headers name the shape shown)."""
+    at = " centred at radius R" if axisymmetric else " centred at the origin"
+    if kind == "nodes":
+        return "the given nodal coordinates"
+    if kind == "general":
+        return "general (nodal coordinates x1, y1, ..., xn, yn)"
+    if domain == "triangle":
+        if kind == "rectangle":
+            return ("right triangle with legs 2a along x and 2b along y, right angle at (-a, -b) "
+                    "(the lower-left half of the 2a x 2b rectangle" + at + ")")
+        return ("triangle with base 2a along y = -b and apex skewed by c (the lower-left half of the "
+                "parallelogram x = aX + cY, y = bY" + at + ")")
+    if kind == "rectangle":
+        return "rectangle 2a x 2b" + at
+    return "parallelogram x = aX + cY, y = bY (skew parameter c)" + at
+
+
+def matrix_notes(label: str, state: str, rows: int, cols: int) -> list[str]:
+    """Header lines that describe the matrix printed: its shape, row/column meaning, symmetry."""
+    strains = "rr, zz, tt (hoop), rz" if state == "axisymmetric" else "xx, yy, xy (engineering shear)"
+    if label == "K":
+        return [f"{rows} x {cols}; rows and columns are the DOFs interleaved u1, v1, u2, v2, ...",
+                "symmetric: upper triangle shown (K[j,i] = K[i,j])"]
+    if label == "B":
+        return [f"{rows} x {cols}; rows are the strains {strains}; columns the DOFs interleaved u1, v1, u2, v2, ...",
+                "every entry shown (B is not symmetric)"]
+    return [f"{rows} x {cols} constitutive matrix; rows and columns are the stresses/strains {strains}",
+            "symmetric: upper triangle shown (D[j,i] = D[i,j])"]
 
 
 #: matrices with more columns than this are written to LaTeX as a list of entries (align*)

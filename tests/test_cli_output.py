@@ -405,3 +405,14 @@ def test_rule_is_refused_where_it_cannot_apply(capsys):
     for what in ("B", "D"):
         code, out, err = run(["stiffness", "Q4", "--what", what, "--rule", "gauss-1x1"], capsys)
         assert code == 2 and out == "" and "--rule applies to K only" in err
+
+
+def test_demo_matrix_files_say_what_they_hold_and_parse_back(tmp_path, capsys):
+    from derive.demo import core_section
+    core_section(tmp_path)
+    for name, element in (("q4-rectangle-stiffness.txt", "Q4"), ("q4-rectangle-stiffness.tex", "Q4"),
+                          ("q8-rectangle-stiffness.txt", "Q8")):
+        text = (tmp_path / name).read_text()
+        assert text.startswith(("# K of " + element, "% K of " + element)) and output.CAUTION in text
+        assert main(["check", str(tmp_path / name), "--element", element]) == 0, name   # derive's own output
+    capsys.readouterr()

@@ -5,7 +5,7 @@ import sympy as sp
 
 from ..errors import InputError
 from ..material import D as D_matrix
-from ..output import (check_digits, check_unknown, matrix_latex, matrix_text, numeric_text, parse_number, parse_set,
+from ..output import (check_digits, check_unknown, describe_geometry, matrix_notes, matrix_latex, matrix_text, numeric_text, parse_number, parse_set,
                       to_float_matrix, working)
 from ..symbols import E, nu, t
 from .common import (add_digits_arg, add_element_args, add_output_args, caution_line, output_format, print_json,
@@ -46,37 +46,6 @@ def parse_nodes(text: str) -> list[list[sp.Rational]]:
     if not rows:
         raise InputError("--nodes is empty; give \"x1,y1 x2,y2 ...\"")
     return rows
-
-
-def describe_geometry(kind: str, domain: str, axisymmetric: bool = False) -> str:
-    """What the geometry kind is for this element's domain (headers name the shape shown)."""
-    at = " centred at radius R" if axisymmetric else " centred at the origin"
-    if kind == "nodes":
-        return "the given nodal coordinates"
-    if kind == "general":
-        return "general (nodal coordinates x1, y1, ..., xn, yn)"
-    if domain == "triangle":
-        if kind == "rectangle":
-            return ("right triangle with legs 2a along x and 2b along y, right angle at (-a, -b) "
-                    "(the lower-left half of the 2a x 2b rectangle" + at + ")")
-        return ("triangle with base 2a along y = -b and apex skewed by c (the lower-left half of the "
-                "parallelogram x = aX + cY, y = bY" + at + ")")
-    if kind == "rectangle":
-        return "rectangle 2a x 2b" + at
-    return "parallelogram x = aX + cY, y = bY (skew parameter c)" + at
-
-
-def matrix_notes(label: str, state: str, rows: int, cols: int) -> list[str]:
-    """Header lines that describe the matrix printed: its shape, row/column meaning, symmetry."""
-    strains = "rr, zz, tt (hoop), rz" if state == "axisymmetric" else "xx, yy, xy (engineering shear)"
-    if label == "K":
-        return [f"{rows} x {cols}; rows and columns are the DOFs interleaved u1, v1, u2, v2, ...",
-                "symmetric: upper triangle shown (K[j,i] = K[i,j])"]
-    if label == "B":
-        return [f"{rows} x {cols}; rows are the strains {strains}; columns the DOFs interleaved u1, v1, u2, v2, ...",
-                "every entry shown (B is not symmetric)"]
-    return [f"{rows} x {cols} constitutive matrix; rows and columns are the stresses/strains {strains}",
-            "symmetric: upper triangle shown (D[j,i] = D[i,j])"]
 
 
 def run(args) -> int:
