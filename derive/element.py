@@ -14,8 +14,9 @@ from .formulations.base import Formulation, Point
 from .geometry import IsoMap, make_geometry, validity_report
 from .material import check_material
 from .shapes import ShapeSet
+from .limits import check_symbolic_points
 from .stiffness import (NotPolynomial, condense_exact, condense_symbolic, exact_blocks, numeric_stiffness,
-                        point_blocks)
+                        point_blocks, rule_label)
 from .symbols import E as E_sym
 from .symbols import eta, nu as nu_sym, t as t_sym, xi
 
@@ -65,7 +66,7 @@ class Element:
 
     def material(self, E=None, nu=None, t=None) -> dict:
         """Checked material values as exact sympy numbers; the symbols E, nu, t where not given."""
-        check_material(self.state, E, nu)
+        check_material(self.state, E, nu, t)
         return {"E": E_sym if E is None else sp.nsimplify(E, rational=True),
                 "nu": nu_sym if nu is None else sp.nsimplify(nu, rational=True),
                 "t": t_sym if t is None else sp.nsimplify(t, rational=True)}
@@ -98,18 +99,26 @@ class Element:
         if imap.is_affine and self.state != "axisymmetric":
             try:
                 blocks = exact_blocks(form, imap, self.state, material, rule_for)
-                return condense_exact(blocks, self.ndof, form.n_internal)
             except NotPolynomial:
                 pass
+            else:
+                return condense_exact(blocks, self.ndof, form.n_internal, form, rule_label(self, rule))
         if rule == "exact":
             raise InputError("exact integration needs a polynomial integrand (rectangle, parallelogram or "
                              "straight-sided triangle in a plane state); use --rule element or a Gauss rule")
         if imap.geometry.kind == "general" and form.n_internal:
             raise InputError(f"{self.name} {self.variant} on general symbolic geometry needs a symbolic condensation "
                              "that is too large to be useful; give numeric nodes or use the generated kernel")
+        used = ("E", "nu") if self.state == "axisymmetric" else ("E", "nu", "t")  # axisymmetric: 2 pi r, no t
+        symbolic_material = any(isinstance(material[k], sp.Basic) and material[k].free_symbols for k in used)
+        if not imap.geometry.numeric or symbolic_material:
+            own = quadrature.rule(self.info.full_rule).npoints
+            for term in form.terms:
+                name = rule_for(term)
+                check_symbolic_points(quadrature.rule(name).npoints, name, f"{self.name} {self.variant} ({self.state})",
+                                      own=own, geometry_symbolic=not imap.geometry.numeric)
         blocks = point_blocks(form, imap, self.state, material, lambda term: rule_for(term))
-        K = condense_symbolic(blocks, self.ndof, form.n_internal)
-        return K
+        return condense_symbolic(blocks, self.ndof, form.n_internal, form, rule_label(self, rule))
 
     def numeric_stiffness(self, xy, E: float, nu: float, t: float = 1.0) -> np.ndarray:
         """Float64 stiffness for one element (nodes, 2) or a batch (n, nodes, 2)."""

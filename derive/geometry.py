@@ -25,6 +25,7 @@ from typing import Sequence
 import numpy as np
 import sympy as sp
 
+from . import limits
 from .errors import GeometryError, InputError
 from .shapes import ShapeSet
 from .symbols import R, a, b, c, eta, nodal, xi
@@ -73,16 +74,59 @@ def make_geometry(shapes: ShapeSet, geometry, axisymmetric: bool = False) -> Geo
         raise InputError(f"unknown geometry {geometry!r}; allowed: {', '.join(KINDS)} or numeric nodal coordinates")
     try:
         arr = np.asarray(geometry, dtype=float)
-    except (TypeError, ValueError):
+    except (TypeError, ValueError, OverflowError):
         raise InputError("nodal coordinates must be numbers in an (n, 2) array") from None
     if arr.shape != (shapes.n, 2):
         raise InputError(f"element {shapes.name} needs {shapes.n} nodes as an ({shapes.n}, 2) array; got shape {arr.shape}")
-    if not np.all(np.isfinite(arr)):
-        raise InputError("nodal coordinates must be finite numbers (found NaN or infinity)")
+    check_coordinates(arr, axisymmetric)
     exact = [[v if isinstance(v, sp.Rational) else sp.Rational(float(v)) for v in row] for row in _rows(geometry, arr)]
     xs = tuple(row[0] for row in exact)
     ys = tuple(row[1] for row in exact)
     return Geometry("nodes", xs, ys)
+
+
+def check_coordinates(xy, axisymmetric: bool = False) -> np.ndarray:
+    """Numeric nodal coordinates as a float array: finite, within the documented magnitude
+    (:data:`derive.limits.MAGNITUDE`), and for the axisymmetric state at radius r = x >= 0."""
+    if isinstance(xy, (str, bytes)):
+        raise InputError("nodal coordinates must be numbers in an (n, 2) array, got a string")
+    try:
+        arr = np.asarray(xy, dtype=float)
+    except (TypeError, ValueError, OverflowError):
+        raise InputError("nodal coordinates must be real numbers in an (n, 2) array") from None
+    if arr.ndim not in (2, 3) or arr.shape[-1] != 2:
+        raise InputError(f"nodal coordinates must be an (nodes, 2) or (n, nodes, 2) array; got shape {arr.shape}")
+    if not np.all(np.isfinite(arr)):
+        raise InputError("nodal coordinates must be finite numbers (found NaN or infinity)")
+    big = float(np.abs(arr).max()) if arr.size else 0.0
+    if big > limits.MAGNITUDE[1]:
+        raise InputError(f"nodal coordinate {big:.6g} is out of range; coordinates must be {limits.magnitude_text()}")
+    if axisymmetric and arr.size and arr[..., 0].min() < 0:
+        flat = arr.reshape(-1, arr.shape[-2], 2)
+        e, k = np.unravel_index(int(np.argmin(flat[..., 0])), flat.shape[:2])
+        where = f"node {k + 1}" + (f" of element {e}" if flat.shape[0] > 1 else "")
+        raise GeometryError(f"axisymmetric element: {where} is at radius r = x = {flat[e, k, 0]:.6g} < 0; "
+                            "the axis is x = 0 and every node needs r >= 0")
+    return arr
+
+
+def check_geometry_values(values: dict, axisymmetric: bool = False) -> None:
+    """Numeric values of the geometry parameters (a, b, c, R) given with ``--set``.
+
+    a and b are half-sides and must be > 0; in the axisymmetric state the element spans
+    r = R - a - |c| .. R + a + |c|, so R >= a + |c| (r >= 0: the element may touch the axis
+    x = 0 but not cross it).  Values left symbolic are not checked.
+    """
+    for sym in (a, b, R):
+        if sym in values:
+            limits.check_positive(values[sym], sym.name, "--set")
+    if axisymmetric and R in values and a in values:
+        reach = values[a] + abs(values.get(c, 0))
+        if values[R] < reach:
+            raise GeometryError(f"axisymmetric element at radius R = {values[R]} with a = {values[a]}"
+                                + (f", c = {values[c]}" if c in values else "")
+                                + f": it would cross the axis (r = R - a{' - |c|' if c in values else ''} "
+                                f"= {float(values[R] - reach):.6g} < 0); need R >= a{' + |c|' if c in values else ''}")
 
 
 def _rows(geometry, arr):
@@ -177,6 +221,14 @@ def validity_report(imap: IsoMap, points: Sequence[tuple]) -> dict:
     scale = max(max(xs) - min(xs), max(ys) - min(ys), 1e-300) ** 2
     report = {"area": area, "det_min": samples["grid_min"], "det_max": samples["grid_max"],
               "det_at_points_min": samples["points_min"], "det_at_points_max": samples["points_max"]}
+    crossing = _crossing_edges(xs, ys, ncorner)
+    if crossing:
+        worst = _worst_corner(imap)
+        (i, j), (k, m) = crossing
+        raise GeometryError(f"element {imap.shapes.name}: self-intersecting (bow-tie): edge {i}-{j} crosses edge "
+                            f"{k}-{m}; det J changes sign over the element (min {samples['grid_min']:.6g}, "
+                            f"max {samples['grid_max']:.6g}; most negative at node {worst[0]}, det J = {worst[1]:.6g}); "
+                            "number the corners in order around the element")
     if abs(area) <= 1e-12 * scale:
         raise GeometryError(f"element {imap.shapes.name}: zero area (corner polygon area {area:.6g}); "
                             "check for repeated or collinear corner nodes")
@@ -192,6 +244,23 @@ def validity_report(imap: IsoMap, points: Sequence[tuple]) -> dict:
         if v <= 0:
             raise GeometryError(f"element {imap.shapes.name}: det J = {v:.6g} <= 0 at quadrature point {k}")
     return report
+
+
+def _crossing_edges(xs, ys, ncorner: int):
+    """The first pair of non-adjacent corner-polygon edges that cross properly (1-based node
+    numbers), or None.  Only a quadrilateral has non-adjacent edges."""
+    if ncorner != 4:
+        return None
+
+    def orient(p, q, r):
+        v = (xs[q] - xs[p]) * (ys[r] - ys[p]) - (ys[q] - ys[p]) * (xs[r] - xs[p])
+        return (v > 0) - (v < 0)
+
+    for (i, j), (k, m) in (((0, 1), (2, 3)), ((1, 2), (3, 0))):
+        o1, o2, o3, o4 = orient(i, j, k), orient(i, j, m), orient(k, m, i), orient(k, m, j)
+        if o1 * o2 < 0 and o3 * o4 < 0:
+            return (i + 1, j + 1), (k + 1, m + 1)
+    return None
 
 
 def _worst_corner(imap: IsoMap) -> tuple[int, float]:

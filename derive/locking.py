@@ -55,6 +55,7 @@ from .element import element
 from .errors import InputError
 from .formulations.base import B_op, Formulation, Point, Term
 from .geometry import Geometry, IsoMap
+from .limits import check_aspect
 from .stiffness import exact_blocks, numeric_stiffness
 from .symbols import eta, nu, r, x, xi, y
 
@@ -538,8 +539,7 @@ def ratio_function(name: str, variant: str = "full", state: str = "plane-stress"
 
 def check_point(aspect=None, nu_value=None, state: str = "plane-stress"):
     if aspect is not None:
-        if not math.isfinite(float(aspect)) or float(aspect) <= 0:
-            raise InputError(f"aspect ratio must be a positive number, got {aspect}")
+        check_aspect(aspect)
     if nu_value is not None:
         material.check_material(state, None, float(nu_value))
 

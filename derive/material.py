@@ -11,6 +11,7 @@ import math
 import sympy as sp
 
 from .errors import InputError, MaterialError
+from .limits import check_array_positive
 from .symbols import E as E_sym
 from .symbols import nu as nu_sym
 
@@ -23,14 +24,21 @@ def check_state(state: str) -> str:
     return state
 
 
-def check_material(state: str, E=None, nu=None) -> None:
-    """Refuse E <= 0 and nu outside (-1, 0.5); nu = 0.5 only in plane stress (D finite there)."""
+def check_material(state: str, E=None, nu=None, t=None) -> None:
+    """Refuse E <= 0 and nu outside (-1, 0.5); nu = 0.5 only in plane stress (D finite there);
+    a thickness t <= 0 or not finite (a negative t gives a negative-definite K)."""
     check_state(state)
+    if t is not None:
+        check_array_positive(t, "t", "thickness")
     if E is not None and _is_number(E):
+        if isinstance(E, sp.Basic) and not E.is_real:
+            raise MaterialError(f"Young's modulus E = {E} is not allowed; E must be a finite number > 0")
         Ev = float(E)
         if not math.isfinite(Ev) or Ev <= 0:
             raise MaterialError(f"Young's modulus E = {E} is not allowed; E must be a finite number > 0")
     if nu is not None and _is_number(nu):
+        if isinstance(nu, sp.Basic) and not nu.is_real:
+            raise MaterialError(f"Poisson's ratio nu = {nu} is not allowed; -1 < nu < 0.5")
         nv = float(nu)
         if not math.isfinite(nv) or nv <= -1 or nv > 0.5:
             raise MaterialError(f"Poisson's ratio nu = {nu} is not allowed; -1 < nu < 0.5")

@@ -62,6 +62,8 @@ def zero_energy_modes(name: str, variant: str = "full", state: str = "plane-stre
                       mesh_cells: int = 3) -> dict:
     """Eigen-analysis of one element stiffness and the communicability check on a small mesh."""
     from .element import element as make_element
+    from .limits import check_tolerance
+    tol = check_tolerance(tol, "modes")
     el = make_element(name, variant, state)
     if nodes is None:
         nodes = element_nodes(el.name, geometry)

@@ -16,7 +16,7 @@ from typing import Iterable
 import numpy as np
 import sympy as sp
 
-from . import symbols
+from . import limits, symbols
 from .errors import InputError, OutputError
 
 CAUTION = ("Caution: derive is a verification aid, not a design check. Defer to the governing local codes "
@@ -31,14 +31,21 @@ DISPLAY_FACTOR_LIMIT = 300
 SETTABLE = ("a", "b", "c", "R", "E", "nu", "t", "r")
 
 
+#: --set names that must be > 0 when given a number (c, the skew, may have either sign)
+POSITIVE = ("a", "b", "R", "E", "t", "r")
+
+
 def parse_set(text: str | None) -> dict[sp.Symbol, sp.Expr]:
     """Parse ``--set a=2,b=0.5,E=210e9`` into exact values keyed by canonical symbols.
 
-    Numbers only (decimal, exponent, or p/q); values are kept exact as rationals.
+    Numbers only (decimal, exponent, or p/q, within :mod:`derive.limits`); values are kept
+    exact as rationals.  a, b, R, E, t and r must be > 0; a name may be given once.
     """
     out: dict[sp.Symbol, sp.Expr] = {}
-    if not text:
+    if text is None:
         return out
+    if not text.strip():
+        raise InputError("--set is empty; write name=value, e.g. --set a=2,b=0.5,E=210e9")
     for k, item in enumerate(text.split(","), start=1):
         item = item.strip()
         if not item:
@@ -46,29 +53,26 @@ def parse_set(text: str | None) -> dict[sp.Symbol, sp.Expr]:
         name, eq, value = item.partition("=")
         name, value = name.strip(), value.strip()
         if not eq or not name or not value:
-            raise InputError(f"--set item {k} ({item!r}) is malformed; write name=value, e.g. --set a=2,b=0.5,E=210e9")
+            raise InputError(f"--set item {k} ({limits.echo(item)}) is malformed; write name=value, "
+                             "e.g. --set a=2,b=0.5,E=210e9")
         sym = symbols.lookup(name)
         if sym is None or (name not in SETTABLE and not (name[0] in "xy" and name[1:].isdigit())):
-            raise InputError(f"--set: unknown name {name!r}; allowed: {', '.join(SETTABLE)}, x1.., y1..")
+            raise InputError(f"--set: unknown name {limits.echo(name)}; allowed: {', '.join(SETTABLE)}, x1.., y1..")
+        if sym in out:
+            raise InputError(f"--set: {name} is given twice; give each name once")
         out[sym] = parse_number(value, f"--set {name}")
+        if name in POSITIVE:
+            limits.check_positive(out[sym], name, "--set")
     return out
 
 
 def parse_number(value: str, where: str) -> sp.Rational:
-    """A decimal, exponent or p/q literal as an exact rational; InputError otherwise."""
-    v = value.strip()
-    try:
-        if "/" in v:
-            p, q = v.split("/", 1)
-            num = sp.Rational(int(p.strip()), int(q.strip()))
-        else:
-            f = float(v)
-            if not np.isfinite(f):
-                raise ValueError
-            num = sp.Rational(v) if len(v) < 40 else sp.Rational(f)
-    except (ValueError, TypeError, ZeroDivisionError):
-        raise InputError(f"{where}: {value!r} is not a number (write e.g. 0.3, 210e9 or 1/3)") from None
-    return num
+    """A decimal, exponent or p/q literal as an exact rational; InputError otherwise.
+
+    The limits (digits, exponent, magnitude; no ``_``, inf or nan) are those of
+    :func:`derive.limits.parse_literal`.
+    """
+    return limits.parse_literal(value, where)
 
 
 def check_unknown(values: dict, free: Iterable[sp.Symbol], what: str) -> None:

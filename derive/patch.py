@@ -31,6 +31,7 @@ from . import catalog
 from . import mesh as M
 from .analysis import analyse
 from .errors import InputError
+from .limits import check_tolerance
 from .output import fmt
 
 PATCH_CORNERS = ((0.0, 0.0), (0.24, 0.0), (0.24, 0.12), (0.0, 0.12))
@@ -101,6 +102,7 @@ def _constant_stress(state: str, E: float, nu: float):
 def run_one(element: str, variant: str = "full", state: str = "plane-stress", form: str = "displacement",
             order: str = "constant", patch: str = "distorted", tol: float = 1e-6, provider=None) -> dict:
     """One patch test; returns a dict with ``passed`` and the relative errors."""
+    tol = check_tolerance(tol, "patch")
     if state not in ("plane-stress", "plane-strain"):
         raise InputError(f"the patch tests here are for plane states; got {state!r}")
     if form not in FORMS:
@@ -178,6 +180,7 @@ def patch_test(element: str, variant: str = "full", state: str = "plane-stress",
     loses quadratic completeness under a bilinear map (the 8-node serendipity element)
     fails it.
     """
+    tol = check_tolerance(tol, "patch")
     ref = M.ref_element(catalog.element_info(element).name)
     quadratic = ref.n_nodes > ref.n_corners
     if orders is None and patches is None:

@@ -17,17 +17,22 @@ Three routes, one formulation structure (:mod:`derive.formulations.base`):
 """
 from __future__ import annotations
 
+import re
 from functools import lru_cache
 
 import numpy as np
 import sympy as sp
+from sympy.matrices.exceptions import NonInvertibleMatrixError
 from sympy.polys.domains import QQ
 from sympy.polys.matrices import DomainMatrix
+from sympy.polys.matrices.exceptions import DMNonInvertibleMatrixError
 from sympy.polys.rings import ring
 
 from . import quadrature, reference
+from .errors import InputError
 from .formulations.base import Formulation, Point
 from .geometry import IsoMap
+from .output import Progress
 from .symbols import eta, xi
 
 
@@ -36,11 +41,41 @@ from .symbols import eta, xi
 
 @lru_cache(maxsize=None)
 def rule_moment(rule_name: str, p: int, q: int) -> sp.Expr:
-    """sum_g w_g xi_g^p eta_g^q for a named rule, exact (radicals cancelled)."""
+    """sum_g w_g xi_g^p eta_g^q for a named rule, exact (radicals cancelled).
+
+    Tensor Gauss rules factor into two 1-D moments (:func:`gauss_moment_1d`), which are
+    rational and need no radicals; other rules sum over their exact points.
+    """
+    m = _GAUSS_NAME.fullmatch(rule_name.strip())
+    if m:
+        nx = int(m.group(1))
+        ny = int(m.group(2)) if m.group(2) else nx
+        quadrature.rule(rule_name)  # validates the point counts
+        return gauss_moment_1d(nx, p) * gauss_moment_1d(ny, q)
     rl = quadrature.rule(rule_name)
     s = sum(w * px ** p * py ** q for (px, py), w in zip(rl.points, rl.weights))
     s = sp.nsimplify(sp.radsimp(sp.expand(s)))
     return s
+
+
+_GAUSS_NAME = re.compile(r"gauss-(\d+)(?:x(\d+))?")
+
+
+@lru_cache(maxsize=None)
+def gauss_moment_1d(n: int, p: int) -> sp.Rational:
+    """sum_i w_i x_i^p of the n-point Gauss-Legendre rule, exactly, without its radical points.
+
+    The points are the roots of the Legendre polynomial P_n.  Write x^p = s(x) P_n(x) + r(x)
+    with deg r < n; the rule is exact to degree 2n - 1, so it integrates r exactly, and
+    P_n(x_i) = 0 gives sum_i w_i x_i^p = sum_i w_i r(x_i) = int_{-1}^{1} r(x) dx (a rational).
+    For p <= 2n - 1 this is just int x^p.  (The direct sum over CRootOf points took most of a
+    minute for the 10-point rule.)
+    """
+    from .symbols import x as X
+    if p <= 2 * n - 1:
+        return sp.Rational(2, p + 1) if p % 2 == 0 else sp.Integer(0)
+    rem = sp.rem(sp.Poly(X ** p, X, domain=QQ), sp.Poly(sp.legendre(n, X), X, domain=QQ))
+    return sum((sp.Rational(2, k + 1) * c for (k,), c in rem.terms() if k % 2 == 0), sp.Integer(0))
 
 
 def _moments(domain: str, rule_name: str | None):
@@ -138,15 +173,46 @@ def exact_blocks(form: Formulation, imap: IsoMap, state: str, material: dict, ru
     return blocks
 
 
-def condense_exact(blocks: dict, ndof: int, n_internal: int) -> sp.Matrix:
-    """K = K_uu - K_ua K_aa^-1 K_ua^T in exact field arithmetic, returned as a sympy Matrix."""
+def condense_exact(blocks: dict, ndof: int, n_internal: int, form: Formulation | None = None,
+                   rule: str = "") -> sp.Matrix:
+    """K = K_uu - K_ua K_aa^-1 K_ua^T in exact field arithmetic, returned as a sympy Matrix.
+
+    A singular K_aa (a rule too weak for the internal modes) raises :class:`SingularInternalBlock`.
+    """
     F = next(iter(blocks.values())).domain
     Kuu = blocks.get("uu", DomainMatrix.zeros((ndof, ndof), F))
     if n_internal:
         Kua, Kaa = blocks["ua"], blocks["aa"]
-        X = Kaa.lu_solve(Kua.transpose())
+        try:
+            X = Kaa.lu_solve(Kua.transpose())
+        except DMNonInvertibleMatrixError:
+            raise singular_block_error(form, rule, Kaa.rank(), n_internal) from None
         Kuu = Kuu - Kua * X
     return Kuu.to_Matrix()
+
+
+class SingularInternalBlock(InputError):
+    """The condensed internal block K_aa is singular: the rule chosen cannot integrate the
+    variant's internal modes (e.g. eas4 or incompatible modes with a 1-point rule)."""
+
+
+def rule_label(el, rule: str) -> str:
+    """The rule as the user chose it, for messages ("element" shows the element's own rules)."""
+    if rule == "element":
+        return "the element's own rules (" + ", ".join(el.info.rule_name(r) for r in el.formulation.rules()) + ")"
+    return rule
+
+
+def singular_block_error(form: Formulation | None, rule: str, rank: int, n: int,
+                         where: str = "") -> SingularInternalBlock:
+    """The one-line message for a singular K_aa: which block, its rank, and why."""
+    variant = form.variant if form is not None else "this variant"
+    label = next((t.label for t in form.terms if t.block == "aa" and t.label), "") if form is not None else ""
+    block = f"K_aa ({n} x {n}{', ' + label if label else ''})"
+    return SingularInternalBlock(
+        f"variant {variant}{' with rule ' + rule if rule else ''}{where}: the internal block {block} is singular "
+        f"(rank {rank} of {n}): the rule is too weak to integrate the variant's internal modes; "
+        "use the element's own rule (--rule element) or a stronger Gauss rule")
 
 
 # ---------------------------------------------------------------------------------------------
@@ -156,10 +222,14 @@ def point_blocks(form: Formulation, imap: IsoMap, state: str, material: dict, ru
     """Blocks as sympy matrices by summing over each term's rule points (any geometry)."""
     blocks: dict[str, sp.Matrix] = {}
     points_cache: dict = {}
-    for term in form.terms:
-        rl = quadrature.rule(rule_for_name(term))
+    rules = [quadrature.rule(rule_for_name(term)) for term in form.terms]
+    total = sum(rl.npoints for rl in rules)
+    progress = Progress(total, "integrating") if total > PROGRESS_POINTS else None
+    for term, rl in zip(form.terms, rules):
         acc = None
         for (px, py), w in _rule_points(rl, imap.geometry.numeric):
+            if progress:
+                progress.step(term.label)
             key = (px, py)
             if key not in points_cache:
                 points_cache[key] = Point(imap, state, px, py, **material)
@@ -170,7 +240,13 @@ def point_blocks(form: Formulation, imap: IsoMap, state: str, material: dict, ru
             contrib = (L.T * M * Rm) * (w * pt.detJ * pt.thick * term.factor)
             acc = contrib if acc is None else acc + contrib
         blocks[term.block] = acc if term.block not in blocks else blocks[term.block] + acc
+    if progress:
+        progress.close()
     return blocks
+
+
+#: the point route shows progress on a terminal beyond this many points in all terms
+PROGRESS_POINTS = 24
 
 
 def _rule_points(rl, numeric: bool):
@@ -182,12 +258,32 @@ def _rule_points(rl, numeric: bool):
             for (px, py), w in zip(rl.points, rl.weights)]
 
 
-def condense_symbolic(blocks: dict, ndof: int, n_internal: int) -> sp.Matrix:
+def condense_symbolic(blocks: dict, ndof: int, n_internal: int, form: Formulation | None = None,
+                      rule: str = "") -> sp.Matrix:
+    """K = K_uu - K_ua K_aa^-1 K_ua^T with sympy matrices (point route)."""
     Kuu = blocks.get("uu", sp.zeros(ndof, ndof))
     if n_internal:
         Kua, Kaa = blocks["ua"], blocks["aa"]
-        Kuu = Kuu - Kua * Kaa.LUsolve(Kua.T)
+        rank = _numeric_rank(Kaa)
+        if rank is not None and rank < n_internal:
+            raise singular_block_error(form, rule, rank, n_internal)
+        try:
+            Kuu = Kuu - Kua * Kaa.LUsolve(Kua.T)
+        except (NonInvertibleMatrixError, ZeroDivisionError):
+            raise singular_block_error(form, rule, Kaa.rank(), n_internal) from None
     return Kuu
+
+
+def _numeric_rank(A: sp.Matrix, rtol: float = 1e-10) -> int | None:
+    """Rank of a numeric sympy matrix from its singular values (None when A is symbolic)."""
+    if A.free_symbols:
+        return None
+    return _rank_float(np.array(A.evalf(30).tolist(), dtype=float), rtol)
+
+
+def _rank_float(A: np.ndarray, rtol: float = 1e-10) -> int:
+    s = np.linalg.svd(A, compute_uv=False)
+    return int(np.sum(s > rtol * s.max())) if s.size and s.max() > 0 else 0
 
 
 # ---------------------------------------------------------------------------------------------
@@ -228,13 +324,17 @@ def numeric_stiffness(name: str, variant: str, state: str, xy, E: float, nu: flo
     Evaluates the same formulation terms as the symbolic routes, point by point, then
     condenses internal unknowns with numpy.  A reference implementation, not a fast kernel.
     """
+    from .geometry import check_coordinates
     from .material import check_material
-    check_material(state, E, nu)
-    xy = np.asarray(xy, dtype=float)
+    check_material(state, E, nu, t)
+    xy = check_coordinates(xy, axisymmetric=state == "axisymmetric")
     single = xy.ndim == 2
     if single:
         xy = xy[None]
     ndof, n_int, plan = _numeric_plan((name, variant, state))
+    if xy.shape[1] * 2 != ndof:
+        raise InputError(f"element {name} needs {ndof // 2} nodes per element, as an ({ndof // 2}, 2) or "
+                         f"(n, {ndof // 2}, 2) array; got shape {xy.shape[1:] if single else xy.shape}")
     n = xy.shape[0]
     args = [xy[:, i, 0] for i in range(xy.shape[1])] + [xy[:, i, 1] for i in range(xy.shape[1])] + [E, nu, t]
     blocks: dict[str, np.ndarray] = {}
@@ -251,6 +351,21 @@ def numeric_stiffness(name: str, variant: str, state: str, xy, E: float, nu: flo
     K = blocks.get("uu", np.zeros((n, ndof, ndof)))
     if n_int:
         Kua, Kaa = blocks["ua"], blocks["aa"]
+        _check_internal_blocks(Kaa, name, variant, state)
         K = K - Kua @ np.linalg.solve(Kaa, np.transpose(Kua, (0, 2, 1)))
     return K[0] if single else K
+
+
+def _check_internal_blocks(Kaa: np.ndarray, name: str, variant: str, state: str) -> None:
+    """Refuse a batch in which some element's K_aa is singular (numerically), naming the element."""
+    s = np.linalg.svd(Kaa, compute_uv=False)
+    top = s.max(axis=1)
+    rank = np.sum(s > 1e-10 * top[:, None], axis=1)
+    bad = np.nonzero((rank < Kaa.shape[1]) | ~np.isfinite(top) | (top == 0))[0]
+    if bad.size:
+        from .element import element as make_element
+        el = make_element(name, variant, state)
+        where = f" (element {int(bad[0])} of the batch)" if Kaa.shape[0] > 1 else ""
+        rules = rule_label(el, "element")
+        raise singular_block_error(el.formulation, rules, int(rank[bad[0]]), Kaa.shape[1], where)
 

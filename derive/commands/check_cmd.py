@@ -71,7 +71,7 @@ def run(args) -> int:
     numeric = given.syntax == "numeric" or given.array is not None
     mat = {"E": values.get(E), "nu": values.get(nu), "t": values.get(t)}
     geo_values = {s: v for s, v in values.items() if s not in (E, nu, t)}
-    if args.nodes:
+    if args.nodes is not None:
         geometry = parse_nodes(args.nodes)
     elif geo_values or numeric:
         imap = el.map(args.geometry)

@@ -3,6 +3,7 @@ from __future__ import annotations
 
 from .. import catalog, plotting
 from ..errors import InputError
+from ..limits import check_tolerance, tolerance_help
 from ..modes import GEOMETRIES, plot_modes, summary_lines, zero_energy_modes
 from ..output import CAUTION, check_digits, check_output_file, digits_override, parse_number, working
 from .common import add_digits_arg, add_force_arg, add_output_args, output_format, print_json
@@ -31,7 +32,7 @@ def add_arguments(p) -> None:
                         "quad9 for T3, T6, Q4, Q8, Q9); up to 3000 DOFs")
     p.add_argument("--nodes", help='numeric nodal coordinates "x1,y1 x2,y2 ..." (overrides --geometry)')
     p.add_argument("--nu", default="0.3", help="Poisson's ratio used for the eigenvalues (default 0.3; E = 1, t = 1)")
-    p.add_argument("--tol", default="1e-8", help="zero threshold relative to the largest eigenvalue (default 1e-8)")
+    p.add_argument("--tol", default="1e-8", help="zero threshold relative to the largest eigenvalue (default 1e-8; " + tolerance_help("modes") + ")")
     p.add_argument("--plot", metavar="FILE", help="write the deformed shapes of the zero-energy modes (.png, .svg, .pdf)")
     p.add_argument("--dpi", default=str(plotting.DEFAULT_DPI),
                    help=f"resolution of a .png --plot in dots per inch (default {plotting.DEFAULT_DPI})")
@@ -48,8 +49,8 @@ def run(args) -> int:
         check_output_file(args.plot, "--plot", args.force)
     dpi = plotting.check_dpi(args.dpi)
     nu = float(parse_number(args.nu, "--nu"))
-    tol = float(parse_number(args.tol, "--tol"))
-    nodes = [[float(u), float(v)] for u, v in parse_nodes(args.nodes)] if args.nodes else None
+    tol = check_tolerance(args.tol, "modes")
+    nodes = [[float(u), float(v)] for u, v in parse_nodes(args.nodes)] if args.nodes is not None else None
     show = False if output_format(args) == "json" else None
     with working(f"modes of {args.element}", enabled=show):
         res = zero_energy_modes(args.element, args.variant, args.state, nodes=nodes, geometry=args.geometry, nu=nu,
@@ -76,7 +77,7 @@ def _run_mesh_file(args) -> int:
     if args.nodes or args.plot or args.geometry != "square":
         raise InputError("--mesh-file analyses the whole mesh: --nodes, --geometry and --plot are for one element")
     nu = float(parse_number(args.nu, "--nu"))
-    tol = float(parse_number(args.tol, "--tol"))
+    tol = check_tolerance(args.tol, "modes")
     mesh = read_mesh(args.mesh_file, args.element)
     show = False if output_format(args) == "json" else None
     with working(f"modes of {mesh.label}", enabled=show):

@@ -2,7 +2,8 @@
 from __future__ import annotations
 
 from .. import catalog
-from ..output import CAUTION, check_digits, digits_override, parse_number
+from ..limits import check_tolerance, tolerance_help
+from ..output import CAUTION, check_digits, digits_override
 from ..patch import FORMS, ORDERS, PATCHES, patch_test, summary_lines
 from .common import add_digits_arg, add_output_args, output_format, print_json
 
@@ -28,13 +29,13 @@ def add_arguments(p) -> None:
                    help="the distorted five-element patch, a regular 2 x 2 patch, or both.  Without --order and "
                         "--patch: constant strain on the distorted patch, plus (quadratic elements) the higher-order "
                         "test on the regular patch")
-    p.add_argument("--tol", default="1e-6", help="relative tolerance for passing (default 1e-6)")
+    p.add_argument("--tol", default="1e-6", help="relative tolerance for passing (default 1e-6; " + tolerance_help("patch") + ")")
     add_output_args(p, formats=False)
     add_digits_arg(p, default=None)
 
 
 def run(args) -> int:
-    tol = float(parse_number(args.tol, "--tol"))
+    tol = check_tolerance(args.tol, "patch")
     forms = FORMS if args.form == "both" else (args.form,)
     orders = None if args.order is None else (ORDERS if args.order == "both" else (args.order,))
     patches = None if args.patch is None else (PATCHES if args.patch == "both" else (args.patch,))

@@ -37,7 +37,7 @@ def run(args) -> int:
             "basis": [str(m) for m in sh.basis], "shape_functions": [str(f) for f in sh.functions],
             "checks": checks}
     imap = None
-    if args.nodes:
+    if args.nodes is not None:
         nodes = parse_nodes(args.nodes)
         data["validity"] = el.validity(nodes)
         imap = el.map(nodes)

@@ -4,6 +4,7 @@ from __future__ import annotations
 import sympy as sp
 
 from ..errors import InputError
+from ..geometry import check_geometry_values
 from ..material import D as D_matrix
 from ..output import (check_digits, check_unknown, describe_geometry, matrix_notes, matrix_latex, matrix_text, numeric_text, parse_number, parse_set,
                       to_float_matrix, working)
@@ -51,7 +52,8 @@ def parse_nodes(text: str) -> list[list[sp.Rational]]:
 def run(args) -> int:
     el = resolve_element(args.element, args.variant, args.state)
     values = parse_set(args.values)
-    geometry = parse_nodes(args.nodes) if args.nodes else args.geometry
+    check_geometry_values(values, el.state == "axisymmetric")
+    geometry = parse_nodes(args.nodes) if args.nodes is not None else args.geometry
     if args.what != "K" and args.rule != "element":
         raise InputError(f"--rule applies to K only; --what {args.what} has no integration rule (drop --rule)")
     mat = {k: values.get(s) for k, s in (("E", E), ("nu", nu), ("t", t))}
@@ -72,7 +74,7 @@ def run(args) -> int:
     numeric = not (M.free_symbols - {sp.Symbol("xi"), sp.Symbol("eta")}) and args.what != "B"
     fmt = output_format(args)
     digits = check_digits(args.digits)
-    kind = "nodes" if args.nodes else args.geometry
+    kind = "nodes" if args.nodes is not None else args.geometry
     geometry_text = describe_geometry(kind, el.shapes.domain, el.state == "axisymmetric")
     notes = matrix_notes(label, el.state, M.rows, M.cols)
     header = {"element": el.name, "variant": el.variant, "state": el.state,
