@@ -113,6 +113,29 @@ def parse_literal(value: str, where: str, magnitude: bool = True) -> sp.Rational
     return check_magnitude(num, where, value) if magnitude else num
 
 
+_WHOLE = re.compile(r"[+-]?\d{1,9}")
+
+
+def parse_whole(text, where: str, low: int = 1, high: int = 4096) -> int:
+    """A whole number written with digits only (no '_', at most 9 digits) within [low, high]."""
+    v = str(text).strip()
+    if not _WHOLE.fullmatch(v):
+        raise InputError(f"{where}: {echo(text)} is not a whole number (digits only, e.g. 4)")
+    n = int(v)
+    if not low <= n <= high:
+        raise InputError(f"{where} must be between {low} and {high}; got {n}")
+    return n
+
+
+def whole_number(text: str) -> int:
+    """argparse ``type=`` for a positive whole number (the range is the caller's to check)."""
+    import argparse
+    v = str(text).strip()
+    if not _WHOLE.fullmatch(v):
+        raise argparse.ArgumentTypeError(f"{echo(text)} is not a whole number (digits only, e.g. 2)")
+    return int(v)
+
+
 def check_magnitude(num, where: str, shown=None):
     """Refuse a non-zero value outside :data:`MAGNITUDE` (and anything not finite)."""
     shown = num if shown is None else shown

@@ -55,7 +55,7 @@ from .element import element
 from .errors import InputError
 from .formulations.base import B_op, Formulation, Point, Term
 from .geometry import Geometry, IsoMap
-from .limits import check_aspect
+from .limits import check_aspect, parse_literal
 from .stiffness import exact_blocks, numeric_stiffness
 from .symbols import eta, nu, r, x, xi, y
 
@@ -839,10 +839,7 @@ def parse_distortion(text: str) -> tuple[str, float]:
     if not eq or kind not in DISTORTIONS:
         raise InputError(f"--distortion {text!r}: write skew=DEGREES (e.g. skew=30), taper=FRACTION (e.g. "
                          "taper=0.2) or trapezoid=FRACTION")
-    try:
-        v = float(value)
-    except ValueError:
-        raise InputError(f"--distortion {text!r}: {value!r} is not a number") from None
+    v = float(parse_literal(value, f"--distortion {kind}"))
     _check_distortion(kind, v)
     return kind, v
 

@@ -29,7 +29,7 @@ from sympy.polys.matrices.exceptions import DMNonInvertibleMatrixError
 from sympy.polys.rings import ring
 
 from . import quadrature, reference
-from .errors import InputError
+from .errors import GeometryError, InputError
 from .formulations.base import Formulation, Point
 from .geometry import IsoMap
 from .output import Progress
@@ -338,16 +338,24 @@ def numeric_stiffness(name: str, variant: str, state: str, xy, E: float, nu: flo
     n = xy.shape[0]
     args = [xy[:, i, 0] for i in range(xy.shape[1])] + [xy[:, i, 1] for i in range(xy.shape[1])] + [E, nu, t]
     blocks: dict[str, np.ndarray] = {}
-    for block, funcs, weights in plan:
-        for (f, ls, ms, rs), w in zip(funcs, weights):
-            vals = [np.broadcast_to(np.asarray(v, dtype=float), (n,)) for v in f(*args)]
-            k1, k2, k3 = ls[0] * ls[1], ms[0] * ms[1], rs[0] * rs[1]
-            L = np.stack(vals[:k1], axis=1).reshape(n, *ls)
-            M = np.stack(vals[k1:k1 + k2], axis=1).reshape(n, *ms)
-            Rm = np.stack(vals[k1 + k2:k1 + k2 + k3], axis=1).reshape(n, *rs)
-            scale = vals[-1]
-            contrib = np.einsum("nki,nkl,nlj->nij", L, M, Rm) * (w * scale)[:, None, None]
-            blocks[block] = blocks[block] + contrib if block in blocks else contrib
+    # a degenerate element divides by det J = 0: no RuntimeWarning, it is refused below by index
+    with np.errstate(all="ignore"):
+        for block, funcs, weights in plan:
+            for (f, ls, ms, rs), w in zip(funcs, weights):
+                vals = [np.broadcast_to(np.asarray(v, dtype=float), (n,)) for v in f(*args)]
+                k1, k2, k3 = ls[0] * ls[1], ms[0] * ms[1], rs[0] * rs[1]
+                L = np.stack(vals[:k1], axis=1).reshape(n, *ls)
+                M = np.stack(vals[k1:k1 + k2], axis=1).reshape(n, *ms)
+                Rm = np.stack(vals[k1 + k2:k1 + k2 + k3], axis=1).reshape(n, *rs)
+                scale = vals[-1]
+                contrib = np.einsum("nki,nkl,nlj->nij", L, M, Rm) * (w * scale)[:, None, None]
+                blocks[block] = blocks[block] + contrib if block in blocks else contrib
+    finite = np.all([np.all(np.isfinite(B.reshape(n, -1)), axis=1) for B in blocks.values()], axis=0)
+    if not np.all(finite):
+        k = int(np.flatnonzero(~finite)[0])
+        where = f"element {k} of the batch" if n > 1 else "the element"
+        raise GeometryError(f"{name} {variant}: {where} gives a stiffness that is not finite (det J = 0 at a rule "
+                            "point: collapsed or degenerate nodes); screen the nodes with Element.validity")
     K = blocks.get("uu", np.zeros((n, ndof, ndof)))
     if n_int:
         Kua, Kaa = blocks["ua"], blocks["aa"]

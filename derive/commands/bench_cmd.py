@@ -4,6 +4,7 @@ from __future__ import annotations
 from .. import benchmarks as B
 from .. import catalog, plotting
 from ..errors import InputError
+from ..limits import parse_whole
 from ..mesh_io import write_vtu
 from ..output import CAUTION, Progress, check_digits, check_output_file, digits_override, parse_number, write_atomic
 from .common import add_digits_arg, add_force_arg, add_output_args, output_format, print_json
@@ -61,13 +62,7 @@ def add_arguments(p) -> None:
 
 
 def _int(text, what, low=1, high=4096):
-    try:
-        v = int(str(text).strip())
-    except ValueError:
-        raise InputError(f"{what}: {text!r} is not a whole number") from None
-    if not low <= v <= high:
-        raise InputError(f"{what} must be between {low} and {high}; got {v}")
-    return v
+    return parse_whole(text, what, low, high)
 
 
 def _floats(text, what):
@@ -114,26 +109,28 @@ def _run(args) -> int:
             if m not in B.CANTILEVER_MESHES:
                 raise InputError(f"--mesh {m!r} for the cantilever; allowed: {', '.join(B.CANTILEVER_MESHES)}, all")
         loads = ("shear", "extension") if args.load == "both" else (args.load,)
-        refine = _int(args.refine or 1, "--refine", 1, 64)
+        refine = _int(1 if args.refine is None else args.refine, "--refine", 1, 64)
         res = B.cantilever_study(args.element, args.variant, meshes, loads, refine, show_progress=show,
                                  memory_limit=limit)
     elif prob == "membrane":
-        if args.mesh:
+        if args.mesh is not None:
             levels = (_int(args.mesh, "--mesh"),)
         else:
-            k = _int(args.refine or 5, "--refine", 1, 10)
+            k = _int(5 if args.refine is None else args.refine, "--refine", 1, 10)
             levels = tuple(2 ** i for i in range(1, k + 1))
         res = B.membrane_study(args.element, args.variant, levels, show_progress=show, memory_limit=limit)
     elif prob == "cylinder":
-        if args.mesh:
+        if args.mesh is not None:
             levels = (_int(args.mesh, "--mesh", 1, 1024),)
         else:
-            k = _int(args.refine or 4, "--refine", 1, 9)
+            k = _int(4 if args.refine is None else args.refine, "--refine", 1, 9)
             levels = tuple(2 ** i for i in range(1, k + 1))
-        nus = _floats(args.nu, "--nu") if args.nu else B.CYLINDER["nus"]
+        nus = _floats(args.nu, "--nu") if args.nu is not None else B.CYLINDER["nus"]
         res = B.cylinder_study(args.element, args.variant, levels, nus, show_progress=show, memory_limit=limit)
     else:
         depths = [_int(d, "--depths", 1, 64) for d in str(args.depths).split(",") if d.strip()]
+        if not depths:
+            raise InputError("--depths is empty; give elements through the depth, e.g. 1,2,4")
         acc = float(parse_number(args.accuracy, "--accuracy"))
         variants = [v.strip() for v in args.variant.split(",") if v.strip()]
         if not variants:

@@ -5,6 +5,7 @@ from pathlib import Path
 
 from .. import charts, plotting
 from ..errors import InputError
+from ..limits import check_aspect
 from ..output import CAUTION, check_output_file, parse_number, working
 from .common import add_force_arg, add_output_args, output_format, print_json
 from .locking_cmd import parse_nus
@@ -48,7 +49,13 @@ def _pair(text: str, what: str) -> tuple[float, float]:
     parts = text.split(":")
     if len(parts) != 2:
         raise InputError(f"{what} {text!r}: give a range lo:hi, e.g. 1:20")
-    return float(parse_number(parts[0], what)), float(parse_number(parts[1], what))
+    lo, hi = float(parse_number(parts[0], what)), float(parse_number(parts[1], what))
+    if what == "--aspect":
+        check_aspect(lo, "--aspect")
+        check_aspect(hi, "--aspect")
+    if not lo < hi:
+        raise InputError(f"{what} {text!r}: need lo < hi")
+    return lo, hi
 
 
 def run(args) -> int:
@@ -77,16 +84,16 @@ def run(args) -> int:
 def _figure(args, specs, tol):
     """The chart's figure and the parameters it was drawn for."""
     if args.kind == "locking":
-        nus = parse_nus(args.nu) if args.nu else [0.0, 0.3, 0.49]
-        aspect = _pair(args.aspect, "--aspect") if args.aspect else (1.0, 20.0)
+        nus = parse_nus(args.nu) if args.nu is not None else [0.0, 0.3, 0.49]
+        aspect = _pair(args.aspect, "--aspect") if args.aspect is not None else (1.0, 20.0)
         fig = charts.locking_chart(specs, args.state, nus, aspect, tol)
         meta = {"nu": nus, "aspect": list(aspect)}
     elif args.kind == "contour":
         if len(specs) != 1:
             raise InputError("a contour chart is for one element: give --elements with exactly one entry")
         name, variant = specs[0]
-        nu_range = _pair(args.nu, "--nu") if args.nu else (0.0, 0.499)
-        aspect = _pair(args.aspect, "--aspect") if args.aspect else (1.0, 20.0)
+        nu_range = _pair(args.nu, "--nu") if args.nu is not None else (0.0, 0.499)
+        aspect = _pair(args.aspect, "--aspect") if args.aspect is not None else (1.0, 20.0)
         fig = charts.contour_chart(name, variant, args.state, aspect, nu_range, tolerance=tol)
         meta = {"nu": list(nu_range), "aspect": list(aspect)}
     else:
@@ -95,8 +102,8 @@ def _figure(args, specs, tol):
         if not eq:
             raise InputError(f"--distortion {args.distortion!r}: write KIND=lo:hi, e.g. taper=0:0.6 or skew=0:45")
         values = _pair(rng, "--distortion")
-        nu = float(parse_number(args.nu, "--nu")) if args.nu else 0.3
-        aspect = float(parse_number(args.aspect, "--aspect")) if args.aspect else 1.0
+        nu = float(parse_number(args.nu, "--nu")) if args.nu is not None else 0.3
+        aspect = check_aspect(parse_number(args.aspect, "--aspect"), "--aspect") if args.aspect is not None else 1.0
         fig = charts.distortion_chart(specs, args.state, kind, values, aspect, nu)
         meta = {"nu": nu, "aspect": aspect, "distortion": kind, "range": list(values)}
     return fig, meta

@@ -7,6 +7,7 @@ import time
 from pathlib import Path
 
 from ..errors import InputError
+from ..limits import whole_number
 from ..output import OutputFolder, Progress
 from .common import add_output_args, output_format, print_json, resolve_element
 
@@ -42,7 +43,7 @@ def add_arguments(p) -> None:
     p.add_argument("--check", action="store_true",
                    help="compare the committed set with what the generator produces now; exit 1 on any difference")
     p.add_argument("--list", action="store_true", help="list the committed set (element, variant, state, languages)")
-    p.add_argument("--jobs", type=int, default=None, help="worker processes for --all/--check (default: up to 2)")
+    p.add_argument("--jobs", type=whole_number, default=None, help="worker processes for --all/--check (default: up to 2)")
     add_output_args(p, formats=False)
 
 

@@ -7,6 +7,7 @@ import sympy as sp
 
 from .. import catalog
 from ..errors import InputError
+from ..limits import echo, parse_whole
 from ..locking import display_form, report
 from ..symbols import nu, r
 from ..output import CAUTION, check_digits, num, parse_number, working
@@ -47,17 +48,19 @@ def parse_nus(text: str | None) -> list[float] | None:
     if ":" in text:
         parts = text.split(":")
         if len(parts) not in (2, 3):
-            raise InputError(f"--nu {text!r}: a range is lo:hi or lo:hi:steps, e.g. 0:0.45")
+            raise InputError(f"--nu {echo(text)}: a range is lo:hi or lo:hi:steps, e.g. 0:0.45")
         lo, hi = (float(parse_number(v, "--nu")) for v in parts[:2])
-        steps = int(parts[2]) if len(parts) == 3 and parts[2].strip().isdigit() else 10
-        if len(parts) == 3 and not parts[2].strip().isdigit():
-            raise InputError(f"--nu {text!r}: the number of steps must be a positive integer")
-        if not lo < hi or not 1 <= steps <= 200:
-            raise InputError(f"--nu {text!r}: need lo < hi and 1..200 steps")
-        return [lo + (hi - lo) * k / steps for k in range(steps + 1)]
-    vals = [float(parse_number(v, "--nu")) for v in text.split(",") if v.strip()]
+        steps = parse_whole(parts[2], "--nu steps", 1, 200) if len(parts) == 3 else 10
+        if not lo < hi:
+            raise InputError(f"--nu {echo(text)}: need lo < hi")
+        vals = [lo + (hi - lo) * k / steps for k in range(steps + 1)]
+    else:
+        vals = [float(parse_number(v, "--nu")) for v in text.split(",") if v.strip()]
     if not vals:
         raise InputError("--nu is empty; give a value such as 0.3")
+    for v in vals:
+        if not -1 < v <= 0.5:
+            raise InputError(f"--nu {echo(text)}: Poisson's ratio {v:g} is not allowed; -1 < nu <= 0.5")
     return vals
 
 
