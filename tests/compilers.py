@@ -1,7 +1,7 @@
 """One rule for tests that need gcc or gfortran.
 
 On a user's machine a missing compiler skips the test with the reason (shown in the run's
-summary through ``-rs`` in pyproject's addopts).  Under CI (the ``CI`` environment variable
+summary through ``-rfEs`` in pyproject's addopts).  Under CI (the ``CI`` environment variable
 set to anything but ``""``, ``0`` or ``false``, as .ci/run and the common CI services do) a
 missing compiler fails the test: the generated native kernels would otherwise go unproven
 while the run reports green.
