@@ -282,7 +282,7 @@ def test_element_help_mentions_spec_files(cmd, capsys):
 
 
 @pytest.mark.parametrize("cmd", ["list", "locking", "chart", "modes", "patch", "bench", "perf", "demo", "shapes",
-                                 "stiffness"])
+                                 "stiffness", "samples", "check", "kernel"])
 def test_json_help_and_examples(cmd, capsys):
     with pytest.raises(SystemExit):
         main([cmd, "--help"])
@@ -416,3 +416,14 @@ def test_demo_matrix_files_say_what_they_hold_and_parse_back(tmp_path, capsys):
         assert text.startswith(("# K of " + element, "% K of " + element)) and output.CAUTION in text
         assert main(["check", str(tmp_path / name), "--element", element]) == 0, name   # derive's own output
     capsys.readouterr()
+
+
+def test_samples_and_check_json_are_strict(tmp_path, monkeypatch, capsys):
+    monkeypatch.chdir(tmp_path)
+    code, out, _ = run(["samples", "--json"], capsys)
+    assert code == 0 and len(strict_loads(out)["files"]) == 2
+    code, out, _ = run(["check", "solver-k.csv", "--element", "Q4", "--nodes", "0,0 2,0 2.5,1 0,1.5",
+                        "--set", "E=210e9,nu=0.3,t=0.01", "--json"], capsys)
+    assert code == 0 and strict_loads(out)["match"] is True
+    code, out, _ = run(["check", "my-k.txt", "--element", "Q4", "--json"], capsys)
+    assert code == 1 and strict_loads(out)["match"] is False
