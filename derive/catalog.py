@@ -12,10 +12,11 @@ from functools import lru_cache
 
 import sympy as sp
 
+from . import models, reference
 from . import shapes as shapes_mod
 from .errors import InputError
 from .material import STATES
-from .symbols import eta, xi
+from .symbols import eta, xi, zeta
 
 R_ = sp.Rational
 
@@ -39,8 +40,27 @@ class ElementInfo:
         return len(self.nodes)
 
     @property
+    def dim(self) -> int:
+        """Reference (and physical) dimension of the element: 1, 2 or 3."""
+        return reference.dimension(self.domain)
+
+    @property
+    def default_state(self) -> str:
+        """The model used when none is named: plane-stress in 2-D, solid in 3-D."""
+        return {2: "plane-stress", 3: "solid"}.get(self.dim, models.names(self.dim)[0] if models.names(self.dim) else "")
+
+    def states(self) -> tuple[str, ...]:
+        """The kinematic models of the element's dimension."""
+        return models.names(self.dim)
+
+    def ndof_for(self, state: str) -> int:
+        """DOFs of the element in a model: nodes x the model's fields."""
+        return models.get(state).ndof(self.n_nodes)
+
+    @property
     def ndof(self) -> int:
-        return 2 * len(self.nodes)
+        """DOFs in the element's default model (nodes x fields)."""
+        return self.ndof_for(self.default_state)
 
     def rule_name(self, which: str) -> str:
         """Resolve "full" / "reduced" to this element's rule name; other names pass through."""
@@ -81,19 +101,25 @@ def register_variant(info: VariantInfo) -> None:
 for _v in (
     VariantInfo("full", "displacement element, full integration", "displacement:full"),
     VariantInfo("reduced", "uniformly reduced integration", "displacement:reduced"),
-    VariantInfo("selective", "reduced rule for the volumetric part of D only (all states; T6 plane states)", "selective:selective",
+    VariantInfo("selective", "reduced rule for the volumetric part of D only (all states; T6 plane states; T10 keeps 3 conformal zero modes)", "selective:selective",
                 "Doherty, Wilson & Taylor (1969); Hughes (1987)"),
     VariantInfo("incompatible", "bubble modes 1-xi^2, 1-eta^2, own Jacobian; fails the patch test off "
                 "parallelograms (all states)", "incompatible:incompatible", "Wilson, Taylor, Doherty & Ghaboussi (1973)"),
     VariantInfo("incompatible-centred", "bubble modes through the centre Jacobian, scaled det J0/det J; passes "
-                "the patch test (plane states)", "incompatible:incompatible_centred", "Taylor, Beresford & Wilson (1976)",
-                ("plane-stress", "plane-strain")),
+                "the patch test (plane states, solid)", "incompatible:incompatible_centred", "Taylor, Beresford & Wilson (1976)",
+                ("plane-stress", "plane-strain", "solid")),
     VariantInfo("bbar", "B-bar: dilatation projected on a constant (Q4) or linear (Q8, Q9, T6) pressure, condensed (plane states; axisymmetric Q4)", "bbar:bbar",
                 "Hughes (1980)"),
     VariantInfo("eas4", "enhanced assumed strain, 4 modes (plane states)", "eas:eas4", "Simo & Rifai (1990)",
                 ("plane-stress", "plane-strain")),
     VariantInfo("hybrid5", "assumed-stress hybrid, 5 stress parameters (plane states)", "hybrid:hybrid5",
                 "Pian & Sumihara (1984)", ("plane-stress", "plane-strain")),
+    VariantInfo("eas9", "enhanced assumed strain, 9 modes (H8, solid)", "eas:eas9",
+                "Simo & Rifai (1990)", ("solid",)),
+    VariantInfo("eas21", "enhanced assumed strain, 21 modes (H8, solid)", "eas:eas21",
+                "Andelfinger & Ramm (1993)", ("solid",)),
+    VariantInfo("hybrid18", "assumed-stress hybrid, 18 stress parameters (H8, solid)", "hybrid:hybrid18",
+                "Pian & Tong (1986)", ("solid",)),
 ):
     register_variant(_v)
 
@@ -115,6 +141,41 @@ register_element(ElementInfo(
     "Q9", "9-node Lagrange quadrilateral", "square", _SQ + _SQ_MID + ((0, 0),),
     (sp.Integer(1), xi, eta, xi ** 2, xi * eta, eta ** 2, xi ** 2 * eta, xi * eta ** 2, xi ** 2 * eta ** 2),
     "gauss-3x3", "gauss-2x2", ("full", "reduced", "selective", "bbar")))
+
+
+_CUBE = reference.vertices("cube")
+_CUBE_EDGES = ((0, 1), (1, 2), (2, 3), (3, 0), (4, 5), (5, 6), (6, 7), (7, 4), (0, 4), (1, 5), (2, 6), (3, 7))
+_CUBE_MID = tuple(tuple((u + v) / 2 for u, v in zip(_CUBE[i], _CUBE[j])) for i, j in _CUBE_EDGES)
+_CUBE_FACES = ((0, 0, -1), (0, -1, 0), (1, 0, 0), (0, 1, 0), (-1, 0, 0), (0, 0, 1))
+_TET = reference.vertices("tetrahedron")
+_TET_EDGES = ((0, 1), (1, 2), (2, 0), (0, 3), (1, 3), (2, 3))
+_TET_MID = tuple(tuple(R_(u + v, 2) for u, v in zip(_TET[i], _TET[j])) for i, j in _TET_EDGES)
+_LIN3 = (sp.Integer(1), xi, eta, zeta)
+_QUAD3 = _LIN3 + (xi ** 2, eta ** 2, zeta ** 2, xi * eta, eta * zeta, zeta * xi)
+_SOLID_BASIC = ("full", "reduced", "selective", "bbar")
+
+register_element(ElementInfo(
+    "H8", "8-node trilinear hexahedron", "cube", _CUBE,
+    _LIN3 + (xi * eta, eta * zeta, zeta * xi, xi * eta * zeta), "gauss-2x2x2", "gauss-1x1x1",
+    _SOLID_BASIC + ("incompatible", "incompatible-centred", "eas9", "eas21", "hybrid18")))
+register_element(ElementInfo(
+    "H20", "20-node serendipity hexahedron", "cube", _CUBE + _CUBE_MID,
+    _QUAD3 + (xi ** 2 * eta, xi ** 2 * zeta, eta ** 2 * xi, eta ** 2 * zeta, zeta ** 2 * xi, zeta ** 2 * eta,
+              xi * eta * zeta, xi ** 2 * eta * zeta, xi * eta ** 2 * zeta, xi * eta * zeta ** 2),
+    "gauss-3x3x3", "gauss-2x2x2", _SOLID_BASIC))
+register_element(ElementInfo(
+    "H27", "27-node triquadratic Lagrange hexahedron", "cube", _CUBE + _CUBE_MID + _CUBE_FACES + ((0, 0, 0),),
+    tuple(xi ** i * eta ** j * zeta ** k for k in range(3) for j in range(3) for i in range(3)),
+    "gauss-3x3x3", "gauss-2x2x2", _SOLID_BASIC))
+register_element(ElementInfo(
+    "T4", "4-node linear tetrahedron (constant strain)", "tetrahedron", _TET, _LIN3,
+    "tetrahedron-d1", "tetrahedron-d1", ("full",)))
+register_element(ElementInfo(
+    "T10", "10-node quadratic tetrahedron", "tetrahedron", _TET + _TET_MID, _QUAD3,
+    "tetrahedron-d2", "tetrahedron-d1", _SOLID_BASIC))
+register_element(ElementInfo(
+    "W6", "6-node linear wedge (triangular prism)", "wedge", reference.vertices("wedge"),
+    _LIN3 + (xi * zeta, eta * zeta), "wedge-d2x2", "wedge-d1x1", ("full", "reduced")))
 
 
 #: user-defined elements loaded from spec files in this process, by upper-case name; kept apart
@@ -164,6 +225,15 @@ def check_state(state: str) -> str:
     return state
 
 
+def check_element_state(info: ElementInfo, state: str) -> None:
+    """Refuse a model of another dimension (a 2-D element with the solid model and vice versa)."""
+    model = models.get(check_state(state))
+    if model.dim != info.dim:
+        allowed = ", ".join(info.states()) or "none"
+        raise InputError(f"element {info.name} is {info.dim}-D but state {state!r} is a {model.dim}-D model; "
+                         f"allowed for {info.name}: {allowed}")
+
+
 @lru_cache(maxsize=None)
 def shape_set(name: str) -> shapes_mod.ShapeSet:
     info = element_info(name)
@@ -178,6 +248,7 @@ def check_variant_state(v: VariantInfo, state: str) -> None:
 def formulation(info: ElementInfo, variant: str, state: str):
     """Build the variant's :class:`~derive.formulations.base.Formulation` for this element."""
     v = check_variant(info, variant)
+    check_element_state(info, state)
     check_variant_state(v, state)
     module, func = v.builder.split(":")
     mod = importlib.import_module(f"derive.formulations.{module}")

@@ -66,6 +66,8 @@ def main(argv: list[str] | None = None) -> int:
         parser.print_help()
         return 2
     try:
+        from .commands.common import default_state
+        default_state(args)
         status = int(args._run(args) or 0)
         sys.stdout.flush()  # a full device or a closed pipe shows here, not at interpreter exit
         return status

@@ -1,8 +1,11 @@
-"""Constitutive matrices D(E, nu) for the plane and axisymmetric states, with input checks.
+"""Constitutive matrices D(E, nu) for the plane, axisymmetric and solid models, with input checks.
 
-Voigt order [xx, yy, xy] with engineering shear strain (axisymmetric: [rr, zz, tt, rz]).
-D is isotropic linear elastic; the deviatoric/volumetric split used by selective
-integration and B-bar is in :func:`split`.
+Voigt order [xx, yy, xy] with engineering shear strain (axisymmetric: [rr, zz, tt, rz]; solid:
+[xx, yy, zz, yz, zx, xy], engineering shear gamma_ij = 2 eps_ij).  D is isotropic linear
+elastic; the deviatoric/volumetric split used by selective integration and B-bar is in
+:func:`split`.  Anisotropic solids: :func:`orthotropic` and :func:`transversely_isotropic`
+build D from engineering constants as the inverse of the compliance, after a
+positive-definiteness check.
 """
 from __future__ import annotations
 
@@ -15,7 +18,9 @@ from .limits import check_array_positive
 from .symbols import E as E_sym
 from .symbols import nu as nu_sym
 
-STATES = ("plane-stress", "plane-strain", "axisymmetric")
+#: the kinematic model names (``state`` in the public API); their fields, B and thickness are
+#: in :mod:`derive.models`
+STATES = ("plane-stress", "plane-strain", "axisymmetric", "solid")
 
 
 def check_state(state: str) -> str:
@@ -64,6 +69,10 @@ def D(state: str = "plane-stress", E=E_sym, nu=nu_sym) -> sp.Matrix:
     f = E / ((1 + nu) * (1 - 2 * nu))
     if state == "plane-strain":
         return f * sp.Matrix([[1 - nu, nu, 0], [nu, 1 - nu, 0], [0, 0, (1 - 2 * nu) / 2]])
+    if state == "solid":
+        g = (1 - 2 * nu) / 2
+        return f * sp.Matrix([[1 - nu, nu, nu, 0, 0, 0], [nu, 1 - nu, nu, 0, 0, 0], [nu, nu, 1 - nu, 0, 0, 0],
+                              [0, 0, 0, g, 0, 0], [0, 0, 0, 0, g, 0], [0, 0, 0, 0, 0, g]])
     return f * sp.Matrix([[1 - nu, nu, nu, 0], [nu, 1 - nu, nu, 0], [nu, nu, 1 - nu, 0], [0, 0, 0, (1 - 2 * nu) / 2]])
 
 
@@ -76,6 +85,8 @@ def volumetric_vector(state: str) -> sp.Matrix:
     """m with m^T eps = the in-plane (or 3-D) volumetric strain for the state's Voigt order."""
     if state == "axisymmetric":
         return sp.Matrix([1, 1, 1, 0])
+    if state == "solid":
+        return sp.Matrix([1, 1, 1, 0, 0, 0])
     return sp.Matrix([1, 1, 0])
 
 
@@ -85,8 +96,8 @@ def split(state: str = "plane-stress", E=E_sym, nu=nu_sym) -> tuple[sp.Matrix, s
     The three-dimensional deviatoric/volumetric split of the state's isotropic material, with
     m the state's volumetric vector (:func:`volumetric_vector`):
 
-    * plane strain and axisymmetric: kappa = lambda + 2 mu / 3 (the 3-D bulk modulus; in plane
-      strain m^T eps is the 3-D volume change because eps_zz = 0);
+    * solid, plane strain and axisymmetric: kappa = lambda + 2 mu / 3 (the 3-D bulk modulus; in
+      plane strain m^T eps is the 3-D volume change because eps_zz = 0);
     * plane stress: the same form with lambda replaced by lambda* = 2 lambda mu / (lambda + 2 mu)
       = E nu / (1 - nu^2), so kappa = lambda* + 2 mu / 3.
 
@@ -105,3 +116,68 @@ def split(state: str = "plane-stress", E=E_sym, nu=nu_sym) -> tuple[sp.Matrix, s
     Dvol = kappa * m * m.T
     Ddev = (Dm - Dvol).applyfunc(sp.cancel)
     return Ddev, Dvol, kappa
+
+
+# --------------------------------------------------------------------------- anisotropic solids
+
+def _value(v):
+    if isinstance(v, float):
+        return sp.nsimplify(v, rational=True)
+    return sp.sympify(v) if not isinstance(v, sp.Basic) else v
+
+
+def orthotropic(E1, E2, E3, nu12, nu13, nu23, G12, G13, G23) -> sp.Matrix:
+    """Solid D (Voigt [xx, yy, zz, yz, zx, xy]) of an orthotropic material, axes 1, 2, 3 = x, y, z.
+
+    Engineering constants: Young's moduli E_i, major Poisson's ratios nu_ij (strain in j from
+    stress in i: eps_j = -nu_ij sigma_i / E_i; nu_ji = nu_ij E_j / E_i) and shear moduli G_ij.
+    D = C^-1 with the compliance
+
+        C = [[1/E1, -nu12/E1, -nu13/E1], [-nu12/E1, 1/E2, -nu23/E2], [-nu13/E1, -nu23/E2, 1/E3]]
+            (+) diag(1/G23, 1/G13, 1/G12).
+
+    Numeric constants are checked first: every modulus > 0 and C positive definite
+    (1 - nu12 nu21 > 0, 1 - nu23 nu32 > 0, 1 - nu13 nu31 > 0 and
+    1 - nu12 nu21 - nu23 nu32 - nu13 nu31 - 2 nu21 nu32 nu13 > 0); a violation is a one-line
+    :class:`MaterialError`.  Symbolic constants are passed through unchecked.
+    """
+    E1, E2, E3, nu12, nu13, nu23, G12, G13, G23 = (_value(v) for v in (E1, E2, E3, nu12, nu13, nu23,
+                                                                      G12, G13, G23))
+    names = ("E1", "E2", "E3", "G12", "G13", "G23")
+    for name, v in zip(names, (E1, E2, E3, G12, G13, G23)):
+        if v.is_number and not (math.isfinite(float(v)) and float(v) > 0):
+            raise MaterialError(f"orthotropic material: {name} = {v} is not allowed; moduli must be finite numbers > 0")
+    normal = sp.Matrix([[1 / E1, -nu12 / E1, -nu13 / E1], [-nu12 / E1, 1 / E2, -nu23 / E2],
+                        [-nu13 / E1, -nu23 / E2, 1 / E3]])
+    values = (E1, E2, E3, nu12, nu13, nu23)
+    if all(v.is_number for v in values):
+        nu21, nu31, nu32 = nu12 * E2 / E1, nu13 * E3 / E1, nu23 * E3 / E2
+        minors = (("1 - nu12 nu21", 1 - nu12 * nu21), ("1 - nu23 nu32", 1 - nu23 * nu32),
+                  ("1 - nu13 nu31", 1 - nu13 * nu31),
+                  ("1 - nu12 nu21 - nu23 nu32 - nu13 nu31 - 2 nu21 nu32 nu13",
+                   1 - nu12 * nu21 - nu23 * nu32 - nu13 * nu31 - 2 * nu21 * nu32 * nu13))
+        for text, v in minors:
+            if not float(v) > 0:
+                raise MaterialError(f"orthotropic material is not positive definite: {text} = {float(v):.6g} <= 0; "
+                                    "check the Poisson's ratios against the moduli (|nu_ij| < sqrt(E_i/E_j))")
+    Dn = normal.inv().applyfunc(sp.cancel)
+    D = sp.zeros(6, 6)
+    D[:3, :3] = Dn
+    D[3, 3], D[4, 4], D[5, 5] = G23, G13, G12
+    return D
+
+
+def transversely_isotropic(E_p, E_t, nu_p, nu_tp, G_t) -> sp.Matrix:
+    """Solid D of a transversely isotropic material with the z axis as its axis of symmetry.
+
+    In-plane (x-y) modulus E_p and Poisson's ratio nu_p (shear modulus E_p / (2 (1 + nu_p))),
+    transverse (z) modulus E_t, nu_tp the Poisson's ratio of in-plane strain under stress along
+    z (eps_x = -nu_tp sigma_z / E_t, so nu_13 = nu_tp E_p / E_t) and G_t the transverse shear
+    modulus (yz, zx).  The orthotropic constructor with E1 = E2 = E_p, E3 = E_t, nu12 = nu_p,
+    nu13 = nu23 = nu_tp E_p / E_t, G12 = E_p / (2 (1 + nu_p)), G13 = G23 = G_t, and its checks.
+    """
+    E_p, E_t, nu_p, nu_tp, G_t = (_value(v) for v in (E_p, E_t, nu_p, nu_tp, G_t))
+    if E_t.is_number and not float(E_t) > 0:
+        raise MaterialError(f"transversely isotropic material: E_t = {E_t} is not allowed; moduli must be > 0")
+    nu_pt = nu_tp * E_p / E_t
+    return orthotropic(E_p, E_p, E_t, nu_p, nu_pt, nu_pt, E_p / (2 * (1 + nu_p)), G_t, G_t)

@@ -268,7 +268,19 @@ def describe_geometry(kind: str, domain: str, axisymmetric: bool = False) -> str
     if kind == "nodes":
         return "the given nodal coordinates"
     if kind == "general":
+        if domain in ("cube", "tetrahedron", "wedge"):
+            return "general (nodal coordinates x1, y1, z1, ..., xn, yn, zn)"
         return "general (nodal coordinates x1, y1, ..., xn, yn)"
+    if kind in ("brick", "parallelepiped"):
+        shape = ("brick 2a x 2b x 2c centred at the origin" if kind == "brick" else
+                 "parallelepiped x = aX + sY, y = bY, z = cZ (skew parameter s) centred at the origin")
+        if domain == "tetrahedron":
+            return "corner tetrahedron (-a,-b,-c), (a,-b,-c), (-a,b,-c), (-a,-b,c) of the " + shape
+        if domain == "wedge":
+            return "triangular prism over the lower-left half of the " + shape
+        return shape
+    if kind == "segment":
+        return "segment of length 2a along x centred at the origin"
     if domain == "triangle":
         if kind == "rectangle":
             return ("right triangle with legs 2a along x and 2b along y, right angle at (-a, -b) "
@@ -282,12 +294,16 @@ def describe_geometry(kind: str, domain: str, axisymmetric: bool = False) -> str
 
 def matrix_notes(label: str, state: str, rows: int, cols: int) -> list[str]:
     """Header lines that describe the matrix printed: its shape, row/column meaning, symmetry."""
-    strains = "rr, zz, tt (hoop), rz" if state == "axisymmetric" else "xx, yy, xy (engineering shear)"
+    from . import models
+    strains = {"axisymmetric": "rr, zz, tt (hoop), rz", "solid": "xx, yy, zz, yz, zx, xy (engineering shear)"}.get(
+        state, "xx, yy, xy (engineering shear)")
+    dofs = "interleaved " + ", ".join(models.get(state).dof_names(2)) + ", ..." if state in models.MODELS else \
+        "interleaved u1, v1, u2, v2, ..."
     if label == "K":
-        return [f"{rows} x {cols}; rows and columns are the DOFs interleaved u1, v1, u2, v2, ...",
+        return [f"{rows} x {cols}; rows and columns are the DOFs {dofs}",
                 "symmetric: upper triangle shown (K[j,i] = K[i,j])"]
     if label == "B":
-        return [f"{rows} x {cols}; rows are the strains {strains}; columns the DOFs interleaved u1, v1, u2, v2, ...",
+        return [f"{rows} x {cols}; rows are the strains {strains}; columns the DOFs {dofs}",
                 "every entry shown (B is not symmetric)"]
     return [f"{rows} x {cols} constitutive matrix; rows and columns are the stresses/strains {strains}",
             "symmetric: upper triangle shown (D[j,i] = D[i,j])"]

@@ -4,7 +4,8 @@ Example (``derive/specs/q8-serendipity.toml``)::
 
     name = "Q8S"
     description = "8-node serendipity quadrilateral from its monomials"
-    domain = "square"                      # "square" [-1,1]^2 or "triangle" (0,0),(1,0),(0,1)
+    domain = "square"                      # "square" [-1,1]^2 or "triangle" (0,0),(1,0),(0,1);
+                                           # 3-D: "hexahedron" [-1,1]^3, "tetrahedron", "wedge"
     nodes = [[-1, -1], [1, -1], [1, 1], [-1, 1], [0, -1], [1, 0], [0, 1], [-1, 0]]
     basis = ["1", "xi", "eta", "xi^2", "xi*eta", "eta^2", "xi^2*eta", "xi*eta^2"]
     full_rule = "gauss-3x3"                # optional; default from the basis degree
@@ -40,6 +41,9 @@ else:  # pragma: no cover
     import tomli as tomllib
 
 SPEC_DIR = Path(__file__).parent / "specs"
+#: domain names a spec may use -> reference domain ("hexahedron" is the reference cube)
+DOMAIN_NAMES = {"square": "square", "triangle": "triangle", "hexahedron": "cube", "cube": "cube",
+                "tetrahedron": "tetrahedron", "wedge": "wedge"}
 KEYS = ("name", "description", "domain", "nodes", "basis", "full_rule", "reduced_rule")
 
 #: a spec name: a letter, then letters, digits, "_" or "-"; at most 16 characters (it becomes
@@ -74,16 +78,22 @@ def load_spec(path) -> tuple[ElementInfo, ShapeSet]:
             raise SpecError(f"{where}: missing key {key!r} (required: name, domain, nodes, basis)")
     name = check_name(data["name"], where)
     description = _check_description(data.get("description", "user-defined element"), where)
-    domain = str(data["domain"])
+    domain = DOMAIN_NAMES.get(str(data["domain"]).strip().lower(), str(data["domain"]))
+    if domain not in DOMAIN_NAMES.values():
+        raise SpecError(f"{where}: unknown domain {data['domain']!r}; allowed: {', '.join(DOMAIN_NAMES)}")
+    from .reference import coordinates
+    coords = coordinates(domain)
+    shape = "[" + ", ".join(c.name for c in coords) + "]"
+    what = "a pair" if len(coords) == 2 else "a triple"
     if not isinstance(data["nodes"], list) or not data["nodes"]:
-        raise SpecError(f"{where}: 'nodes' must be a list of [xi, eta] pairs")
+        raise SpecError(f"{where}: 'nodes' must be a list of {shape} coordinates")
     if len(data["nodes"]) > MAX_NODES:
         raise SpecError(f"{where}: {len(data['nodes'])} nodes; a spec has at most {MAX_NODES} nodes "
                         "(the limit of the exact derivation's running time)")
     nodes = []
     for k, node in enumerate(data["nodes"], start=1):
-        if not isinstance(node, list) or len(node) != 2:
-            raise SpecError(f"{where}: node {k} must be a pair [xi, eta]")
+        if not isinstance(node, list) or len(node) != len(coords):
+            raise SpecError(f"{where}: node {k} must be {what} {shape} on the {data['domain']}")
         nodes.append(tuple(_coordinate(v, where, k) for v in node))
     basis_raw = data["basis"]
     if isinstance(basis_raw, list):
@@ -94,7 +104,7 @@ def load_spec(path) -> tuple[ElementInfo, ShapeSet]:
         raise SpecError(f"{where}: basis: character {bad.group()!r} is not allowed (allowed: ASCII monomials such "
                         "as xi^2*eta, separated by commas)")
     try:
-        basis = monomials(basis_text)
+        basis = monomials(basis_text, domain)
         _check_degree(basis, where)
         shapes = from_nodes(name, domain, nodes, basis)
     except SpecError as exc:
@@ -228,9 +238,20 @@ def default_rules(domain: str, basis) -> tuple[str, str]:
     which n = p + 1 Gauss points integrate exactly.  Triangle: total degree d gives
     products of degree 2d - 2.
     """
-    from .symbols import eta, xi
+    from .symbols import eta, xi, zeta
     if domain == "square":
         p = max(max(sp.degree(m, xi), sp.degree(m, eta)) for m in basis)
         return f"gauss-{p + 1}x{p + 1}", f"gauss-{max(p, 1)}x{max(p, 1)}"
+    if domain == "cube":
+        p = max(max(sp.degree(m, s) for s in (xi, eta, zeta)) for m in basis)
+        return f"gauss-{p + 1}x{p + 1}x{p + 1}", f"gauss-{max(p, 1)}x{max(p, 1)}x{max(p, 1)}"
+    if domain == "triangle":
+        d = max(sp.Poly(m, xi, eta).total_degree() for m in basis)
+        return f"triangle-d{max(1, 2 * d - 2)}", f"triangle-d{max(1, 2 * d - 3)}"
+    if domain == "tetrahedron":
+        d = max(sp.Poly(m, xi, eta, zeta).total_degree() for m in basis)
+        return f"tetrahedron-d{min(5, max(1, 2 * d - 2))}", f"tetrahedron-d{min(5, max(1, 2 * d - 3))}"
+    # wedge: triangle degree in (xi, eta), Gauss points in zeta
     d = max(sp.Poly(m, xi, eta).total_degree() for m in basis)
-    return f"triangle-d{max(1, 2 * d - 2)}", f"triangle-d{max(1, 2 * d - 3)}"
+    p = max(sp.degree(m, zeta) for m in basis)
+    return f"wedge-d{min(5, max(1, 2 * d))}x{p + 1}", f"wedge-d{max(1, 2 * d - 2)}x{max(p, 1)}"

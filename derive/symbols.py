@@ -20,11 +20,13 @@ c = sp.symbols("c")
 r = sp.symbols("r")
 #: mean radius of an axisymmetric element's reference rectangle
 R = sp.symbols("R")
+#: skew parameter of the parallelepiped: shift in x of the face y = +b (x = a X + s Y)
+s = sp.symbols("s")
 E, nu, t = sp.symbols("E nu t")
 
 REFERENCE = (xi, eta)
 MATERIAL = (E, nu, t)
-GEOMETRY = (a, b, c, R)
+GEOMETRY = (a, b, c, R, s)
 
 
 def nodal(n: int) -> tuple[tuple[sp.Symbol, ...], tuple[sp.Symbol, ...]]:
@@ -34,17 +36,22 @@ def nodal(n: int) -> tuple[tuple[sp.Symbol, ...], tuple[sp.Symbol, ...]]:
     return xs, ys
 
 
+def nodal_axes(n: int, dim: int) -> tuple[tuple[sp.Symbol, ...], ...]:
+    """Symbolic nodal coordinates per axis: (x1..xn,), (x.., y..) or (x.., y.., z1..zn)."""
+    return tuple(tuple(sp.Symbol(f"{axis}{i}") for i in range(1, n + 1)) for axis in "xyz"[:dim])
+
+
 def by_name() -> dict[str, sp.Symbol]:
     """Map of every fixed convention symbol name to its canonical symbol."""
-    table = {s.name: s for s in (xi, eta, zeta, x, y, z, a, b, c, r, R, E, nu, t)}
+    table = {sym.name: sym for sym in (xi, eta, zeta, x, y, z, a, b, c, r, R, s, E, nu, t)}
     return table
 
 
 def lookup(name: str) -> sp.Symbol | None:
-    """Canonical symbol for a convention name, including nodal x<i>/y<i> (i >= 1); else None."""
+    """Canonical symbol for a convention name, including nodal x<i>/y<i>/z<i> (i >= 1); else None."""
     fixed = by_name()
     if name in fixed:
         return fixed[name]
-    if len(name) >= 2 and name[0] in "xy" and name[1:].isdigit() and name[1] != "0":
+    if len(name) >= 2 and name[0] in "xyz" and name[1:].isdigit() and name[1] != "0":
         return sp.Symbol(name)
     return None

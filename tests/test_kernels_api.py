@@ -239,7 +239,9 @@ def test_generation_is_deterministic_in_process():
 
 def test_every_catalogue_combination_generates():
     combos = committed.catalogue_combos()
-    assert {(e, v) for e, v, _ in combos} == {(e, v) for e, info in catalog.ELEMENTS.items() for v in info.variants}
+    # every 2-D element x variant (the generator is 2-D so far; 3-D kernels are not in the committed set)
+    assert {(e, v) for e, v, _ in combos} == {(e, v) for e, info in catalog.ELEMENTS.items() if info.dim == 2
+                                              for v in info.variants}
     manifest = json.loads((committed.repo_generated_dir() / "manifest.json").read_text())
     have = {(k["element"], k["variant"], k["state"], k["lang"]) for k in manifest["kernels"]}
     for e, v, s, langs in committed.committed_set():

@@ -302,7 +302,7 @@ def test_rule_by_name():
     assert rule(" gauss-4 ").name == "gauss-4x4"
 
 
-@pytest.mark.parametrize("name", ["gauss", "gauss-0", "gauss-11", "gauss-2x", "gauss-2x2x2",
+@pytest.mark.parametrize("name", ["gauss", "gauss-0", "gauss-11", "gauss-2x", "gauss-2x2x2x2",
                                   "triangle-d0", "triangle-d6", "triangle-2", "Gauss-2", "", 3])
 def test_rule_bad_names(name):
     with pytest.raises(InputError, match="allowed forms: 'gauss-<n>', 'gauss-<nx>x<ny>'") as info:

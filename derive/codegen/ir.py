@@ -214,6 +214,9 @@ class Builder:
 
     def __init__(self, info, shapes, variant: str, state: str):
         self.info, self.shapes, self.variant, self.state = info, shapes, variant, state
+        if shapes.dim != 2:
+            raise InputError(f"kernels are generated for 2-D elements only so far; {info.name} is {shapes.dim}-D "
+                             "(use Element.numeric_stiffness for a float64 reference)")
         self.form = catalog.formulation(info, variant, state)
         self.n = shapes.n
         self.ndof = 2 * shapes.n

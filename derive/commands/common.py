@@ -21,7 +21,8 @@ def add_element_args(p: argparse.ArgumentParser, variant: bool = True, state: bo
     if variant:
         p.add_argument("--variant", default="full", help="formulation variant (default: full); see `derive list`")
     if state:
-        p.add_argument("--state", default="plane-stress", help="plane-stress (default), plane-strain, axisymmetric")
+        p.add_argument("--state", default=None, help="kinematic model: plane-stress (default for 2-D elements), "
+                       "plane-strain, axisymmetric; solid (default and only model for 3-D elements)")
 
 
 def add_output_args(p: argparse.ArgumentParser, formats: bool = True) -> None:
@@ -37,14 +38,21 @@ def output_format(args) -> str:
     return getattr(args, "format", "text")
 
 
-def resolve_element(name: str, variant: str = "full", state: str = "plane-stress") -> Element:
-    """Catalogue name, or a path to a spec file (``.toml``)."""
-    if state not in STATES:
+def resolve_element(name: str, variant: str = "full", state: str | None = None) -> Element:
+    """Catalogue name, or a path to a spec file (``.toml``); ``state`` None: the element's default model."""
+    if state is not None and state not in STATES:
         raise InputError(f"unknown state {state!r}; allowed: {', '.join(STATES)}")
     path = Path(name)
     if not name.lower().endswith(".toml") and path.exists() and path.is_file():
         raise InputError(f"{name}: an element spec file must end in .toml")
     return element(name, variant, state)  # catalogue names and spec .toml files alike
+
+
+def default_state(args) -> None:
+    """Fill ``--state`` when it was not given: the element's default model (plane-stress for a
+    2-D element, solid for a 3-D one)."""
+    if getattr(args, "state", "") is None and isinstance(getattr(args, "element", None), str):
+        args.state = catalog.element_info(args.element).default_state
 
 
 def print_json(obj) -> None:

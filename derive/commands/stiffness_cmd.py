@@ -19,16 +19,18 @@ EXAMPLE = ("examples:\n"
            "  derive stiffness Q4 --geometry rectangle --set a=2,b=0.5,E=210e9,nu=0.3,t=0.01\n"
            "  derive stiffness T3 --nodes \"0,0 2,0 0,1\" --set E=1,nu=1/4,t=1 --json\n"
            "  derive stiffness Q8 --geometry parallelogram --state plane-strain --format latex\n"
-           "  derive stiffness Q4 --what B --geometry rectangle")
+           "  derive stiffness Q4 --what B --geometry rectangle\n"
+           "  derive stiffness H8 --state solid --geometry brick --set a=1,b=1,c=1,E=1,nu=0.3")
 
 
 def add_arguments(p) -> None:
     add_element_args(p)
-    p.add_argument("--geometry", default="rectangle", choices=("rectangle", "parallelogram", "general"),
-                   help="rectangle 2a x 2b (default; for triangles the right triangle with legs 2a, 2b, its "
-                        "lower-left half), parallelogram (a, b, skew c; triangles: its lower-left half), "
-                        "general (x1, y1, ...)")
-    p.add_argument("--nodes", help='numeric nodal coordinates "x1,y1 x2,y2 ..." (overrides --geometry)')
+    p.add_argument("--geometry", default=None, choices=GEOMETRIES,
+                   help="2-D: rectangle 2a x 2b (default; for triangles the right triangle with legs 2a, 2b, its "
+                        "lower-left half), parallelogram (a, b, skew c; triangles: its lower-left half); 3-D: "
+                        "brick 2a x 2b x 2c (default), parallelepiped (a, b, c, skew s); general (x1, y1[, z1], ...)")
+    p.add_argument("--nodes", help='numeric nodal coordinates "x1,y1 x2,y2 ..." or "x1,y1,z1 ..." '
+                   "(overrides --geometry)")
     p.add_argument("--rule", default="element",
                    help="element (each term with its own rule, default), exact, or a rule such as gauss-3x3")
     p.add_argument("--what", default="K", choices=("K", "B", "D"), help="matrix to print (default K)")
@@ -37,13 +39,19 @@ def add_arguments(p) -> None:
     add_digits_arg(p)
 
 
+GEOMETRIES = ("rectangle", "parallelogram", "brick", "parallelepiped", "segment", "general")
+
+
 def parse_nodes(text: str) -> list[list[sp.Rational]]:
+    """Nodes "x,y x,y ..." (2-D) or "x,y,z ..." (3-D): every node with the same number of coordinates."""
     rows = []
     for k, item in enumerate(text.split(), start=1):
         parts = item.split(",")
-        if len(parts) != 2:
-            raise InputError(f"--nodes: node {k} ({item!r}) must be x,y with no spaces inside, e.g. \"0,0 2,0 0,1\"")
-        rows.append([parse_number(parts[0], f"--nodes node {k} x"), parse_number(parts[1], f"--nodes node {k} y")])
+        count = len(rows[0]) if rows else None
+        if len(parts) not in (2, 3) or (count is not None and len(parts) != count):
+            want = {2: "x,y", 3: "x,y,z"}.get(count, "x,y (2-D) or x,y,z (3-D)")
+            raise InputError(f"--nodes: node {k} ({item!r}) must be {want} with no spaces inside, e.g. \"0,0 2,0 0,1\"")
+        rows.append([parse_number(v, f"--nodes node {k} {axis}") for v, axis in zip(parts, "xyz")])
     if not rows:
         raise InputError("--nodes is empty; give \"x1,y1 x2,y2 ...\"")
     return rows
@@ -71,17 +79,17 @@ def run(args) -> int:
     check_unknown(values, M.free_symbols | {E, nu, t}, f"{label} of {el.name}")
     if rest:
         M = M.subs(rest)
-    numeric = not (M.free_symbols - {sp.Symbol("xi"), sp.Symbol("eta")}) and args.what != "B"
+    numeric = not (M.free_symbols - {sp.Symbol("xi"), sp.Symbol("eta"), sp.Symbol("zeta")}) and args.what != "B"
     fmt = output_format(args)
     digits = check_digits(args.digits)
-    kind = "nodes" if args.nodes is not None else args.geometry
+    kind = "nodes" if args.nodes is not None else (args.geometry or el.map().geometry.kind)
     geometry_text = describe_geometry(kind, el.shapes.domain, el.state == "axisymmetric")
     notes = matrix_notes(label, el.state, M.rows, M.cols)
     header = {"element": el.name, "variant": el.variant, "state": el.state,
               "geometry": kind, "geometry_description": geometry_text, "rule": args.rule, "matrix": label,
               "shape": [M.rows, M.cols], "layout": notes}
     if label != "D":
-        header["dof_order"] = "interleaved u1, v1, u2, v2, ..."
+        header["dof_order"] = "interleaved " + ", ".join(el.model.dof_names(2)) + ", ..."
     title = f"{label} of {el.name} ({el.variant}, {el.state})" + (
         "" if label == "D" else f", geometry: {geometry_text}" + (f", rule {args.rule}" if label == "K" else ""))
     if numeric:

@@ -7,7 +7,7 @@ one static condensation:
     K = K_uu - K_ua K_aa^-1 K_ua^T            (just K_uu when there are no internal unknowns)
 
 where L, M, R are matrices evaluated at a point of the element (a :class:`Point`), thick
-is t in the plane states and 2 pi r in the axisymmetric state, and each term names the
+is the kinematic model's measure (t in the plane states, 2 pi r axisymmetric, 1 in 3-D), and each term names the
 quadrature rule it is integrated with ("full", "reduced", or an explicit rule name).
 This covers plain displacement elements (one term), selective integration (two terms,
 two rules), incompatible modes and enhanced strains (condensed internal strain
@@ -25,91 +25,114 @@ from typing import Callable
 
 import sympy as sp
 
-from .. import kinematics, material
-from ..geometry import IsoMap
+from .. import models, reference
+from ..geometry import IsoMap, adjugate, determinant
 from ..symbols import E as E_sym
-from ..symbols import eta, nu as nu_sym, t as t_sym, xi
+from ..symbols import nu as nu_sym, t as t_sym
 
 BLOCKS = ("uu", "ua", "aa")
 
 
 class Point:
-    """Everything a term may need at one point (xi_p, eta_p) of one element.
+    """Everything a term may need at one point of one element, in any dimension.
 
-    The point may be symbolic (``xi``, ``eta``: used for exact integration on affine
-    geometry) or an exact number from a rule.  Physical derivatives are formed as
-    adj(J) [dN/dxi, dN/deta] / det J without simplification.
+    ``Point(imap, state, *coordinates, E=, nu=, t=, D=)``: as many coordinates as the element's
+    reference domain has (they may be followed by E, nu, t positionally).  The point may be
+    symbolic (the reference coordinates themselves: used for exact integration on affine
+    geometry) or exact numbers from a rule.  Physical derivatives are formed as
+    adj(J) [dN/dxi, dN/deta, dN/dzeta] / det J without simplification.  ``D`` replaces the
+    model's isotropic D(E, nu) (an anisotropic material, :func:`derive.material.orthotropic`).
     """
 
-    def __init__(self, imap: IsoMap, state: str, p, q, E=E_sym, nu=nu_sym, t=t_sym):
+    def __init__(self, imap: IsoMap, state: str, *args, E=E_sym, nu=nu_sym, t=t_sym, D=None):
+        dim = imap.shapes.dim
+        if len(args) < dim:
+            raise TypeError(f"Point needs {dim} reference coordinates, got {len(args)}")
+        point, rest = tuple(args[:dim]), args[dim:]
+        if len(rest) > 3:
+            raise TypeError("Point takes at most E, nu, t after the coordinates")
+        E, nu, t = (tuple(rest) + (E, nu, t)[len(rest):])
         self.imap = imap
         self.shapes = imap.shapes
         self.state = state
-        self.p, self.q = p, q
+        self.model = models.get(state)
+        self.coords = imap.shapes.coords
+        self.point = point
+        self.p = point[0]
+        self.q = point[1] if dim > 1 else None
         self.E, self.nu, self.t = E, nu, t
-        self._sub = {xi: p, eta: q}
+        self.D_given = D
+        self._sub = dict(zip(self.coords, point))
+        self._coordset = set(self.coords)
+
+    @property
+    def dim(self) -> int:
+        return len(self.coords)
 
     def at(self, expr):
         """Evaluate a reference-space expression at this point."""
         if isinstance(expr, sp.MatrixBase):
-            return expr.subs(self._sub) if expr.free_symbols & {xi, eta} else expr
-        return expr.subs(self._sub) if getattr(expr, "free_symbols", None) and expr.free_symbols & {xi, eta} else expr
+            return expr.subs(self._sub) if expr.free_symbols & self._coordset else expr
+        return expr.subs(self._sub) if getattr(expr, "free_symbols", None) and expr.free_symbols & self._coordset else expr
 
     @cached_property
     def N(self) -> tuple:
         return tuple(self.at(f) for f in self.shapes.functions)
 
     @cached_property
-    def dN_ref(self) -> tuple[tuple, tuple]:
-        dxi, deta = self.shapes.derivatives
-        return tuple(self.at(f) for f in dxi), tuple(self.at(f) for f in deta)
+    def dN_ref(self) -> tuple[tuple, ...]:
+        return tuple(tuple(self.at(f) for f in d) for d in self.shapes.derivatives)
+
+    @property
+    def symbolic(self) -> bool:
+        """True at the symbolic point (the reference coordinates themselves)."""
+        return self.point == self.coords
 
     @cached_property
     def J(self) -> sp.Matrix:
-        return self.imap.jacobian_at(self.p, self.q) if (self.p, self.q) != (xi, eta) else self.imap.jacobian
+        return self.imap.jacobian if self.symbolic else self.imap.jacobian_at(*self.point)
 
     @cached_property
     def detJ(self) -> sp.Expr:
-        J = self.J
-        return sp.expand(J[0, 0] * J[1, 1] - J[0, 1] * J[1, 0])
+        return sp.expand(determinant(self.J))
 
     @cached_property
     def adjJ(self) -> sp.Matrix:
-        J = self.J
-        return sp.Matrix([[J[1, 1], -J[0, 1]], [-J[1, 0], J[0, 0]]])
+        return adjugate(self.J)
 
-    def physical(self, dxi_vals, deta_vals) -> tuple[tuple, tuple]:
-        """Map reference derivatives to physical ones: [d/dx, d/dy] = J^-1 [d/dxi, d/deta]."""
-        A, d = self.adjJ, self.detJ
-        dx = tuple(sp.expand(A[0, 0] * u + A[0, 1] * v) / d for u, v in zip(dxi_vals, deta_vals))
-        dy = tuple(sp.expand(A[1, 0] * u + A[1, 1] * v) / d for u, v in zip(dxi_vals, deta_vals))
-        return dx, dy
+    def physical(self, *ref_vals) -> tuple[tuple, ...]:
+        """Map reference derivatives to physical ones: [d/dx, d/dy, d/dz] = J^-1 [d/dxi, d/deta, d/dzeta]
+        (one sequence of values per reference coordinate in, one per physical axis out)."""
+        return physical_derivatives(self.adjJ, self.detJ, ref_vals)
 
     @cached_property
-    def dN(self) -> tuple[tuple, tuple]:
+    def dN(self) -> tuple[tuple, ...]:
         return self.physical(*self.dN_ref)
 
     @cached_property
     def radius(self) -> sp.Expr:
         return self.at(self.imap.x)
 
+    def strain_matrix(self, N, dN) -> sp.Matrix:
+        """B of the model for any interpolated field (shape functions, bubble modes, ...)."""
+        return self.model.B(N, dN, self.radius if self.model.needs_radius else None)
+
     @cached_property
     def B(self) -> sp.Matrix:
         """The standard displacement B matrix at this point."""
-        dx, dy = self.dN
-        return kinematics.B_matrix(self.state, self.N, dx, dy, self.radius if self.state == "axisymmetric" else None)
+        return self.strain_matrix(self.N, self.dN)
 
     @cached_property
     def thick(self) -> sp.Expr:
-        return 2 * sp.pi * self.radius if self.state == "axisymmetric" else self.t
+        return self.model.thickness(self.t, self.radius if self.model.measure == "2 pi r" else None)
 
     @cached_property
     def D(self) -> sp.Matrix:
-        return material.D(self.state, self.E, self.nu)
+        return self.model.D(self.E, self.nu) if self.D_given is None else self.D_given
 
     @cached_property
     def centre(self) -> tuple:
-        return (sp.Integer(0), sp.Integer(0)) if self.shapes.domain == "square" else (sp.Rational(1, 3), sp.Rational(1, 3))
+        return reference.centre(self.shapes.domain)
 
     @cached_property
     def J0(self) -> sp.Matrix:
@@ -117,8 +140,21 @@ class Point:
 
     @cached_property
     def detJ0(self) -> sp.Expr:
-        J = self.J0
-        return sp.expand(J[0, 0] * J[1, 1] - J[0, 1] * J[1, 0])
+        return sp.expand(determinant(self.J0))
+
+
+def physical_derivatives(adj: sp.Matrix, det, ref_vals) -> tuple[tuple, ...]:
+    """[d/dx_k]_i = sum_a adj[k, a] ref_vals[a][i] / det, expanded numerators (any dimension)."""
+    out = []
+    for k in range(adj.rows):
+        row = []
+        for vals in zip(*ref_vals):
+            num = adj[k, 0] * vals[0]
+            for a in range(1, len(vals)):
+                num = num + adj[k, a] * vals[a]
+            row.append(sp.expand(num) / det)
+        out.append(tuple(row))
+    return tuple(out)
 
 
 Operator = Callable[[Point], sp.Matrix]

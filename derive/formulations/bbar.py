@@ -15,7 +15,7 @@ The same matrix is the condensation of the pressure parameters (internal unknown
 
 which is how it is stated here, so it reaches the exact, point, numeric and kernel routes
 like any other formulation.  Pressure spaces: constant for Q4 (the mean-dilatation element of
-Nagtegaal, Parks & Rice, 1974), linear {1, xi, eta} for Q8, Q9 and T6 (the 3-parameter
+Nagtegaal, Parks & Rice, 1974; likewise H8, T4), linear {1, xi, eta[, zeta]} for Q8, Q9, T6 (and H20, H27, T10) (the 3-parameter
 pressure of the quadratic mixed elements; with a constant pressure those elements keep two
 purely dilatational zero-energy modes, u = (x^2 - y^2, 2xy) and (-2xy, x^2 - y^2), and are too
 flexible in bending by 2(1 + nu)).  All integrals use the element's full rule.  kappa per
@@ -23,7 +23,7 @@ state: lambda + 2 mu / 3 (plane strain, axisymmetric), lambda* + 2 mu / 3 with
 lambda* = E nu / (1 - nu^2) (plane stress).
 
 The strain the element works with is eps_bar = (I - m m^T / n) B u + m pi alpha / (n kappa),
-n = m^T m (2 in the plane states, 3 axisymmetric), alpha the pressure parameters.
+n = m^T m (2 in the plane states, 3 axisymmetric and solid), alpha the pressure parameters.
 
 Axisymmetric: Q4 only.
 
@@ -48,14 +48,24 @@ def one_op(p) -> sp.Matrix:
     return sp.Matrix([[1]])
 
 
+def _linear_element(info) -> bool:
+    """True when no reference coordinate appears squared in the shape basis (T3, Q4, T4, H8, W6)."""
+    from .. import reference
+    coords = reference.coordinates(info.domain)
+    return all(sp.degree(sp.sympify(m), s) <= 1 for m in info.basis for s in coords)
+
+
 def pressure_basis(info) -> tuple[str, ...]:
     """The pressure space the dilatation is projected onto: constant for the linear elements
     (mean dilatation), linear in the reference coordinates for the quadratic ones."""
-    return ("1",) if info.n_nodes <= 4 else ("1", "xi", "eta")
+    from .. import reference
+    if _linear_element(info):
+        return ("1",)
+    return ("1",) + tuple(s.name for s in reference.coordinates(info.domain))
 
 
 def linear_pressure_op(p) -> sp.Matrix:
-    return sp.Matrix([[1, p.p, p.q]])
+    return sp.Matrix([[1, *p.point]])
 
 
 def minus_compliance_op(p) -> sp.Matrix:
@@ -79,8 +89,8 @@ def bbar(info, state: str) -> Formulation:
         raise InputError(f"variant 'bbar' of {info.name} is offered in the plane states only (the axisymmetric "
                          "quadratic elements are not verified with a projected pressure here)")
     pi_op = linear_pressure_op if linear else one_op
-    npress = 3 if linear else 1
-    what = "linear pressure {1, xi, eta}" if linear else "constant pressure (mean dilatation)"
+    npress = len(pressure_basis(info))
+    what = f"linear pressure {{{', '.join(pressure_basis(info))}}}" if linear else "constant pressure (mean dilatation)"
     return Formulation(
         variant="bbar",
         terms=(Term("uu", B_op, D_dev_op, B_op, rule="full", symmetric=True, label="B^T D_dev B"),

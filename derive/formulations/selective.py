@@ -26,6 +26,11 @@ integration of the volumetric part removes volumetric locking (nu -> 1/2 in plan
 and axisymmetric) but not the shear locking of Q4 in bending, whose spurious shear strain
 lives in the deviatoric part.
 
+Solid T10: the one-point volumetric rule leaves the three special conformal fields
+u = 2 (g.x) x - |x|^2 g (x from the centroid; zero deviatoric strain, dilatation 6 g.x, zero at
+the centroid) without stiffness: 9 zero-energy modes (6 rigid).  Prefer ``bbar`` (linear
+pressure) for T10.  H8, H20 and H27 keep exactly the 6 rigid-body modes.
+
 Axisymmetric T6 is refused: its one-point volumetric rule leaves the purely dilatational
 field u_r = r (z - z_c), u_z = (z^2 - r^2)/2 - z_c z (dilatation 3 (z - z_c), zero at the
 centroid) without stiffness.
