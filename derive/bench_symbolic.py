@@ -78,7 +78,7 @@ def benchmark(quick: bool = False) -> dict:
         K = _fresh(name).stiffness(None, rule="exact")
         fast, cpu = time.perf_counter() - t0, time.process_time() - c0
         n = K.rows
-        sample = [(0, 0), (0, 1), (0, 4), (1, 7)] if quick else [(0, 0), (0, 1), (0, 4), (1, 7), (2, 5), (3, 9)]
+        sample = [(0, 0)] if quick else [(0, 0), (0, 1), (0, 4), (1, 7), (2, 5), (3, 9)]
         t0 = time.perf_counter()
         Kn = naive_stiffness(name, sample)
         per_entry = (time.perf_counter() - t0) / len(sample)
