@@ -103,12 +103,12 @@ for _v in (
     VariantInfo("reduced", "uniformly reduced integration", "displacement:reduced"),
     VariantInfo("selective", "reduced rule for the volumetric part of D only (all states; T6 plane states; T10 keeps 3 conformal zero modes)", "selective:selective",
                 "Doherty, Wilson & Taylor (1969); Hughes (1987)"),
-    VariantInfo("incompatible", "bubble modes 1-xi^2, 1-eta^2, own Jacobian; fails the patch test off "
+    VariantInfo("incompatible", "bubble modes 1-xi^2, 1-eta^2 (H8: and 1-zeta^2, nine modes), own Jacobian; fails the patch test off "
                 "parallelograms (all states)", "incompatible:incompatible", "Wilson, Taylor, Doherty & Ghaboussi (1973)"),
     VariantInfo("incompatible-centred", "bubble modes through the centre Jacobian, scaled det J0/det J; passes "
                 "the patch test (plane states, solid)", "incompatible:incompatible_centred", "Taylor, Beresford & Wilson (1976)",
                 ("plane-stress", "plane-strain", "solid")),
-    VariantInfo("bbar", "B-bar: dilatation projected on a constant (Q4) or linear (Q8, Q9, T6) pressure, condensed (plane states; axisymmetric Q4)", "bbar:bbar",
+    VariantInfo("bbar", "B-bar: dilatation projected on a constant (Q4, H8) or linear (Q8, Q9, T6, H20, H27, T10) pressure, condensed (plane states, solid; axisymmetric Q4)", "bbar:bbar",
                 "Hughes (1980)"),
     VariantInfo("eas4", "enhanced assumed strain, 4 modes (plane states)", "eas:eas4", "Simo & Rifai (1990)",
                 ("plane-stress", "plane-strain")),
