@@ -544,18 +544,17 @@ def numeric_stiffness(name: str, variant: str, state: str, xy, E: float, nu: flo
     from .geometry import check_coordinates
     from .material import check_material
     check_material(state, E, nu, t)
-    xy = check_coordinates(xy, axisymmetric=state == "axisymmetric")
+    shapes = catalog_shape_set(name)
+    nn, dim = shapes.n, shapes.dim
+    xy = check_coordinates(xy, axisymmetric=state == "axisymmetric", dim=dim)
     single = xy.ndim == 2
     if single:
         xy = xy[None]
     ndof, n_int, plan = _numeric_plan((name, variant, state))
-    if xy.shape[1] * 2 != ndof:
-        raise InputError(f"element {name} needs {ndof // 2} nodes per element, as an ({ndof // 2}, 2) or "
-                         f"(n, {ndof // 2}, 2) array; got shape {xy.shape[1:] if single else xy.shape}")
+    if xy.shape[1] != nn:
+        raise InputError(f"element {name} needs {nn} nodes per element, as an ({nn}, {dim}) or "
+                         f"(n, {nn}, {dim}) array; got shape {xy.shape[1:] if single else xy.shape}")
     n = xy.shape[0]
-    shapes = catalog_shape_set(name)
-    if xy.shape[1:] != (shapes.n, shapes.dim):
-        raise InputError(f"element {name} needs nodes as ({shapes.n}, {shapes.dim}) arrays; got shape {xy.shape}")
     args = [xy[:, i, k] for k in range(xy.shape[2]) for i in range(xy.shape[1])] + [E, nu, t]
     blocks: dict[str, np.ndarray] = {}
     # a degenerate element divides by det J = 0: no RuntimeWarning, it is refused below by index
