@@ -352,13 +352,7 @@ MAX_DIGITS = 17
 
 def check_digits(n) -> int:
     """``--digits``: a whole number 1..17 (17 digits round-trip every float64)."""
-    try:
-        v = int(str(n).strip())
-    except ValueError:
-        raise InputError(f"--digits {n!r}: give a whole number of significant digits, 1 to {MAX_DIGITS}") from None
-    if not 1 <= v <= MAX_DIGITS:
-        raise InputError(f"--digits must be between 1 and {MAX_DIGITS}; got {v}")
-    return v
+    return limits.parse_whole(n, "--digits", 1, MAX_DIGITS)
 
 
 _DIGITS: contextvars.ContextVar[int | None] = contextvars.ContextVar("derive_digits", default=None)

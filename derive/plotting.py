@@ -51,6 +51,9 @@ def plot_format(path, what: str = "plot file") -> str:
 def check_dpi(dpi) -> int:
     """A resolution in dots per inch within :data:`DPI_RANGE`; InputError otherwise."""
     lo, hi = DPI_RANGE
+    if isinstance(dpi, str):
+        from .limits import parse_whole
+        return parse_whole(dpi, "--dpi", lo, hi)
     try:
         value = float(dpi)
     except (TypeError, ValueError):

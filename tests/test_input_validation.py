@@ -8,6 +8,7 @@ stderr; the sweep calls ``derive.cli.main`` in-process to stay fast.
 """
 from __future__ import annotations
 
+import os
 import subprocess
 import sys
 import warnings
@@ -419,6 +420,10 @@ def _sweep_cases(tmp, inputs):
         (["bench", "locking-mesh", "--accuracy", "{v}"], NEGATIVE + ["3"]),
         (["bench", "membrane", "--mesh", "2", "--vtu", str(tmp / "m.vtu"), "--scale", "{v}"], []),
         (["kernel", "--check", "--jobs", "{v}"], NEGATIVE),
+        (["bench", "membrane", "--mesh", "2", "--memory-limit", "{v}"], NEGATIVE),
+        (["bench", "membrane", "--mesh", "2", "--digits", "{v}"], NEGATIVE + ["18"]),
+        (["stiffness", "Q4", "--set", "a=1,b=1,E=1,nu=0.3,t=1", "--digits", "{v}"], NEGATIVE + ["18"]),
+        (["modes", "Q4", "--dpi", "{v}"], NEGATIVE + ["1_00"]),
         (["check", str(kfile), "--element", "Q4", "--nodes", SQUARE_TEXT, "--set", "E={v}"], NEGATIVE),
         (["check", str(kfile), "--element", "Q4", "--nodes", SQUARE_TEXT, "--tolerance", "{v}"], NEGATIVE),
     ]
@@ -445,3 +450,82 @@ def test_sweep_every_numeric_option(capsys, tmp_path, tmp_path_factory):
                 failures.append((argv[:4] + ["..."] if len(" ".join(argv)) > 120 else argv, code, err[:200]))
     assert not failures, "\n".join(map(str, failures))
     assert not list(tmp_path.iterdir())  # nothing written for refused input
+
+
+# ---------------------------------------------------------------------------------------------
+# paths: a folder where a file is expected, and every PermissionError, are one line and exit 2
+
+def test_folder_as_spec_table_vtu(capsys, tmp_path):
+    folder = tmp_path / "adir.toml"
+    folder.mkdir()
+    assert_refused(*cli(capsys, "stiffness", str(folder))[::2], "is a folder")
+    assert_refused(*cli(capsys, "shapes", str(folder))[::2], "is a folder")
+    for opt in ("--table", "--vtu"):
+        assert_refused(*cli(capsys, "bench", "membrane", "--mesh", "2", opt, str(tmp_path))[::2], "folder")
+    assert_refused(*cli(capsys, "modes", "Q4", "--mesh-file", str(tmp_path))[::2])
+
+
+def test_unreadable_spec_is_one_line(capsys, monkeypatch):
+    # the process may run as root (chmod cannot make a file unreadable then): raise the
+    # PermissionError the operating system would give
+    import builtins
+
+    import derive.spec as spec
+    real_open = builtins.open
+
+    def denied(path, *args, **kwargs):
+        if str(path).endswith("locked.toml"):
+            raise PermissionError(13, "Permission denied", str(path))
+        return real_open(path, *args, **kwargs)
+    monkeypatch.setattr(spec, "open", denied, raising=False)
+    assert_refused(*cli(capsys, "stiffness", "/tmp/locked.toml")[::2], "locked.toml", "ermission denied")
+
+
+@pytest.mark.parametrize("argv", [
+    ["bench", "membrane", "--mesh", "2", "--table", "{dir}/t.md"],
+    ["bench", "membrane", "--mesh", "2", "--vtu", "{dir}/m.vtu"],
+    ["chart", "locking", "-o", "{dir}/c.png"],
+    ["modes", "Q4", "--variant", "reduced", "--plot", "{dir}/m.png"],
+])
+def test_unwritable_folder_is_one_line(capsys, monkeypatch, tmp_path, argv):
+    # a read-only folder, as the OS reports it to an unprivileged user (see above)
+    import tempfile
+
+    def denied(*args, **kwargs):
+        raise PermissionError(13, "Permission denied", kwargs.get("dir"))
+    monkeypatch.setattr(tempfile, "mkstemp", denied)
+    code, _, err = cli(capsys, *[a.replace("{dir}", str(tmp_path)) for a in argv])
+    assert_refused(code, err, "ermission denied")
+    assert not list(tmp_path.iterdir())
+
+
+@pytest.mark.skipif(not hasattr(os, "geteuid") or os.geteuid() == 0, reason="root can write a read-only folder")
+def test_read_only_folder_for_real(tmp_path):
+    ro = tmp_path / "ro"
+    ro.mkdir()
+    ro.chmod(0o555)
+    try:
+        res = subprocess_cli("bench", "membrane", "--mesh", "2", "--table", str(ro / "t.md"))
+        assert_refused(res.returncode, res.stderr)
+    finally:
+        ro.chmod(0o755)
+
+
+def test_unusable_kernel_cache_falls_back_to_numpy(tmp_path):
+    # a cache folder that cannot be created (its parent is a file): the library warns and uses the
+    # NumPy kernel, whose K equals the textbook routine of tests/fem_reference.py
+    blocker = tmp_path / "file"
+    blocker.write_text("x", encoding="utf-8")
+    code = ("import warnings, numpy as np, derive, sys; sys.path.insert(0, 'tests'); import fem_reference as ref\n"
+            "with warnings.catch_warnings(record=True) as w:\n"
+            "    warnings.simplefilter('always')\n"
+            "    k = derive.kernel('Q4', lang='c')\n"
+            "xy = np.array([[[0, 0], [2, 0], [2.2, 1], [0, 1.1]]], float)\n"
+            "K = k(xy, 1.0, 0.3, 1.0)[0]\n"
+            "Kr = ref.stiffness('Q4', xy[0], 1.0, 0.3, 1.0)\n"
+            "np.testing.assert_allclose(K, Kr, rtol=1e-12, atol=1e-12)\n"
+            "print(k.lang, any('cache' in str(x.message) for x in w))\n")
+    env = dict(os.environ, DERIVE_CACHE_DIR=str(blocker / "sub"))
+    res = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True, timeout=300, env=env)
+    assert res.returncode == 0, res.stderr
+    assert res.stdout.split() == ["numpy", "True"]

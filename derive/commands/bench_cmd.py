@@ -76,7 +76,7 @@ def _floats(text, what):
 
 
 def run(args) -> int:
-    with digits_override(check_digits(args.digits) if args.digits else None):   # the report lines honour --digits
+    with digits_override(check_digits(args.digits) if args.digits is not None else None):   # the report lines honour --digits
         return _run(args)
 
 

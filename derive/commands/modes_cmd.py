@@ -61,7 +61,7 @@ def run(args) -> int:
     if output_format(args) == "json":
         print_json({**res, "caution": CAUTION})
         return 0
-    with digits_override(check_digits(args.digits) if args.digits else None):
+    with digits_override(check_digits(args.digits) if args.digits is not None else None):
         lines = summary_lines(res)
     for line in lines:
         print(line)

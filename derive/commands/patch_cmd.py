@@ -43,7 +43,7 @@ def run(args) -> int:
     if output_format(args) == "json":
         print_json({**res, "caution": CAUTION})
     else:
-        with digits_override(check_digits(args.digits) if args.digits else None):
+        with digits_override(check_digits(args.digits) if args.digits is not None else None):
             lines = summary_lines(res)
         for line in lines:
             print(line)
