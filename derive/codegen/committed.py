@@ -23,7 +23,7 @@ from pathlib import Path
 from .. import catalog
 from ..errors import InputError
 from ..material import STATES
-from . import GENERATOR_VERSION
+from .version import GENERATOR_VERSION
 from . import owned as owned_mod
 from .emit import generate
 

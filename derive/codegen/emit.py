@@ -15,7 +15,7 @@ from functools import lru_cache
 import jinja2
 
 from .. import catalog, quadrature
-from . import GENERATOR_VERSION
+from .version import GENERATOR_VERSION
 from .ir import KernelIR, build
 from .lower import Lowered, lower
 from .printers import c_expr, f_expr, float_literal, py_expr, wrap_c, wrap_fortran
