@@ -33,6 +33,7 @@ import sympy as sp
 
 from .catalog import ElementInfo
 from .errors import SpecError
+from .files import regular_file_size
 from .shapes import ShapeSet, from_nodes, monomials
 
 if sys.version_info >= (3, 11):
@@ -128,6 +129,7 @@ def load_spec(path) -> tuple[ElementInfo, ShapeSet]:
 
 def _read(path: Path, where: str) -> dict:
     """The parsed TOML of a spec file of bounded size; every failure a one-line SpecError."""
+    regular_file_size(path, "spec file", "an element spec .toml file", SpecError)
     try:
         with open(path, "rb") as fh:
             raw = fh.read(MAX_FILE_BYTES + 1)

@@ -465,7 +465,7 @@ def test_folder_as_spec_table_vtu(capsys, tmp_path):
     assert_refused(*cli(capsys, "modes", "Q4", "--mesh-file", str(tmp_path))[::2])
 
 
-def test_unreadable_spec_is_one_line(capsys, monkeypatch):
+def test_unreadable_spec_is_one_line(capsys, monkeypatch, tmp_path):
     # the process may run as root (chmod cannot make a file unreadable then): raise the
     # PermissionError the operating system would give
     import builtins
@@ -477,8 +477,10 @@ def test_unreadable_spec_is_one_line(capsys, monkeypatch):
         if str(path).endswith("locked.toml"):
             raise PermissionError(13, "Permission denied", str(path))
         return real_open(path, *args, **kwargs)
+    locked = tmp_path / "locked.toml"   # a real regular file: only opening it is denied
+    locked.write_text("name = 'X'\n")
     monkeypatch.setattr(spec, "open", denied, raising=False)
-    assert_refused(*cli(capsys, "stiffness", "/tmp/locked.toml")[::2], "locked.toml", "ermission denied")
+    assert_refused(*cli(capsys, "stiffness", str(locked))[::2], "locked.toml", "ermission denied")
 
 
 @pytest.mark.parametrize("argv", [

@@ -21,7 +21,7 @@ def one_line_exit_2(path, capsys) -> str:
 
 def test_directory(tmp_path, capsys):
     err = one_line_exit_2(tmp_path, capsys)
-    assert "is a directory" in err and "not found" not in err  # common practice, no source
+    assert "is a folder" in err and "not found" not in err  # common practice, no source
 
 
 @pytest.mark.skipif(not hasattr(os, "mkfifo"), reason="no FIFOs on this platform")
@@ -60,5 +60,5 @@ def test_unreadable_file(tmp_path, capsys, monkeypatch):
 
 
 def test_library_raises_input_error_for_a_directory(tmp_path):
-    with pytest.raises(InputError, match="is a directory"):
+    with pytest.raises(InputError, match="is a folder"):
         load_matrix_file(tmp_path)

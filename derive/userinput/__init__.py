@@ -111,7 +111,7 @@ Files (``load_matrix_file``): ``.npy`` (``allow_pickle=False``; 2-D integer/floa
 entries are sympy Integer/Float and ``array`` keeps the values), ``.csv`` (comma-separated
 form 1; numbers are exact rationals), ``.tex`` (LaTeX), anything else auto-detected.  Text
 with numbers only has ``syntax == "numeric"`` and a float64 ``array``.  Missing, empty,
-binary or non-UTF-8 files raise InputError, and so do a path that is a directory, FIFO,
+binary or non-UTF-8 files raise InputError, and so do a path that is a folder, FIFO,
 device or socket (said as such; never opened) and an unreadable file.
 
 Limits (constants in :mod:`derive.userinput._core`, checked before heavy work)

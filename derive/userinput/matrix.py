@@ -3,7 +3,6 @@ from __future__ import annotations
 
 import os
 import re
-import stat
 from dataclasses import dataclass
 from pathlib import Path
 from typing import Iterable
@@ -12,6 +11,7 @@ import numpy as np
 import sympy as sp
 
 from ..errors import InputError, ParseError
+from ..files import regular_file_size
 from . import latex, mathexpr
 from ._core import (FUNCTIONS, MAX_EXPRESSION_CHARS, MAX_FILE_BYTES, MAX_MATRIX_DIM,
                     MAX_NPY_BYTES, MAX_TEXT_CHARS, MAX_TOKENS, MAX_TOTAL_TOKENS, Builder, Token,
@@ -505,35 +505,11 @@ def _load_npy(path: Path, size: int) -> MatrixInput:
                        array=np.asarray(arr, dtype=float))
 
 
-_NOT_REGULAR = ((stat.S_ISDIR, "a directory"), (stat.S_ISFIFO, "a FIFO (named pipe)"),
-                (stat.S_ISCHR, "a character device"), (stat.S_ISBLK, "a block device"),
-                (stat.S_ISSOCK, "a socket"))
-
-
-def _regular_file_size(p: Path) -> int:
-    """Size of the regular file ``p``; an InputError saying what ``p`` is otherwise (never
-    opens it: reading a FIFO or a device could block or never end)."""
-    try:
-        st = p.stat()
-    except FileNotFoundError:
-        raise InputError(f"matrix file not found: {p}") from None
-    except PermissionError:
-        raise InputError(f"{p}: permission denied: a folder on the path is not accessible") from None
-    except OSError as exc:
-        raise InputError(f"{p}: cannot access the matrix file ({exc.strerror or type(exc).__name__})") from None
-    for test, what in _NOT_REGULAR:
-        if test(st.st_mode):
-            raise InputError(f"{p} is {what}, not a matrix file; give a text, .csv, .tex or .npy file")
-    if not stat.S_ISREG(st.st_mode):
-        raise InputError(f"{p} is not a regular file; give a text, .csv, .tex or .npy file")
-    return st.st_size
-
-
 @guarded
 def load_matrix_file(path, *, extra_symbols: Iterable[str] = ()) -> MatrixInput:
     """Load a matrix from ``.npy``, ``.csv``, ``.tex`` or a text file (syntax auto-detected)."""
     p = Path(os.fspath(path))
-    size = _regular_file_size(p)
+    size = regular_file_size(p, "matrix file", "a text, .csv, .tex or .npy file")
     if size == 0:
         raise InputError(f"matrix file is empty: {p}")
     try:
